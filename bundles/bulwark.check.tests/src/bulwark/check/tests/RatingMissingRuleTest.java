@@ -1,0 +1,39 @@
+package bulwark.check.tests;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import org.junit.jupiter.api.Test;
+
+import bulwark.check.DesignResult;
+import bulwark.check.Severity;
+import bulwark.check.Status;
+import bulwark.check.rules.RatingMissingRule;
+
+class RatingMissingRuleTest {
+	private static final String ID = RatingMissingRule.ID;
+
+	private static final String MISSING = """
+			design "unrated"
+			reference net gnd
+			net a
+			source V1 (plus: a, minus: gnd) { voltage 5 V }
+			resistor R1 (a: a, b: gnd) { value 1 kΩ } #! rating-missing
+			resistor R2 (a: a, b: gnd) { value 1 kΩ rated power 250 mW }
+			""";
+
+	@Test
+	void triggersOnResistorWithoutPowerRating() {
+		DesignResult r = Fixtures.check(MISSING);
+		assertEquals(Fixtures.expected(MISSING, ID), Fixtures.actual(r, ID));
+		assertEquals(Severity.WARNING, Fixtures.only(r, ID).severity());
+		assertEquals(Status.PASS, r.status()); // a warning does not fail the design
+	}
+
+	@Test
+	void silentWhenRated() {
+		String rated = MISSING.replace("{ value 1 kΩ } #! rating-missing", "{ value 1 kΩ rated power 100 mW }");
+		DesignResult r = Fixtures.check(rated);
+		assertEquals(Fixtures.expected(rated, ID), Fixtures.actual(r, ID));
+		assertEquals(0, Fixtures.actual(r, ID).size());
+	}
+}

@@ -1,0 +1,121 @@
+package bulwark.check;
+
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+
+import org.eclipse.xtext.util.CancelIndicator;
+import org.eclipse.xtext.validation.Issue;
+
+import bulwark.check.compile.CaseGenerator;
+import bulwark.check.compile.CompiledDesign;
+import bulwark.check.compile.DesignCompiler;
+import bulwark.check.compile.FaultCase;
+import bulwark.check.load.DesignLoader;
+import bulwark.check.load.LoadedDesign;
+import bulwark.check.rules.CheckContext;
+import bulwark.check.rules.Rule;
+import bulwark.check.rules.RuleRegistry;
+import bulwark.check.rules.SolvedCase;
+import bulwark.engine.dc.DcResult;
+import bulwark.engine.dc.DcSolution;
+import bulwark.engine.dc.DcSolver;
+import bulwark.engine.dc.SolveFailure;
+import bulwark.lang.design.Design;
+import bulwark.lang.design.DesignPackage;
+import bulwark.lang.design.Member;
+
+/**
+ * The whole check of one design: language issues first; if the text is sound, every case is solved and
+ * every rule runs. A design that cannot be checked ends with status error and a finding saying why.
+ */
+public final class DesignChecker {
+	private final DesignLoader loader;
+
+	public DesignChecker(DesignLoader loader) {
+		this.loader = loader;
+	}
+
+	public DesignResult check(Path file) {
+		String text;
+		try {
+			text = Files.readString(file, StandardCharsets.UTF_8);
+		} catch (Exception e) {
+			return new DesignResult(file.toString(), null, Status.ERROR,
+					List.of(Finding.plain("file", Concern.STRUCTURE, Severity.ERROR,
+							"cannot read the file: " + e.getClass().getSimpleName() + ": " + e.getMessage(), null,
+							SourceLocation.NONE)),
+					List.of());
+		}
+		return check(text, file.toString(), CancelIndicator.NullImpl);
+	}
+
+	public DesignResult check(String text, String file, CancelIndicator cancel) {
+		return check(loader.load(text, file, cancel));
+	}
+
+	public DesignResult check(LoadedDesign loaded) {
+		List<Finding> findings = new ArrayList<>();
+		boolean languageErrors = false;
+		for (Issue issue : loaded.issues()) {
+			Finding f = LanguageFindings.of(issue);
+			languageErrors |= f.severity() == Severity.ERROR;
+			findings.add(f);
+		}
+		Design design = loaded.design();
+		String title = design == null ? null : design.getTitle();
+		if (languageErrors || design == null) {
+			return new DesignResult(loaded.file(), title, Status.ERROR, findings, List.of());
+		}
+		CompiledDesign compiled = DesignCompiler.compile(design);
+		List<SolvedCase> solved = new ArrayList<>();
+		List<CaseResult> caseResults = new ArrayList<>();
+		boolean solverFailed = false;
+		DcSolver solver = new DcSolver();
+		for (FaultCase c : CaseGenerator.cases(compiled)) {
+			DcResult result = solver.solve(compiled.circuit().plus(c.added()));
+			if (result instanceof DcSolution solution) {
+				solved.add(new SolvedCase(c, solution));
+				caseResults.add(new CaseResult(c.name(), c.kind(), true, Stresses.of(compiled, solution)));
+			} else {
+				solverFailed = true;
+				caseResults.add(new CaseResult(c.name(), c.kind(), false, List.of()));
+				findings.add(solverFinding(compiled, c, (SolveFailure) result));
+			}
+		}
+		CheckContext context = new CheckContext(compiled, solved);
+		for (Rule rule : RuleRegistry.all()) {
+			rule.check(context, findings::add);
+		}
+		findings.sort(Comparator.comparingInt((Finding f) -> f.location().line())
+				.thenComparingInt(f -> f.location().column()));
+		Status status = solverFailed ? Status.ERROR
+				: findings.stream().anyMatch(f -> f.severity() == Severity.ERROR && !f.waived()) ? Status.FAIL
+						: Status.PASS;
+		return new DesignResult(loaded.file(), title, status, findings, caseResults);
+	}
+
+	private static Finding solverFinding(CompiledDesign compiled, FaultCase c, SolveFailure failure) {
+		SourceLocation where = SourceLocation.NONE;
+		String part = null;
+		if (failure.place() != null) {
+			if (compiled.parts().containsKey(failure.place())) {
+				part = failure.place();
+				where = Locations.of(compiled.parts().get(part), DesignPackage.Literals.MEMBER__NAME);
+			} else {
+				for (Member m : compiled.design().getMembers()) {
+					if (failure.place().equals(m.getName())) {
+						where = Locations.of(m, DesignPackage.Literals.MEMBER__NAME);
+					}
+				}
+			}
+		}
+		String reason = failure.reason().name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ');
+		return new Finding("solver", Concern.SOLVER, Severity.ERROR,
+				"case '" + c.name() + "' could not be solved (" + reason + "): " + failure.message(), part, c.name(),
+				where, null, null, null, false);
+	}
+}

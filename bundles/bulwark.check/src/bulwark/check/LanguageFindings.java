@@ -1,0 +1,32 @@
+package bulwark.check;
+
+import org.eclipse.xtext.validation.Issue;
+
+/** Language issues as findings: parse errors under concern syntax, everything else under structure. */
+final class LanguageFindings {
+	private LanguageFindings() {
+	}
+
+	static Finding of(Issue issue) {
+		Severity severity;
+		switch (issue.getSeverity()) {
+		case ERROR:
+			severity = Severity.ERROR;
+			break;
+		case WARNING:
+			severity = Severity.WARNING;
+			break;
+		default:
+			severity = Severity.INFO;
+		}
+		boolean syntax = issue.isSyntaxError();
+		SourceLocation where = new SourceLocation(orZero(issue.getLineNumber()), orZero(issue.getColumn()),
+				orZero(issue.getOffset()), orZero(issue.getLength()));
+		return Finding.plain(syntax ? "syntax" : "structure", syntax ? Concern.SYNTAX : Concern.STRUCTURE, severity,
+				issue.getMessage(), null, where);
+	}
+
+	private static int orZero(Integer i) {
+		return i == null ? 0 : i;
+	}
+}

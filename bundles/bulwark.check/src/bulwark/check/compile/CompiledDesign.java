@@ -1,0 +1,11 @@
+package bulwark.check.compile;
+
+import java.util.Map;
+
+import bulwark.engine.circuit.Circuit;
+import bulwark.lang.design.Design;
+import bulwark.lang.design.Part;
+
+/** A design together with the engine circuit made from it; {@code parts} maps device names back to the text. */
+public record CompiledDesign(Design design, Circuit circuit, Map<String, Part> parts) {
+}

@@ -1,0 +1,66 @@
+package bulwark.check.compile;
+
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.Optional;
+
+import bulwark.engine.circuit.Circuit;
+import bulwark.engine.circuit.Resistor;
+import bulwark.engine.circuit.VoltageSource;
+import bulwark.lang.design.Design;
+import bulwark.lang.design.Member;
+import bulwark.lang.design.Net;
+import bulwark.lang.design.Part;
+import bulwark.lang.design.PinBinding;
+
+/**
+ * Turns a validated design into the engine's circuit. Only nets that some pin uses become circuit nets:
+ * a declared but unused net has no voltage to solve for.
+ */
+public final class DesignCompiler {
+	private DesignCompiler() {
+	}
+
+	/** Compiles the design; call only when the language reported no error, so every value is present. */
+	public static CompiledDesign compile(Design design) {
+		Net reference = design.getMembers().stream().filter(Net.class::isInstance).map(Net.class::cast)
+				.filter(Net::isReference).findFirst()
+				.orElseThrow(() -> new IllegalArgumentException("design has no reference net"));
+		Circuit.Builder builder = Circuit.withReference(reference.getName());
+		Map<String, Part> parts = new LinkedHashMap<>();
+		for (Member m : design.getMembers()) {
+			if (!(m instanceof Part part)) {
+				continue;
+			}
+			parts.put(part.getName(), part);
+			switch (part.getKind()) {
+			case RESISTOR:
+				builder.add(new Resistor(part.getName(), pin(builder, part, "a"), pin(builder, part, "b"),
+						required(part, "value")));
+				break;
+			case SOURCE:
+				builder.add(new VoltageSource(part.getName(), pin(builder, part, "plus"), pin(builder, part, "minus"),
+						required(part, "voltage"), Settings.parameter(part, "resistance").orElse(0.0)));
+				break;
+			case BATTERY:
+				builder.add(new VoltageSource(part.getName(), pin(builder, part, "plus"), pin(builder, part, "minus"),
+						required(part, "emf"), Settings.parameter(part, "resistance").orElse(0.0)));
+				break;
+			default:
+				throw new IllegalArgumentException("no engine model for " + part.getKind());
+			}
+		}
+		return new CompiledDesign(design, builder.build(), parts);
+	}
+
+	private static int pin(Circuit.Builder builder, Part part, String pin) {
+		Optional<PinBinding> binding = part.getPins().stream().filter(b -> pin.equals(b.getPin())).findFirst();
+		return builder.net(binding.orElseThrow(() -> new IllegalArgumentException(part.getName() + "." + pin))
+				.getNet().getName());
+	}
+
+	private static double required(Part part, String name) {
+		return Settings.parameter(part, name)
+				.orElseThrow(() -> new IllegalArgumentException(part.getName() + " has no " + name));
+	}
+}

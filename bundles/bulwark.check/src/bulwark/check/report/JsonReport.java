@@ -1,0 +1,95 @@
+package bulwark.check.report;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.util.List;
+
+import com.google.gson.stream.JsonWriter;
+
+import bulwark.check.CaseResult;
+import bulwark.check.DesignResult;
+import bulwark.check.Finding;
+import bulwark.check.PartStress;
+
+/**
+ * The machine-readable result. Its field names are a contract for every later consumer: fields may be added,
+ * never renamed. Every number is in SI units; a number that is not finite is written as null.
+ */
+public final class JsonReport {
+	private JsonReport() {
+	}
+
+	public static void write(List<DesignResult> results, String version, String caution, Writer out)
+			throws IOException {
+		JsonWriter w = new JsonWriter(out);
+		w.setIndent("  ");
+		w.beginObject();
+		w.name("tool").beginObject().name("name").value("bulwark").name("version").value(version).endObject();
+		w.name("caution").value(caution);
+		w.name("designs").beginArray();
+		for (DesignResult r : results) {
+			design(w, r);
+		}
+		w.endArray();
+		w.endObject();
+		w.flush();
+		out.write('\n');
+		out.flush();
+	}
+
+	private static void design(JsonWriter w, DesignResult r) throws IOException {
+		w.beginObject();
+		w.name("file").value(r.file());
+		w.name("title").value(r.title());
+		w.name("status").value(r.status().id());
+		w.name("findings").beginArray();
+		for (Finding f : r.findings()) {
+			w.beginObject();
+			w.name("rule").value(f.rule());
+			w.name("concern").value(f.concern().id());
+			w.name("severity").value(f.severity().id());
+			w.name("message").value(f.message());
+			w.name("part").value(f.part());
+			w.name("case").value(f.caseName());
+			w.name("line").value(f.location().line());
+			w.name("column").value(f.location().column());
+			number(w.name("value"), f.value());
+			number(w.name("limit"), f.limit());
+			w.name("unit").value(f.unit());
+			w.name("waived").value(f.waived());
+			w.endObject();
+		}
+		w.endArray();
+		w.name("cases").beginArray();
+		for (CaseResult c : r.cases()) {
+			w.beginObject();
+			w.name("name").value(c.name());
+			w.name("kind").value(c.kind());
+			w.name("converged").value(c.converged());
+			w.name("parts").beginArray();
+			for (PartStress p : c.parts()) {
+				w.beginObject();
+				w.name("part").value(p.part());
+				number(w.name("voltage"), p.voltage());
+				number(w.name("current"), p.current());
+				number(w.name("power"), p.power());
+				number(w.name("utilisation"), p.utilisation());
+				w.name("limiting").value(p.limiting());
+				w.endObject();
+			}
+			w.endArray();
+			w.endObject();
+		}
+		w.endArray();
+		w.name("function").beginObject().endObject();
+		w.endObject();
+	}
+
+	private static void number(JsonWriter w, Double v) throws IOException {
+		if (v == null || !Double.isFinite(v)) {
+			w.nullValue();
+		} else {
+			w.value(v);
+		}
+	}
+}

@@ -1,0 +1,29 @@
+package bulwark.check.report;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.util.List;
+
+import bulwark.check.DesignResult;
+import bulwark.check.Finding;
+
+/** One line per finding: {@code FILE:LINE:COL: severity rule message}. */
+public final class TextReport {
+	private TextReport() {
+	}
+
+	public static void write(List<DesignResult> results, Writer w) throws IOException {
+		for (DesignResult r : results) {
+			for (Finding f : r.findings()) {
+				w.write(line(r.file(), f));
+				w.write('\n');
+			}
+		}
+		w.flush();
+	}
+
+	public static String line(String file, Finding f) {
+		return file + ":" + f.location().line() + ":" + f.location().column() + ": " + f.severity().id()
+				+ (f.waived() ? " (waived)" : "") + " " + f.rule() + " " + f.message().replace('\n', ' ');
+	}
+}

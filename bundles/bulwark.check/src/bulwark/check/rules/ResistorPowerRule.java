@@ -1,0 +1,58 @@
+package bulwark.check.rules;
+
+import java.util.Optional;
+import java.util.function.Consumer;
+
+import bulwark.check.Concern;
+import bulwark.check.Finding;
+import bulwark.check.Locations;
+import bulwark.check.Severity;
+import bulwark.check.compile.Settings;
+import bulwark.engine.dc.OperatingPoint;
+import bulwark.lang.design.DesignPackage;
+import bulwark.lang.design.Part;
+import bulwark.lang.design.PartKind;
+
+/**
+ * A resistor dissipates more than its rated power in some case. Dissipation is P = V·I of the solved
+ * operating point (Joule heating); the worst case over all cases is reported on the resistor's designator.
+ */
+public final class ResistorPowerRule implements Rule {
+	public static final String ID = "resistor-power";
+	private static final RuleInfo INFO = new RuleInfo(ID, Concern.POWER, Severity.ERROR,
+			"a resistor dissipates more than its rated power");
+
+	@Override
+	public RuleInfo info() {
+		return INFO;
+	}
+
+	@Override
+	public void check(CheckContext context, Consumer<Finding> findings) {
+		for (Part part : context.design().parts().values()) {
+			if (part.getKind() != PartKind.RESISTOR) {
+				continue;
+			}
+			Optional<Double> rated = Settings.rating(part, "power");
+			if (rated.isEmpty()) {
+				continue; // reported by rating-missing
+			}
+			double worst = -1;
+			String worstCase = null;
+			for (SolvedCase c : context.cases()) {
+				OperatingPoint p = c.solution().device(part.getName());
+				if (Math.abs(p.power()) > worst) {
+					worst = Math.abs(p.power());
+					worstCase = c.faultCase().name();
+				}
+			}
+			if (worstCase != null && worst > rated.get()) {
+				String message = String.format(java.util.Locale.ROOT,
+						"%s dissipates %s in case '%s', over its rated %s (%.0f %% of rating)", part.getName(),
+						Figures.watts(worst), worstCase, Figures.watts(rated.get()), 100 * worst / rated.get());
+				findings.accept(new Finding(ID, INFO.concern(), INFO.severity(), message, part.getName(), worstCase,
+						Locations.of(part, DesignPackage.Literals.MEMBER__NAME), worst, rated.get(), "W", false));
+			}
+		}
+	}
+}

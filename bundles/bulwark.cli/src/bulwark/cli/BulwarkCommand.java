@@ -1,0 +1,49 @@
+package bulwark.cli;
+
+import java.io.PrintWriter;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** The top-level command: its subcommands do the work. */
+@Command(name = "bulwark", mixinStandardHelpOptions = true, versionProvider = Version.class,
+		description = { "Checks instrument input designs against their ratings and abuse at the terminals.", "",
+				Safety.CAUTION },
+		subcommands = { CheckCommand.class, DemoCommand.class, CommandLine.HelpCommand.class },
+		footer = { "", "Exit codes: 0 no error finding, 1 error findings, 2 a design could not be checked, "
+				+ "3 usage error." })
+public final class BulwarkCommand implements Runnable {
+	@CommandLine.Spec
+	CommandLine.Model.CommandSpec spec;
+
+	@Override
+	public void run() {
+		spec.commandLine().usage(spec.commandLine().getOut());
+	}
+
+	private static String subcommandName(CommandLine cl) {
+		return cl.getParent() == null ? "" : " " + cl.getCommandName();
+	}
+
+	/** Runs the command line with the given streams and returns its exit code; never calls System.exit. */
+	public static int run(String[] args, PrintWriter out, PrintWriter err) {
+		CommandLine cli = new CommandLine(new BulwarkCommand());
+		cli.setOut(out);
+		cli.setErr(err);
+		cli.setParameterExceptionHandler((ex, given) -> {
+			CommandLine failed = ex.getCommandLine();
+			failed.getErr().println("bulwark: " + ex.getMessage());
+			failed.getErr().println("Try 'bulwark help" + subcommandName(failed) + "'.");
+			return ExitCodes.USAGE;
+		});
+		cli.setExecutionExceptionHandler((ex, failed, parsed) -> {
+			// an unexpected fault: say what it was rather than claim a result
+			failed.getErr().println("bulwark: the check stopped: " + ex);
+			return ExitCodes.NOT_CHECKED;
+		});
+		int code = cli.execute(args);
+		out.flush();
+		err.flush();
+		return code;
+	}
+}

@@ -1,0 +1,36 @@
+package bulwark.cli;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+@Command(name = "demo", description = "Checks the bundled demo designs (the examples folder).")
+final class DemoCommand implements Callable<Integer> {
+	@Mixin
+	CheckOptions options = new CheckOptions();
+
+	@Spec
+	CommandSpec spec;
+
+	@Override
+	public Integer call() throws Exception {
+		Path examples = Path.of(System.getProperty("bulwark.home", "."), "examples").toAbsolutePath().normalize();
+		Path here = Path.of("").toAbsolutePath();
+		if (examples.startsWith(here)) {
+			examples = here.relativize(examples); // shorter lines when run from the Bulwark folder
+		}
+		if (!Files.isDirectory(examples)) {
+			spec.commandLine().getErr().println("bulwark: demo designs not found at " + examples
+					+ " (set -Dbulwark.home to the Bulwark folder)");
+			return ExitCodes.USAGE;
+		}
+		spec.commandLine().getErr().println(Safety.CAUTION);
+		return Checks.run(List.of(examples), options, spec.commandLine().getOut(), spec.commandLine().getErr());
+	}
+}

@@ -1,0 +1,79 @@
+package bulwark.engine.circuit;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The compiled form of a design that the solvers work on: numbered nets and a list of devices.
+ * Net 0 is always the reference net (0 V). Built once per check, separate from the language model,
+ * so that every case and sweep point reuses it.
+ */
+public final class Circuit {
+	public static final int REFERENCE = 0;
+
+	private final List<String> netNames;
+	private final List<Device> devices;
+
+	private Circuit(List<String> netNames, List<Device> devices) {
+		this.netNames = Collections.unmodifiableList(new ArrayList<>(netNames));
+		this.devices = Collections.unmodifiableList(new ArrayList<>(devices));
+	}
+
+	/** Starts a circuit whose reference net has the given name. */
+	public static Builder withReference(String referenceNet) {
+		return new Builder(referenceNet);
+	}
+
+	public int netCount() {
+		return netNames.size();
+	}
+
+	public String netName(int net) {
+		return netNames.get(net);
+	}
+
+	public List<Device> devices() {
+		return devices;
+	}
+
+	/** A copy of this circuit with more devices, for example the source a fault case applies. */
+	public Circuit plus(List<Device> extra) {
+		List<Device> all = new ArrayList<>(devices);
+		all.addAll(extra);
+		return new Circuit(netNames, all);
+	}
+
+	public int netIndex(String name) {
+		int i = netNames.indexOf(name);
+		if (i < 0) {
+			throw new IllegalArgumentException("no net named " + name);
+		}
+		return i;
+	}
+
+	public static final class Builder {
+		private final Map<String, Integer> nets = new LinkedHashMap<>();
+		private final List<Device> devices = new ArrayList<>();
+
+		private Builder(String referenceNet) {
+			nets.put(referenceNet, REFERENCE);
+		}
+
+		/** Returns the index of the named net, adding it on first use. */
+		public int net(String name) {
+			return nets.computeIfAbsent(name, n -> nets.size());
+		}
+
+		public Builder add(Device device) {
+			devices.add(device);
+			return this;
+		}
+
+		public Circuit build() {
+			return new Circuit(new ArrayList<>(nets.keySet()), devices);
+		}
+	}
+}

@@ -1,0 +1,19 @@
+package bulwark.engine.dc;
+
+/**
+ * A solve that could not produce a trustworthy answer. {@code place} names the net or device where the
+ * trouble is, so that it can be reported on the design text.
+ */
+public record SolveFailure(Reason reason, String place, String message) implements DcResult {
+
+	public enum Reason {
+		/** A net with no DC path to the reference net: its voltage is undefined. */
+		FLOATING_NET,
+		/** Ideal voltage sources (zero internal resistance) that form a loop, or one shorted on itself. */
+		VOLTAGE_SOURCE_LOOP,
+		/** The system matrix has no usable pivot although the topology looked sound. */
+		SINGULAR_MATRIX,
+		/** The circuit has no device at all. */
+		EMPTY_CIRCUIT
+	}
+}

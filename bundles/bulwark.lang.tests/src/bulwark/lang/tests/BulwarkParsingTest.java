@@ -1,0 +1,98 @@
+package bulwark.lang.tests;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+
+import org.eclipse.emf.ecore.resource.Resource.Diagnostic;
+import org.eclipse.xtext.testing.InjectWith;
+import org.eclipse.xtext.testing.extensions.InjectionExtension;
+import org.eclipse.xtext.testing.util.ParseHelper;
+import org.eclipse.xtext.testing.validation.ValidationTestHelper;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+
+import com.google.inject.Inject;
+
+import bulwark.lang.design.Design;
+import bulwark.lang.design.Net;
+import bulwark.lang.design.Parameter;
+import bulwark.lang.design.Part;
+import bulwark.lang.design.PartKind;
+import bulwark.lang.design.Rating;
+import bulwark.lang.design.Terminal;
+import bulwark.lang.units.Quantities;
+
+/** Named so because the language generator writes a stub of this name when none exists. */
+
+@ExtendWith(InjectionExtension.class)
+@InjectWith(BulwarkInjectorProvider.class)
+class BulwarkParsingTest {
+	@Inject
+	private ParseHelper<Design> parser;
+	@Inject
+	private ValidationTestHelper validation;
+
+	@Test
+	void parsesAWholeDesign() throws Exception {
+		Design d = parser.parse("""
+				# a comment
+				design "Divider" purpose "test" revision "A"
+				reference net gnd
+				net in
+				terminal T1 "input" at in
+				terminal T2 at gnd common
+				battery B1 (plus: in, minus: gnd) { emf 3 V resistance 8 Ω capacity 225 mAh }
+				resistor R1 (b: gnd, a: in) {
+				  value 4.7 kohm ± 5 %
+				  rated power 250 mW
+				  rated voltage 200 V
+				}
+				""");
+		List<Diagnostic> errors = d.eResource().getErrors();
+		assertTrue(errors.isEmpty(), errors.toString());
+		validation.assertNoIssues(d);
+		assertEquals("Divider", d.getTitle());
+		assertEquals("A", d.getRevision());
+		assertTrue(((Net) d.getMembers().get(0)).isReference());
+		Terminal t2 = (Terminal) d.getMembers().get(3);
+		assertTrue(t2.isCommon());
+		assertEquals("gnd", t2.getNet().getName());
+		Part r1 = (Part) d.getMembers().get(5);
+		assertEquals(PartKind.RESISTOR, r1.getKind());
+		assertEquals("gnd", r1.getPins().get(0).getNet().getName());
+		Parameter value = (Parameter) r1.getSettings().get(0);
+		assertEquals(4700.0, Quantities.si(value.getValue()).orElseThrow(), 1e-9);
+		assertEquals("5", value.getTolerance().getPercent());
+		Rating power = (Rating) r1.getSettings().get(1);
+		assertEquals(0.25, Quantities.si(power.getValue()).orElseThrow(), 1e-15);
+	}
+
+	@Test
+	void unitMayFollowTheNumberWithoutSpace() throws Exception {
+		Design d = parser.parse("""
+				design "x"
+				reference net gnd
+				net a
+				resistor R1 (a: a, b: gnd) { value 10kΩ }
+				source V1 (plus: a, minus: gnd) { voltage -5V }
+				""");
+		validation.assertNoIssues(d);
+		Part v1 = (Part) d.getMembers().get(3);
+		assertEquals(-5.0, Quantities.si(v1.getSettings().get(0).getValue()).orElseThrow(), 0);
+	}
+
+	@Test
+	void syntaxErrorHasLineAndColumn() throws Exception {
+		Design d = parser.parse("""
+				design "x"
+				reference net gnd
+				resistor R1 (a gnd) { value 1 kΩ }
+				""");
+		List<Diagnostic> errors = d.eResource().getErrors();
+		assertEquals(1, errors.size(), errors.toString());
+		assertEquals(3, errors.get(0).getLine());
+		assertEquals(16, errors.get(0).getColumn()); // "gnd": a ':' was expected after the pin name
+	}
+}

@@ -1,0 +1,111 @@
+package bulwark.lang.tests;
+
+import org.eclipse.xtext.diagnostics.Diagnostic;
+import org.eclipse.xtext.testing.InjectWith;
+import org.eclipse.xtext.testing.extensions.InjectionExtension;
+import org.eclipse.xtext.testing.util.ParseHelper;
+import org.eclipse.xtext.testing.validation.ValidationTestHelper;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+
+import com.google.inject.Inject;
+
+import bulwark.lang.design.Design;
+import bulwark.lang.design.DesignPackage;
+import bulwark.lang.validation.IssueCodes;
+
+/** Each structural mistake gets its issue code, on the element it concerns. */
+@ExtendWith(InjectionExtension.class)
+@InjectWith(BulwarkInjectorProvider.class)
+class ValidationTest {
+	@Inject
+	private ParseHelper<Design> parser;
+	@Inject
+	private ValidationTestHelper validation;
+
+	private Design parse(String body) throws Exception {
+		return parser.parse("design \"t\"\nreference net gnd\nnet a\n" + body);
+	}
+
+	@Test
+	void unitIsRequired() throws Exception {
+		Design d = parse("resistor R1 (a: a, b: gnd) { value 10 k }");
+		validation.assertError(d, DesignPackage.Literals.QUANTITY, IssueCodes.UNKNOWN_UNIT, "only a prefix");
+	}
+
+	@Test
+	void unknownUnit() throws Exception {
+		validation.assertError(parse("resistor R1 (a: a, b: gnd) { value 10 furlong }"),
+				DesignPackage.Literals.QUANTITY, IssueCodes.UNKNOWN_UNIT, "not a unit");
+	}
+
+	@Test
+	void unitOfTheWrongQuantity() throws Exception {
+		validation.assertError(parse("resistor R1 (a: a, b: gnd) { value 10 mA }"), DesignPackage.Literals.QUANTITY,
+				IssueCodes.WRONG_UNIT, "value is a resistance (Ω), not a current (A)");
+	}
+
+	@Test
+	void pinsArePerKind() throws Exception {
+		Design d = parse("resistor R1 (plus: a, b: gnd) { value 1 kΩ }");
+		validation.assertError(d, DesignPackage.Literals.PIN_BINDING, IssueCodes.UNKNOWN_PIN, "its pins are a, b");
+		validation.assertError(d, DesignPackage.Literals.PART, IssueCodes.MISSING_PIN, "leaves pin a unconnected");
+	}
+
+	@Test
+	void duplicatePin() throws Exception {
+		validation.assertError(parse("resistor R1 (a: a, a: gnd, b: gnd) { value 1 kΩ }"),
+				DesignPackage.Literals.PIN_BINDING, IssueCodes.DUPLICATE_PIN);
+	}
+
+	@Test
+	void requiredParameter() throws Exception {
+		validation.assertError(parse("resistor R1 (a: a, b: gnd) { rated power 1 W }"), DesignPackage.Literals.PART,
+				IssueCodes.MISSING_PARAMETER, "needs its value");
+	}
+
+	@Test
+	void unknownParameterAndRating() throws Exception {
+		Design d = parse("resistor R1 (a: a, b: gnd) { value 1 kΩ colour 1 V rated current 1 A }");
+		validation.assertError(d, DesignPackage.Literals.PARAMETER, IssueCodes.UNKNOWN_PARAMETER);
+		validation.assertError(d, DesignPackage.Literals.RATING, IssueCodes.UNKNOWN_RATING, "it has: power, voltage");
+	}
+
+	@Test
+	void duplicateSetting() throws Exception {
+		validation.assertError(parse("resistor R1 (a: a, b: gnd) { value 1 kΩ value 2 kΩ }"),
+				DesignPackage.Literals.PARAMETER, IssueCodes.DUPLICATE_SETTING);
+	}
+
+	@Test
+	void resistanceMustBePositive() throws Exception {
+		validation.assertError(parse("resistor R1 (a: a, b: gnd) { value 0 Ω }"), DesignPackage.Literals.QUANTITY,
+				IssueCodes.VALUE_OUT_OF_RANGE);
+	}
+
+	@Test
+	void toleranceRange() throws Exception {
+		validation.assertError(parse("resistor R1 (a: a, b: gnd) { value 1 Ω ± 120 % }"),
+				DesignPackage.Literals.TOLERANCE, IssueCodes.TOLERANCE_OUT_OF_RANGE);
+	}
+
+	@Test
+	void namesAreUnique() throws Exception {
+		validation.assertError(parse("net R1\nresistor R1 (a: a, b: gnd) { value 1 kΩ }"), DesignPackage.Literals.PART,
+				IssueCodes.DUPLICATE_NAME, "already used on line 4");
+	}
+
+	@Test
+	void referenceNetRequiredAndUnique() throws Exception {
+		Design none = parser.parse("design \"t\"\nnet a\n");
+		validation.assertError(none, DesignPackage.Literals.DESIGN, IssueCodes.NO_REFERENCE_NET);
+		Design two = parse("reference net gnd2\n");
+		validation.assertError(two, DesignPackage.Literals.NET, IssueCodes.MANY_REFERENCE_NETS);
+	}
+
+	@Test
+	void undeclaredNetIsALinkingError() throws Exception {
+		validation.assertError(parse("resistor R1 (a: nowhere, b: gnd) { value 1 kΩ }"),
+				DesignPackage.Literals.PIN_BINDING, Diagnostic.LINKING_DIAGNOSTIC, "nowhere");
+	}
+}

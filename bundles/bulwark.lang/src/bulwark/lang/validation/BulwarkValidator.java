@@ -1,0 +1,160 @@
+package bulwark.lang.validation;
+
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import java.util.stream.Collectors;
+
+import org.eclipse.xtext.validation.Check;
+
+import bulwark.lang.design.Design;
+import bulwark.lang.design.DesignPackage;
+import bulwark.lang.design.Member;
+import bulwark.lang.design.Net;
+import bulwark.lang.design.Parameter;
+import bulwark.lang.design.Part;
+import bulwark.lang.design.PinBinding;
+import bulwark.lang.design.Quantity;
+import bulwark.lang.design.Rating;
+import bulwark.lang.design.Setting;
+import bulwark.lang.design.Tolerance;
+import bulwark.lang.kinds.KindCatalog;
+import bulwark.lang.kinds.KindSpec;
+import bulwark.lang.kinds.SettingSpec;
+import bulwark.lang.units.ScaledUnit;
+import bulwark.lang.units.UnitParser;
+
+/**
+ * Structural checks of a design: every name once, one reference net, each part with exactly the pins of
+ * its kind, known parameters and ratings with units of the right quantity. Electrical findings come from
+ * the check (bulwark.check), not from here.
+ */
+public class BulwarkValidator extends AbstractBulwarkValidator {
+
+	@Check
+	public void namesAreUnique(Design design) {
+		Map<String, Member> seen = new HashMap<>();
+		for (Member m : design.getMembers()) {
+			String name = m.getName();
+			if (name == null) {
+				continue;
+			}
+			if (seen.putIfAbsent(name, m) != null) {
+				error("The name '" + name + "' is already used on line " + line(seen.get(name)), m,
+						DesignPackage.Literals.MEMBER__NAME, IssueCodes.DUPLICATE_NAME);
+			}
+		}
+	}
+
+	@Check
+	public void oneReferenceNet(Design design) {
+		List<Net> refs = design.getMembers().stream().filter(Net.class::isInstance).map(Net.class::cast)
+				.filter(Net::isReference).collect(Collectors.toList());
+		if (refs.isEmpty()) {
+			error("The design has no reference net: mark the 0 V net, for example 'reference net gnd'", design,
+					DesignPackage.Literals.DESIGN__TITLE, IssueCodes.NO_REFERENCE_NET);
+		}
+		for (int i = 1; i < refs.size(); i++) {
+			error("Only one net can be the reference; '" + refs.get(0).getName() + "' already is", refs.get(i),
+					DesignPackage.Literals.NET__REFERENCE, IssueCodes.MANY_REFERENCE_NETS);
+		}
+	}
+
+	@Check
+	public void pinsMatchKind(Part part) {
+		KindSpec spec = KindCatalog.of(part.getKind());
+		Set<String> bound = new HashSet<>();
+		for (PinBinding b : part.getPins()) {
+			if (!spec.pins().contains(b.getPin())) {
+				error("A " + spec.kind() + " has no pin '" + b.getPin() + "'; its pins are " + String.join(", ", spec.pins()),
+						b, DesignPackage.Literals.PIN_BINDING__PIN, IssueCodes.UNKNOWN_PIN);
+			} else if (!bound.add(b.getPin())) {
+				error("Pin '" + b.getPin() + "' is connected twice", b, DesignPackage.Literals.PIN_BINDING__PIN,
+						IssueCodes.DUPLICATE_PIN);
+			}
+		}
+		List<String> missing = spec.pins().stream().filter(p -> !bound.contains(p)).collect(Collectors.toList());
+		if (!missing.isEmpty()) {
+			error(part.getName() + " leaves pin" + (missing.size() > 1 ? "s " : " ") + String.join(", ", missing)
+					+ " unconnected", part, DesignPackage.Literals.MEMBER__NAME, IssueCodes.MISSING_PIN);
+		}
+	}
+
+	@Check
+	public void settingsMatchKind(Part part) {
+		KindSpec spec = KindCatalog.of(part.getKind());
+		Set<String> parameters = new HashSet<>();
+		Set<String> ratings = new HashSet<>();
+		for (Setting s : part.getSettings()) {
+			boolean isRating = s instanceof Rating;
+			Optional<SettingSpec> known = isRating ? spec.rating(s.getName()) : spec.parameter(s.getName());
+			if (known.isEmpty()) {
+				List<SettingSpec> options = isRating ? spec.ratings() : spec.parameters();
+				String list = options.isEmpty() ? "none"
+						: options.stream().map(SettingSpec::name).collect(Collectors.joining(", "));
+				error("A " + spec.kind() + " has no " + (isRating ? "rating" : "parameter") + " '" + s.getName()
+						+ "'; it has: " + list, s, DesignPackage.Literals.SETTING__NAME,
+						isRating ? IssueCodes.UNKNOWN_RATING : IssueCodes.UNKNOWN_PARAMETER);
+				continue;
+			}
+			if (!(isRating ? ratings : parameters).add(s.getName())) {
+				error("'" + s.getName() + "' is given twice", s, DesignPackage.Literals.SETTING__NAME,
+						IssueCodes.DUPLICATE_SETTING);
+			}
+			checkUnit(s, known.get());
+		}
+		for (SettingSpec p : spec.parameters()) {
+			if (p.required() && !parameters.contains(p.name())) {
+				error(part.getName() + " needs its " + p.name() + " (" + p.meaning() + ", in " + p.unit().symbol()
+						+ ")", part, DesignPackage.Literals.MEMBER__NAME, IssueCodes.MISSING_PARAMETER);
+			}
+		}
+	}
+
+	@Check
+	public void toleranceInRange(Tolerance tolerance) {
+		double percent = Double.parseDouble(tolerance.getPercent());
+		if (!(percent >= 0 && percent < 100)) {
+			error("A tolerance must be at least 0 % and below 100 %", tolerance,
+					DesignPackage.Literals.TOLERANCE__PERCENT, IssueCodes.TOLERANCE_OUT_OF_RANGE);
+		}
+	}
+
+	private void checkUnit(Setting s, SettingSpec spec) {
+		Quantity q = s.getValue();
+		if (q == null || q.getUnit() == null) {
+			return;
+		}
+		Optional<ScaledUnit> unit = UnitParser.parse(q.getUnit());
+		if (unit.isEmpty()) {
+			String hint = UnitParser.isBarePrefix(q.getUnit())
+					? "'" + q.getUnit() + "' is only a prefix: write the unit too, for example " + q.getMagnitude() + " "
+							+ q.getUnit() + spec.unit().symbol()
+					: "'" + q.getUnit() + "' is not a unit Bulwark knows; " + s.getName() + " is in " + spec.unit().symbol();
+			error(hint, q, DesignPackage.Literals.QUANTITY__UNIT, IssueCodes.UNKNOWN_UNIT);
+			return;
+		}
+		if (unit.get().unit() != spec.unit()) {
+			error(s.getName() + " is a " + spec.unit().quantity() + " (" + spec.unit().symbol() + "), not a "
+					+ unit.get().unit().quantity() + " (" + unit.get().unit().symbol() + ")", q,
+					DesignPackage.Literals.QUANTITY__UNIT, IssueCodes.WRONG_UNIT);
+			return;
+		}
+		double value = Double.parseDouble(q.getMagnitude()) * unit.get().factor();
+		boolean mayBeZero = s instanceof Parameter && ("resistance".equals(s.getName()) || "voltage".equals(s.getName())
+				|| "emf".equals(s.getName()));
+		boolean mayBeNegative = s instanceof Parameter && ("voltage".equals(s.getName()) || "emf".equals(s.getName()));
+		if (value < 0 && !mayBeNegative || value == 0 && !mayBeZero) {
+			error(s.getName() + " must be " + (mayBeZero ? "zero or more" : "more than zero"), q,
+					DesignPackage.Literals.QUANTITY__MAGNITUDE, IssueCodes.VALUE_OUT_OF_RANGE);
+		}
+	}
+
+	private static int line(Member m) {
+		var node = org.eclipse.xtext.nodemodel.util.NodeModelUtils.findActualNodeFor(m);
+		return node == null ? 0 : node.getStartLine();
+	}
+}

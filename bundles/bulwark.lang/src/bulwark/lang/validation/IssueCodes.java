@@ -1,0 +1,24 @@
+package bulwark.lang.validation;
+
+/** Codes of the language's own issues, shared by the validator, quick fixes and tests. */
+public final class IssueCodes {
+	private static final String PREFIX = "bulwark.lang.";
+
+	public static final String UNKNOWN_UNIT = PREFIX + "unknownUnit";
+	public static final String WRONG_UNIT = PREFIX + "wrongUnit";
+	public static final String VALUE_OUT_OF_RANGE = PREFIX + "valueOutOfRange";
+	public static final String UNKNOWN_PIN = PREFIX + "unknownPin";
+	public static final String MISSING_PIN = PREFIX + "missingPin";
+	public static final String DUPLICATE_PIN = PREFIX + "duplicatePin";
+	public static final String UNKNOWN_PARAMETER = PREFIX + "unknownParameter";
+	public static final String MISSING_PARAMETER = PREFIX + "missingParameter";
+	public static final String UNKNOWN_RATING = PREFIX + "unknownRating";
+	public static final String DUPLICATE_SETTING = PREFIX + "duplicateSetting";
+	public static final String DUPLICATE_NAME = PREFIX + "duplicateName";
+	public static final String NO_REFERENCE_NET = PREFIX + "noReferenceNet";
+	public static final String MANY_REFERENCE_NETS = PREFIX + "manyReferenceNets";
+	public static final String TOLERANCE_OUT_OF_RANGE = PREFIX + "toleranceOutOfRange";
+
+	private IssueCodes() {
+	}
+}

@@ -1,0 +1,90 @@
+package bulwark.ui.tests;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.Optional;
+import java.util.function.BooleanSupplier;
+
+import org.eclipse.jface.text.IDocument;
+import org.eclipse.swt.widgets.Display;
+import org.eclipse.ui.IWorkbenchPage;
+import org.eclipse.ui.PlatformUI;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.Test;
+
+import bulwark.check.Finding;
+import bulwark.ui.Application;
+import bulwark.ui.Screenshot;
+import bulwark.ui.editor.DesignEditor;
+import bulwark.ui.editor.FindingAnnotation;
+import bulwark.ui.findings.FindingsView;
+
+/** Runs inside the workbench (Tycho UI harness, under Xvfb in CI). */
+class DesignEditorUiTest {
+	/** Generous: the first check builds the language injector. */
+	private static final long DEADLINE_MS = 60_000;
+	private static final Path ROOT = Path.of(System.getProperty("bulwark.root", "../..")).toAbsolutePath().normalize();
+	private static final Path LAB = ROOT.resolve("examples/lab-indicator-seeded.bulwark");
+
+	private IWorkbenchPage page() {
+		return PlatformUI.getWorkbench().getActiveWorkbenchWindow().getActivePage();
+	}
+
+	@AfterEach
+	void closeEditors() {
+		page().closeAllEditors(false);
+	}
+
+	/** Keeps the UI thread dispatching until the condition holds or the deadline passes. */
+	private static boolean waitUntil(BooleanSupplier condition) {
+		Display display = Display.getCurrent();
+		long end = System.currentTimeMillis() + DEADLINE_MS;
+		while (!condition.getAsBoolean()) {
+			if (System.currentTimeMillis() > end) {
+				return false;
+			}
+			if (!display.readAndDispatch()) {
+				display.timerExec(20, () -> {
+				});
+				display.sleep();
+			}
+		}
+		return true;
+	}
+
+	private static Optional<FindingAnnotation> powerAnnotation(DesignEditor editor) {
+		return editor.findingAnnotations().stream().filter(a -> a.finding().rule().equals("resistor-power"))
+				.findFirst();
+	}
+
+	@Test
+	void powerFindingIsMarkedAndListed() throws Exception {
+		FindingsView view = (FindingsView) page().showView(FindingsView.ID);
+		DesignEditor editor = Application.openFile(page(), LAB);
+		assertTrue(waitUntil(() -> powerAnnotation(editor).isPresent()), "no power finding marked in the editor");
+		FindingAnnotation marker = powerAnnotation(editor).orElseThrow();
+		assertEquals(FindingAnnotation.ERROR, marker.getType());
+		assertEquals(19, editor.lineOf(marker), "marker on R_DROP's declaration (line 20)");
+		assertTrue(waitUntil(() -> view.shownFindings().stream().map(Finding::rule).anyMatch("resistor-power"::equals)),
+				"findings view does not list the power finding");
+		screenshot("editor-power-finding.png");
+	}
+
+	@Test
+	void findingDisappearsWhileTyping() throws Exception {
+		DesignEditor editor = Application.openFile(page(), LAB);
+		assertTrue(waitUntil(() -> powerAnnotation(editor).isPresent()), "no power finding marked in the editor");
+		IDocument doc = editor.getDocumentProvider().getDocument(editor.getEditorInput());
+		int at = doc.get().indexOf("rated power 125 mW");
+		doc.replace(at, "rated power 125 mW".length(), "rated power 500 mW");
+		assertTrue(waitUntil(() -> powerAnnotation(editor).isEmpty()), "power finding still shown after the fix");
+		assertTrue(editor.isDirty());
+	}
+
+	private static void screenshot(String name) throws Exception {
+		Screenshot.save(PlatformUI.getWorkbench().getActiveWorkbenchWindow().getShell(),
+				ROOT.resolve("bundles/bulwark.ui.tests/target/screenshots").resolve(name));
+	}
+}

@@ -1,0 +1,59 @@
+package bulwark.ui.editor;
+
+import java.util.ArrayList;
+import java.util.Iterator;
+import java.util.List;
+
+import org.eclipse.jface.text.source.Annotation;
+import org.eclipse.jface.text.source.IAnnotationModel;
+import org.eclipse.ui.editors.text.TextEditor;
+
+import bulwark.check.DesignResult;
+
+/**
+ * The design editor: a text editor whose reconciler checks the design in the background after each pause
+ * in typing and shows the findings as annotations (squiggles, ruler and overview marks).
+ */
+public class DesignEditor extends TextEditor {
+	public static final String ID = "bulwark.ui.designEditor";
+
+	private volatile DesignResult lastResult;
+
+	public DesignEditor() {
+		setSourceViewerConfiguration(new DesignSourceViewerConfiguration(this, getPreferenceStore()));
+	}
+
+	void resultArrived(DesignResult result) {
+		lastResult = result;
+	}
+
+	/** The newest check result, or null before the first check finished. */
+	public DesignResult lastResult() {
+		return lastResult;
+	}
+
+	/** Finding annotations now in the editor. */
+	public List<FindingAnnotation> findingAnnotations() {
+		List<FindingAnnotation> result = new ArrayList<>();
+		IAnnotationModel model = getSourceViewer() == null ? null : getSourceViewer().getAnnotationModel();
+		if (model == null) {
+			return result;
+		}
+		for (Iterator<Annotation> it = model.getAnnotationIterator(); it.hasNext();) {
+			if (it.next() instanceof FindingAnnotation a) {
+				result.add(a);
+			}
+		}
+		return result;
+	}
+
+	/** 0-based line of an annotation, -1 when unknown. */
+	public int lineOf(Annotation a) {
+		try {
+			var pos = getSourceViewer().getAnnotationModel().getPosition(a);
+			return pos == null ? -1 : getSourceViewer().getDocument().getLineOfOffset(pos.getOffset());
+		} catch (Exception e) {
+			return -1;
+		}
+	}
+}
