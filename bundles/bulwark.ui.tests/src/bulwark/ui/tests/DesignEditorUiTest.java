@@ -12,7 +12,10 @@ import org.eclipse.swt.widgets.Display;
 import org.eclipse.ui.IWorkbenchPage;
 import org.eclipse.ui.PlatformUI;
 import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.MethodOrderer;
+import org.junit.jupiter.api.Order;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.TestMethodOrder;
 
 import bulwark.check.Finding;
 import bulwark.ui.Application;
@@ -21,7 +24,11 @@ import bulwark.ui.editor.DesignEditor;
 import bulwark.ui.editor.FindingAnnotation;
 import bulwark.ui.findings.FindingsView;
 
-/** Runs inside the workbench (Tycho UI harness, under Xvfb in CI). */
+/**
+ * Runs inside the workbench (Tycho UI harness, under Xvfb in CI). The screenshot test runs first, so that the
+ * picture is of a freshly opened design; the typing test then edits it.
+ */
+@TestMethodOrder(MethodOrderer.OrderAnnotation.class)
 class DesignEditorUiTest {
 	/** Generous: the first check builds the language injector. */
 	private static final long DEADLINE_MS = 60_000;
@@ -60,6 +67,7 @@ class DesignEditorUiTest {
 	}
 
 	@Test
+	@Order(1)
 	void powerFindingIsMarkedAndListed() throws Exception {
 		FindingsView view = (FindingsView) page().showView(FindingsView.ID);
 		DesignEditor editor = Application.openFile(page(), LAB);
@@ -70,16 +78,24 @@ class DesignEditorUiTest {
 		assertTrue(waitUntil(() -> view.shownFindings().stream().map(Finding::rule).anyMatch("resistor-power"::equals)),
 				"findings view does not list the power finding");
 		screenshot("editor-power-finding.png");
+		// still true after the picture: no late result from an earlier check replaced it
+		assertTrue(powerAnnotation(editor).isPresent(), "power marker gone after the screenshot");
+		assertTrue(view.shownFindings().stream().map(Finding::rule).anyMatch("resistor-power"::equals),
+				"findings view lost the power finding");
 	}
 
 	@Test
+	@Order(2)
 	void findingDisappearsWhileTyping() throws Exception {
+		FindingsView view = (FindingsView) page().showView(FindingsView.ID);
 		DesignEditor editor = Application.openFile(page(), LAB);
 		assertTrue(waitUntil(() -> powerAnnotation(editor).isPresent()), "no power finding marked in the editor");
 		IDocument doc = editor.getDocumentProvider().getDocument(editor.getEditorInput());
 		int at = doc.get().indexOf("rated power 125 mW");
 		doc.replace(at, "rated power 125 mW".length(), "rated power 500 mW");
 		assertTrue(waitUntil(() -> powerAnnotation(editor).isEmpty()), "power finding still shown after the fix");
+		assertTrue(waitUntil(() -> view.shownFindings().stream().noneMatch(f -> f.rule().equals("resistor-power"))),
+				"findings view still lists the power finding after the fix");
 		assertTrue(editor.isDirty());
 	}
 

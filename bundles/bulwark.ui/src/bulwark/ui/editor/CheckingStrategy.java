@@ -73,8 +73,8 @@ final class CheckingStrategy implements IReconcilingStrategy, IReconcilingStrate
 		String text = doc.get();
 		DesignResult result = BulwarkUi.checker().check(text, fileName(),
 				() -> monitor != null && monitor.isCanceled());
-		if (!text.equals(doc.get())) {
-			return; // the engineer typed on; the next reconcile brings the newer result
+		if (editor.isClosed() || !text.equals(doc.get())) {
+			return; // closed, or the engineer typed on and the next reconcile brings the newer result
 		}
 		Map<Annotation, Position> added = new HashMap<>();
 		for (Finding f : result.findings()) {
@@ -99,7 +99,11 @@ final class CheckingStrategy implements IReconcilingStrategy, IReconcilingStrate
 		editor.resultArrived(result);
 		Display display = Display.getDefault();
 		if (!display.isDisposed()) {
-			display.asyncExec(() -> FindingsHub.publish(editor, result));
+			display.asyncExec(() -> {
+				if (!editor.isClosed()) {
+					FindingsHub.publish(editor, result);
+				}
+			});
 		}
 	}
 

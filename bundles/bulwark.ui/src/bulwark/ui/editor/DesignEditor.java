@@ -18,6 +18,7 @@ public class DesignEditor extends TextEditor {
 	public static final String ID = "bulwark.ui.designEditor";
 
 	private volatile DesignResult lastResult;
+	private volatile boolean closed;
 
 	public DesignEditor() {
 		setSourceViewerConfiguration(new DesignSourceViewerConfiguration(this, getPreferenceStore()));
@@ -25,6 +26,17 @@ public class DesignEditor extends TextEditor {
 
 	void resultArrived(DesignResult result) {
 		lastResult = result;
+	}
+
+	/** True once the editor is closed: a check still running for it must not publish anything. */
+	public boolean isClosed() {
+		return closed;
+	}
+
+	@Override
+	public void dispose() {
+		closed = true;
+		super.dispose();
 	}
 
 	/** The newest check result, or null before the first check finished. */

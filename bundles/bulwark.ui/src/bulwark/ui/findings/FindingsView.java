@@ -13,7 +13,10 @@ import org.eclipse.swt.SWT;
 import org.eclipse.swt.graphics.Image;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Table;
+import org.eclipse.ui.IEditorPart;
+import org.eclipse.ui.IPartListener2;
 import org.eclipse.ui.ISharedImages;
+import org.eclipse.ui.IWorkbenchPartReference;
 import org.eclipse.ui.PlatformUI;
 import org.eclipse.ui.part.ViewPart;
 
@@ -53,7 +56,18 @@ public class FindingsView extends ViewPart {
 		});
 		setContentDescription("No design checked yet.");
 		FindingsHub.subscribe(listener);
+		getSite().getPage().addPartListener(activation);
 	}
+
+	/** Shows the findings of whichever design editor the engineer turns to. */
+	private final IPartListener2 activation = new IPartListener2() {
+		@Override
+		public void partActivated(IWorkbenchPartReference ref) {
+			if (ref.getPart(false) instanceof DesignEditor e && e.lastResult() != null) {
+				show(e, e.lastResult());
+			}
+		}
+	};
 
 	private void column(String title, int width, Function<Finding, String> text, Function<Finding, Image> image) {
 		TableViewerColumn c = new TableViewerColumn(viewer, SWT.LEFT);
@@ -85,8 +99,12 @@ public class FindingsView extends ViewPart {
 	}
 
 	private void show(DesignEditor from, DesignResult result) {
-		if (viewer == null || viewer.getControl().isDisposed()) {
+		if (viewer == null || viewer.getControl().isDisposed() || from.isClosed()) {
 			return;
+		}
+		IEditorPart active = getSite().getPage().getActiveEditor();
+		if (active instanceof DesignEditor && active != from) {
+			return; // a background check of another open design; its results show when it is activated
 		}
 		editor = from;
 		viewer.setInput(result.findings());
@@ -108,6 +126,7 @@ public class FindingsView extends ViewPart {
 	@Override
 	public void dispose() {
 		FindingsHub.unsubscribe(listener);
+		getSite().getPage().removePartListener(activation);
 		super.dispose();
 	}
 }
