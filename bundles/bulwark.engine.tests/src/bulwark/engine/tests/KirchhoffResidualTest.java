@@ -54,8 +54,8 @@ class KirchhoffResidualTest {
 			double powerSum = 0;
 			for (Device d : c.devices()) {
 				OperatingPoint p = s.device(d.name());
-				sum[d.pinA()] += p.current();
-				sum[d.pinB()] -= p.current();
+				sum[d.pins()[0]] += p.current();
+				sum[d.pins()[1]] -= p.current();
 				if (d instanceof Resistor r) {
 					maxConductance = Math.max(maxConductance, 1 / r.ohms());
 				}

@@ -67,6 +67,21 @@ public final class Circuit {
 			return nets.computeIfAbsent(name, n -> nets.size());
 		}
 
+		/** A net of the device's own, behind the pins; named after the device so that messages can say whose. */
+		public int internalNet(String owner, String role) {
+			String name = owner + "." + role;
+			if (nets.containsKey(name)) {
+				throw new IllegalArgumentException("internal net " + name + " exists already");
+			}
+			return net(name);
+		}
+
+		/** Adds a diode, with the internal net its series resistance needs. */
+		public Builder diode(String name, int anode, int cathode, bulwark.engine.device.DiodeModel model) {
+			int junction = model.seriesOhms() > 0 ? internalNet(name, "junction") : anode;
+			return add(new Diode(name, anode, cathode, junction, model));
+		}
+
 		public Builder add(Device device) {
 			devices.add(device);
 			return this;

@@ -1,14 +1,55 @@
 package bulwark.engine.circuit;
 
+import bulwark.engine.mna.SolutionView;
+import bulwark.engine.mna.Stamp;
+
 /**
- * A two-terminal device of the compiled circuit. Its pins are net indices; current is positive when it
- * flows into {@link #pinA()} and out of {@link #pinB()} through the device.
+ * A device of the compiled circuit. It names its pins (net indices, in the order of {@link #pinNames()}),
+ * adds itself to the nodal equations, and reports the current into each pin at a solution.
+ * Devices are immutable; anything that changes between Newton iterations lives in {@link Stamp#state()}.
  */
-public sealed interface Device permits Resistor, VoltageSource, CurrentSource {
+public interface Device {
 	/** The designator the device came from, used to report results and failures. */
 	String name();
 
-	int pinA();
+	/** Nets of the external pins. */
+	int[] pins();
 
-	int pinB();
+	/** Names of the external pins, as the design language writes them. */
+	String[] pinNames();
+
+	/** Nets the device uses internally (for example behind a series resistance); not reported. */
+	default int[] internalNets() {
+		return new int[0];
+	}
+
+	/** Number of branch currents the device adds as unknowns (voltage sources, ideal wires). */
+	default int branchCount() {
+		return 0;
+	}
+
+	/** Number of doubles of per-solve memory the device needs. */
+	default int stateSize() {
+		return 0;
+	}
+
+	/** True when the device's equations depend on the solution (exponential junctions, switches). */
+	default boolean nonlinear() {
+		return false;
+	}
+
+	/** True when the device fixes a voltage between its pins without resistance (for the loop check). */
+	default boolean idealVoltage() {
+		return false;
+	}
+
+	/** True when the device conducts at DC between its pins (false for current sources and capacitors). */
+	default boolean conductsAtDc() {
+		return true;
+	}
+
+	void stamp(Stamp s);
+
+	/** Current into each external pin at a solution (they sum to zero). */
+	double[] pinCurrents(SolutionView x);
 }

@@ -1,10 +1,37 @@
 package bulwark.engine.circuit;
 
-/** Linear resistor between pins a and b; {@code ohms} must be positive and finite. */
-public record Resistor(String name, int pinA, int pinB, double ohms) implements Device {
-	public Resistor {
+import bulwark.engine.mna.SolutionView;
+import bulwark.engine.mna.Stamp;
+
+/** Linear resistor between pins a and b; Ohm's law. */
+public final class Resistor extends TwoTerminal {
+	private final double ohms;
+
+	public Resistor(String name, int a, int b, double ohms) {
+		super(name, a, b);
 		if (!(ohms > 0) || Double.isInfinite(ohms)) {
 			throw new IllegalArgumentException(name + ": resistance must be positive and finite, was " + ohms);
 		}
+		this.ohms = ohms;
+	}
+
+	public double ohms() {
+		return ohms;
+	}
+
+	@Override
+	public String[] pinNames() {
+		return new String[] { "a", "b" };
+	}
+
+	@Override
+	public void stamp(Stamp s) {
+		s.conductance(a, b, 1.0 / ohms);
+	}
+
+	@Override
+	public double[] pinCurrents(SolutionView x) {
+		double i = (x.voltage(a) - x.voltage(b)) / ohms;
+		return new double[] { i, -i };
 	}
 }

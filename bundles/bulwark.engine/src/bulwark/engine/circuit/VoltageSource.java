@@ -1,19 +1,67 @@
 package bulwark.engine.circuit;
 
+import bulwark.engine.mna.SolutionView;
+import bulwark.engine.mna.Stamp;
+
 /**
- * An EMF of {@code volts} (plus pin = {@link #pinA()}, minus = {@link #pinB()}) in series with an internal
- * resistance, which may be zero (an ideal supply). A battery is this with its internal resistance
- * (Thevenin model). Its current is positive when it flows into the plus pin, i.e. while charging;
- * a source that delivers power has a negative current.
+ * An EMF of {@code volts} (plus pin a, minus pin b) in series with an internal resistance, which may be
+ * zero (an ideal supply). A battery is this with its internal resistance (Thevenin model). The branch
+ * current is the current into the plus pin; a source that delivers power has a negative one. The internal
+ * resistance enters the branch equation, v+ − v− − R·i = E, so no hidden net is needed.
  */
-public record VoltageSource(String name, int pinA, int pinB, double volts, double seriesOhms) implements Device {
-	public VoltageSource {
+public final class VoltageSource extends TwoTerminal {
+	private final double volts;
+	private final double seriesOhms;
+
+	public VoltageSource(String name, int plus, int minus, double volts, double seriesOhms) {
+		super(name, plus, minus);
 		if (!Double.isFinite(volts) || !(seriesOhms >= 0) || Double.isInfinite(seriesOhms)) {
 			throw new IllegalArgumentException(name + ": EMF must be finite and internal resistance non-negative");
 		}
+		this.volts = volts;
+		this.seriesOhms = seriesOhms;
 	}
 
 	public static VoltageSource ideal(String name, int plus, int minus, double volts) {
 		return new VoltageSource(name, plus, minus, volts, 0);
+	}
+
+	public double volts() {
+		return volts;
+	}
+
+	public double seriesOhms() {
+		return seriesOhms;
+	}
+
+	@Override
+	public String[] pinNames() {
+		return new String[] { "plus", "minus" };
+	}
+
+	@Override
+	public int branchCount() {
+		return 1;
+	}
+
+	@Override
+	public boolean idealVoltage() {
+		return seriesOhms == 0;
+	}
+
+	@Override
+	public void stamp(Stamp s) {
+		s.netBranch(a, 0, 1);
+		s.netBranch(b, 0, -1);
+		s.branchNet(0, a, 1);
+		s.branchNet(0, b, -1);
+		s.branchBranch(0, 0, -seriesOhms);
+		s.branchRhs(0, volts * s.sourceScale());
+	}
+
+	@Override
+	public double[] pinCurrents(SolutionView x) {
+		double i = x.branchCurrent(0);
+		return new double[] { i, -i };
 	}
 }

@@ -11,11 +11,20 @@ public final class DcSolution implements DcResult {
 	private final Circuit circuit;
 	private final double[] netVoltages;
 	private final Map<String, OperatingPoint> devices;
+	private final int iterations;
+	private final Strategy strategy;
 
-	DcSolution(Circuit circuit, double[] netVoltages, Map<String, OperatingPoint> devices) {
+	DcSolution(Circuit circuit, double[] netVoltages, Map<String, OperatingPoint> devices, int iterations,
+			Strategy strategy) {
 		this.circuit = circuit;
 		this.netVoltages = netVoltages.clone();
 		this.devices = Collections.unmodifiableMap(new LinkedHashMap<>(devices));
+		this.iterations = iterations;
+		this.strategy = strategy;
+	}
+
+	public Circuit circuit() {
+		return circuit;
 	}
 
 	public double voltage(String net) {
@@ -38,5 +47,14 @@ public final class DcSolution implements DcResult {
 	/** All devices in the order of the circuit. */
 	public Map<String, OperatingPoint> devices() {
 		return devices;
+	}
+
+	/** Newton iterations used in all, over every step of the strategy. */
+	public int iterations() {
+		return iterations;
+	}
+
+	public Strategy strategy() {
+		return strategy;
 	}
 }

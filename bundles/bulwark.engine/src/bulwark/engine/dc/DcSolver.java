@@ -1,26 +1,41 @@
 package bulwark.engine.dc;
 
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
-import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
 import bulwark.engine.circuit.Circuit;
-import bulwark.engine.circuit.CurrentSource;
 import bulwark.engine.circuit.Device;
-import bulwark.engine.circuit.Resistor;
-import bulwark.engine.circuit.VoltageSource;
 import bulwark.engine.linear.DenseLuSolver;
 import bulwark.engine.linear.LinearSolver;
 
 /**
- * Linear DC operating point by modified nodal analysis: one unknown per net other than the reference and
- * one branch current per voltage source (Ho, Ruehli and Brennan, "The modified nodal approach to network
- * analysis", IEEE Trans. Circuits and Systems 22(6), 1975). A source's internal resistance enters its
- * branch equation, v+ − v− − R·i = E, so a battery needs no extra net.
+ * DC operating point by modified nodal analysis (Ho, Ruehli and Brennan, "The modified nodal approach to
+ * network analysis", IEEE Trans. Circuits and Systems 22(6), 1975) and Newton–Raphson iteration on the
+ * devices' companion models, with the fall-backs of SPICE2 (Nagel, ERL memo M520, 1975) when plain Newton
+ * fails: gmin stepping, then source stepping. A circuit without nonlinear devices is solved in one step.
+ * Every outcome is a value: a {@link DcSolution} or a {@link SolveFailure} naming reason and place.
  */
 public final class DcSolver {
+	/** Iterations after which each Newton step is halved, to break out of oscillation. */
+	static final int DAMPING_AFTER = 60;
+	/** Largest conductance of gmin stepping, then divided by {@link #GMIN_FACTOR} down to {@link #GMIN_LAST}. */
+	static final double GMIN_FIRST = 1e-2;
+	static final double GMIN_LAST = 1e-12;
+	static final double GMIN_FACTOR = 10;
+	/** First and smallest step of source stepping, as fractions of the full source values. */
+	static final double SOURCE_STEP_FIRST = 0.1;
+	static final double SOURCE_STEP_SMALLEST = 1e-4;
+
+	private final Tolerances tolerances;
+
+	public DcSolver() {
+		this(Tolerances.DEFAULT);
+	}
+
+	public DcSolver(Tolerances tolerances) {
+		this.tolerances = tolerances;
+	}
 
 	public DcResult solve(Circuit circuit) {
 		if (circuit.devices().isEmpty()) {
@@ -30,83 +45,173 @@ public final class DcSolver {
 		if (structural.isPresent()) {
 			return structural.get();
 		}
-		int nodes = circuit.netCount() - 1;
-		List<VoltageSource> sources = new ArrayList<>();
-		for (Device d : circuit.devices()) {
-			if (d instanceof VoltageSource v) {
-				sources.add(v);
+		Layout layout = new Layout(circuit);
+		Assembly assembly = new Assembly(layout);
+		boolean nonlinear = circuit.devices().stream().anyMatch(Device::nonlinear);
+		double[] zero = new double[layout.size];
+
+		Attempt plain = newton(layout, assembly, zero, 1, 0, nonlinear);
+		if (plain.converged()) {
+			return solution(layout, assembly, plain.x, plain.iterations, Strategy.NEWTON);
+		}
+		if (plain.singularAt >= 0 && !nonlinear) {
+			return singular(layout, plain.singularAt);
+		}
+		int spent = plain.iterations;
+
+		// gmin stepping: a conductance from every net to the reference makes the matrix diagonally dominant;
+		// each solution seeds the next, smaller one, and the last run has none.
+		double[] x = zero;
+		boolean stepped = true;
+		for (double g = GMIN_FIRST; g >= GMIN_LAST * 0.999; g /= GMIN_FACTOR) {
+			Attempt a = newton(layout, assembly, x, 1, g, true);
+			spent += a.iterations;
+			if (!a.converged()) {
+				stepped = false;
+				break;
+			}
+			x = a.x;
+		}
+		if (stepped) {
+			Attempt last = newton(layout, assembly, x, 1, 0, true);
+			spent += last.iterations;
+			if (last.converged()) {
+				return solution(layout, assembly, last.x, spent, Strategy.GMIN_STEPPING);
 			}
 		}
-		int size = nodes + sources.size();
-		double[][] a = new double[size][size];
-		double[] rhs = new double[size];
-		for (Device d : circuit.devices()) {
-			if (d instanceof Resistor r) {
-				stampConductance(a, r.pinA(), r.pinB(), 1.0 / r.ohms());
-			} else if (d instanceof CurrentSource c) {
-				// amps leave pin a's net into the source and re-enter the circuit at pin b's net.
-				addTo(rhs, c.pinA(), -c.amps());
-				addTo(rhs, c.pinB(), c.amps());
-			}
-		}
-		for (int k = 0; k < sources.size(); k++) {
-			VoltageSource v = sources.get(k);
-			int row = nodes + k;
-			if (v.pinA() != Circuit.REFERENCE) {
-				a[v.pinA() - 1][row] += 1;
-				a[row][v.pinA() - 1] += 1;
-			}
-			if (v.pinB() != Circuit.REFERENCE) {
-				a[v.pinB() - 1][row] -= 1;
-				a[row][v.pinB() - 1] -= 1;
-			}
-			a[row][row] = -v.seriesOhms();
-			rhs[row] = v.volts();
-		}
-		LinearSolver lu = new DenseLuSolver();
-		if (!lu.factor(a)) {
-			int col = lu.singularColumn();
-			String place = col < nodes ? circuit.netName(col + 1) : sources.get(col - nodes).name();
-			return new SolveFailure(SolveFailure.Reason.SINGULAR_MATRIX, place,
-					"the nodal equations are singular at " + (col < nodes ? "net " : "source ") + place);
-		}
-		double[] x = new double[size];
-		lu.solve(rhs, x);
-		double[] v = new double[circuit.netCount()];
-		System.arraycopy(x, 0, v, 1, nodes);
-		Map<String, OperatingPoint> points = new LinkedHashMap<>();
-		int k = 0;
-		for (Device d : circuit.devices()) {
-			double across = v[d.pinA()] - v[d.pinB()];
-			double current;
-			if (d instanceof Resistor r) {
-				current = across / r.ohms();
-			} else if (d instanceof VoltageSource) {
-				current = x[nodes + k++];
+
+		// source stepping: every independent source ramps from zero, each step starting from the last solution.
+		x = zero;
+		double scale = 0;
+		double step = SOURCE_STEP_FIRST;
+		while (scale < 1) {
+			double next = Math.min(1, scale + step);
+			Attempt a = newton(layout, assembly, x, next, 0, true);
+			spent += a.iterations;
+			if (a.converged()) {
+				x = a.x;
+				scale = next;
+				step = Math.min(step * 2, 0.5);
 			} else {
-				current = ((CurrentSource) d).amps();
+				step /= 4;
+				if (step < SOURCE_STEP_SMALLEST) {
+					break;
+				}
 			}
-			points.put(d.name(), new OperatingPoint(d.name(), across, current, across * current));
 		}
-		return new DcSolution(circuit, v, points);
+		if (scale >= 1) {
+			return solution(layout, assembly, x, spent, Strategy.SOURCE_STEPPING);
+		}
+		if (plain.singularAt >= 0) {
+			return singular(layout, plain.singularAt);
+		}
+		String place = layout.place(plain.worst);
+		return new SolveFailure(SolveFailure.Reason.NO_CONVERGENCE, place,
+				"no convergence after " + spent + " iterations (Newton, gmin stepping, source stepping); "
+						+ "the largest last change was at " + layout.describe(plain.worst));
 	}
 
-	private static void stampConductance(double[][] a, int p, int q, double g) {
-		if (p != Circuit.REFERENCE) {
-			a[p - 1][p - 1] += g;
+	/** One Newton–Raphson run from x0 with the sources scaled and gmin to the reference. */
+	private Attempt newton(Layout layout, Assembly assembly, double[] x0, double scale, double nodeGmin,
+			boolean nonlinear) {
+		int n = layout.size;
+		double[] x = x0.clone();
+		double[] xNew = new double[n];
+		double[][] work = new double[n][];
+		LinearSolver lu = new DenseLuSolver();
+		assembly.resetStates();
+		boolean updateSmall = false;
+		int worst = 0;
+		for (int iteration = 1; iteration <= tolerances.maxIterations(); iteration++) {
+			boolean clean = assembly.assemble(x, scale, nodeGmin);
+			if (updateSmall && clean && residualSmall(layout, assembly, x)) {
+				return new Attempt(x, iteration - 1, -1, worst);
+			}
+			for (int i = 0; i < n; i++) {
+				work[i] = assembly.matrix[i].clone();
+			}
+			if (!lu.factor(work)) {
+				return new Attempt(null, iteration, lu.singularColumn(), lu.singularColumn());
+			}
+			lu.solve(assembly.rhs, xNew);
+			if (!nonlinear) {
+				return new Attempt(xNew.clone(), 1, -1, 0);
+			}
+			double worstRatio = -1;
+			updateSmall = true;
+			for (int i = 0; i < n; i++) {
+				if (!Double.isFinite(xNew[i])) {
+					return new Attempt(null, iteration, -1, i);
+				}
+				double tol = tolerances.relative() * Math.max(Math.abs(xNew[i]), Math.abs(x[i]))
+						+ (i < layout.nodes ? tolerances.voltage() : tolerances.current());
+				double ratio = Math.abs(xNew[i] - x[i]) / tol;
+				if (ratio > worstRatio) {
+					worstRatio = ratio;
+					worst = i;
+				}
+				updateSmall &= ratio <= 1;
+			}
+			if (iteration > DAMPING_AFTER) {
+				for (int i = 0; i < n; i++) {
+					xNew[i] = x[i] + 0.5 * (xNew[i] - x[i]);
+				}
+			}
+			double[] t = x;
+			x = xNew;
+			xNew = t;
 		}
-		if (q != Circuit.REFERENCE) {
-			a[q - 1][q - 1] += g;
-		}
-		if (p != Circuit.REFERENCE && q != Circuit.REFERENCE) {
-			a[p - 1][q - 1] -= g;
-			a[q - 1][p - 1] -= g;
-		}
+		return new Attempt(null, tolerances.maxIterations(), -1, worst);
 	}
 
-	private static void addTo(double[] rhs, int net, double amps) {
-		if (net != Circuit.REFERENCE) {
-			rhs[net - 1] += amps;
+	/** KCL (and branch equation) residual of the equations assembled at x, row by row. */
+	private boolean residualSmall(Layout layout, Assembly assembly, double[] x) {
+		int n = layout.size;
+		for (int i = 0; i < n; i++) {
+			double[] row = assembly.matrix[i];
+			double sum = -assembly.rhs[i];
+			double scale = Math.abs(assembly.rhs[i]);
+			for (int j = 0; j < n; j++) {
+				double term = row[j] * x[j];
+				sum += term;
+				scale = Math.max(scale, Math.abs(term));
+			}
+			double abs = i < layout.nodes ? tolerances.current() : tolerances.voltage();
+			if (Math.abs(sum) > tolerances.relative() * scale + abs) {
+				return false;
+			}
+		}
+		return true;
+	}
+
+	private static SolveFailure singular(Layout layout, int column) {
+		String place = layout.place(column);
+		return new SolveFailure(SolveFailure.Reason.SINGULAR_MATRIX, place,
+				"the nodal equations are singular at " + layout.describe(column));
+	}
+
+	private static DcSolution solution(Layout layout, Assembly assembly, double[] x, int iterations,
+			Strategy strategy) {
+		Circuit circuit = layout.circuit;
+		double[] v = new double[circuit.netCount()];
+		System.arraycopy(x, 0, v, 1, layout.nodes);
+		Map<String, OperatingPoint> points = new LinkedHashMap<>();
+		for (int i = 0; i < layout.devices.length; i++) {
+			Device d = layout.devices[i];
+			int[] pins = d.pins();
+			double[] pinV = new double[pins.length];
+			for (int p = 0; p < pins.length; p++) {
+				pinV[p] = v[pins[p]];
+			}
+			points.put(d.name(), new OperatingPoint(d.name(), d.pinNames(), pinV, d.pinCurrents(assembly.view(x, i))));
+		}
+		return new DcSolution(circuit, v, points, iterations, strategy);
+	}
+
+	/** Outcome of one Newton run: x when converged, else where it broke down. */
+	private record Attempt(double[] x, int iterations, int singularAt, int worst) {
+		boolean converged() {
+			return x != null;
 		}
 	}
 }

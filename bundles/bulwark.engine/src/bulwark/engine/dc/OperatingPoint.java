@@ -1,9 +1,43 @@
 package bulwark.engine.dc;
 
 /**
- * One device's DC operating point. {@code voltage} is V(pin a) − V(pin b); {@code current} flows into pin a
- * through the device; {@code power} = voltage · current is the power the device absorbs (negative for a
- * source that delivers power).
+ * One device's operating point: the voltage at each external pin (against the reference net) and the
+ * current into each pin. For two-pin devices {@link #voltage()} is V(first pin) − V(second pin) and
+ * {@link #current()} the current into the first pin. {@link #power()} is the power the device absorbs,
+ * Σ V·I over its pins (negative for a source that delivers power).
  */
-public record OperatingPoint(String device, double voltage, double current, double power) {
+public record OperatingPoint(String device, String[] pinNames, double[] pinVoltages, double[] pinCurrents) {
+
+	public double voltage() {
+		return pinVoltages[0] - pinVoltages[1];
+	}
+
+	public double current() {
+		return pinCurrents[0];
+	}
+
+	public double power() {
+		double p = 0;
+		for (int i = 0; i < pinVoltages.length; i++) {
+			p += pinVoltages[i] * pinCurrents[i];
+		}
+		return p;
+	}
+
+	public double pinVoltage(String pin) {
+		return pinVoltages[index(pin)];
+	}
+
+	public double pinCurrent(String pin) {
+		return pinCurrents[index(pin)];
+	}
+
+	private int index(String pin) {
+		for (int i = 0; i < pinNames.length; i++) {
+			if (pinNames[i].equals(pin)) {
+				return i;
+			}
+		}
+		throw new IllegalArgumentException(device + " has no pin " + pin);
+	}
 }

@@ -13,6 +13,8 @@ public record SolveFailure(Reason reason, String place, String message) implemen
 		VOLTAGE_SOURCE_LOOP,
 		/** The system matrix has no usable pivot although the topology looked sound. */
 		SINGULAR_MATRIX,
+		/** Newton's method, gmin stepping and source stepping all failed to converge. */
+		NO_CONVERGENCE,
 		/** The circuit has no device at all. */
 		EMPTY_CIRCUIT
 	}

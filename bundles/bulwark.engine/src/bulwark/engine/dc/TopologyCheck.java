@@ -5,13 +5,11 @@ import java.util.List;
 import java.util.Optional;
 
 import bulwark.engine.circuit.Circuit;
-import bulwark.engine.circuit.CurrentSource;
 import bulwark.engine.circuit.Device;
-import bulwark.engine.circuit.VoltageSource;
 
 /**
  * Finds the two structural faults that make the nodal equations singular before any arithmetic is done,
- * so that the failure can name the net or source responsible: a net without a DC path to the reference,
+ * so that the failure can name the net or device responsible: a net without a DC path to the reference,
  * and a loop of ideal voltage sources.
  */
 final class TopologyCheck {
@@ -20,25 +18,31 @@ final class TopologyCheck {
 
 	static Optional<SolveFailure> check(Circuit circuit) {
 		int n = circuit.netCount();
-		// Loops of ideal sources: union-find over nets joined by zero-resistance sources.
+		// Loops of ideal sources: union-find over nets joined by zero-resistance voltage devices.
 		int[] parent = identity(n);
 		for (Device d : circuit.devices()) {
-			if (d instanceof VoltageSource v && v.seriesOhms() == 0) {
-				int a = find(parent, v.pinA());
-				int b = find(parent, v.pinB());
+			if (d.idealVoltage()) {
+				int a = find(parent, d.pins()[0]);
+				int b = find(parent, d.pins()[1]);
 				if (a == b) {
-					return Optional.of(new SolveFailure(SolveFailure.Reason.VOLTAGE_SOURCE_LOOP, v.name(),
-							v.name() + " closes a loop of ideal voltage sources between nets "
-									+ circuit.netName(v.pinA()) + " and " + circuit.netName(v.pinB())));
+					return Optional.of(new SolveFailure(SolveFailure.Reason.VOLTAGE_SOURCE_LOOP, d.name(),
+							d.name() + " closes a loop of ideal voltage sources between nets "
+									+ circuit.netName(d.pins()[0]) + " and " + circuit.netName(d.pins()[1])));
 				}
 				parent[a] = b;
 			}
 		}
-		// DC paths: every device but a current source fixes a relation between its nets' voltages.
+		// DC paths: a device that conducts at DC ties all its nets (pins and internal ones) together.
 		int[] group = identity(n);
 		for (Device d : circuit.devices()) {
-			if (!(d instanceof CurrentSource)) {
-				group[find(group, d.pinA())] = find(group, d.pinB());
+			if (d.conductsAtDc()) {
+				int first = d.pins()[0];
+				for (int p : d.pins()) {
+					group[find(group, p)] = find(group, first);
+				}
+				for (int p : d.internalNets()) {
+					group[find(group, p)] = find(group, first);
+				}
 			}
 		}
 		int root = find(group, Circuit.REFERENCE);

@@ -1,0 +1,95 @@
+package bulwark.engine.circuit;
+
+import bulwark.engine.device.DiodeModel;
+import bulwark.engine.mna.SolutionView;
+import bulwark.engine.mna.Stamp;
+
+/**
+ * A junction diode (also a zener or an LED, by its model's parameters) from anode to cathode. With a series
+ * resistance the junction sits between an internal net and the cathode. Nonlinear: stamped as its
+ * companion model, g = dI/dv and I(v) − g·v, at the limited junction voltage.
+ */
+public final class Diode implements Device {
+	private final String name;
+	private final int anode;
+	private final int cathode;
+	private final int junction;
+	private final DiodeModel model;
+
+	/**
+	 * @param junction the internal net between series resistance and junction; must be the anode when the
+	 *                 model has no series resistance (see {@link Circuit.Builder#diode})
+	 */
+	public Diode(String name, int anode, int cathode, int junction, DiodeModel model) {
+		if ((model.seriesOhms() > 0) == (junction == anode)) {
+			throw new IllegalArgumentException(name + ": an internal net is needed exactly when Rs > 0");
+		}
+		this.name = name;
+		this.anode = anode;
+		this.cathode = cathode;
+		this.junction = junction;
+		this.model = model;
+	}
+
+	public DiodeModel model() {
+		return model;
+	}
+
+	@Override
+	public String name() {
+		return name;
+	}
+
+	@Override
+	public int[] pins() {
+		return new int[] { anode, cathode };
+	}
+
+	@Override
+	public String[] pinNames() {
+		return new String[] { "anode", "cathode" };
+	}
+
+	@Override
+	public int[] internalNets() {
+		return junction == anode ? new int[0] : new int[] { junction };
+	}
+
+	@Override
+	public int stateSize() {
+		return 2; // last junction voltage, and whether there is one
+	}
+
+	@Override
+	public boolean nonlinear() {
+		return true;
+	}
+
+	@Override
+	public void stamp(Stamp s) {
+		if (junction != anode) {
+			s.conductance(anode, junction, 1 / model.seriesOhms());
+		}
+		double v = s.voltage(junction) - s.voltage(cathode);
+		double[] state = s.state();
+		if (state[1] != 0) {
+			double limited = model.limit(v, state[0]);
+			if (limited != v) {
+				s.notConverged();
+				v = limited;
+			}
+		}
+		state[0] = v;
+		state[1] = 1;
+		double g = model.conductance(v);
+		double i = model.current(v);
+		s.conductance(junction, cathode, g);
+		s.current(junction, cathode, i - g * v);
+	}
+
+	@Override
+	public double[] pinCurrents(SolutionView x) {
+		double i = model.current(x.voltage(junction) - x.voltage(cathode));
+		return new double[] { i, -i };
+	}
+}

@@ -1,0 +1,130 @@
+package bulwark.engine.dc;
+
+import java.util.Arrays;
+
+import bulwark.engine.mna.SolutionView;
+import bulwark.engine.mna.Stamp;
+
+/**
+ * The nodal equations at one iterate: every device adds its stamp to a dense matrix and right-hand side.
+ * Also serves as the {@link SolutionView} devices read their pin currents from.
+ */
+final class Assembly implements Stamp, SolutionView {
+	private final Layout layout;
+	final double[][] matrix;
+	final double[] rhs;
+	private final double[][] states;
+	private double[] x;
+	private int device;
+	private boolean limited;
+	private double sourceScale = 1;
+	private double nodeGmin;
+
+	Assembly(Layout layout) {
+		this.layout = layout;
+		matrix = new double[layout.size][layout.size];
+		rhs = new double[layout.size];
+		states = new double[layout.devices.length][];
+		for (int i = 0; i < states.length; i++) {
+			states[i] = new double[layout.devices[i].stateSize()];
+		}
+	}
+
+	/** Builds the equations at iterate x. Returns false if some device limited a junction voltage. */
+	boolean assemble(double[] iterate, double scale, double gminToReference) {
+		x = iterate;
+		sourceScale = scale;
+		nodeGmin = gminToReference;
+		limited = false;
+		for (double[] row : matrix) {
+			Arrays.fill(row, 0);
+		}
+		Arrays.fill(rhs, 0);
+		for (device = 0; device < layout.devices.length; device++) {
+			layout.devices[device].stamp(this);
+		}
+		if (nodeGmin > 0) {
+			for (int i = 0; i < layout.nodes; i++) {
+				matrix[i][i] += nodeGmin;
+			}
+		}
+		return !limited;
+	}
+
+	/** Forgets the devices' memory of earlier iterates, before a fresh Newton run. */
+	void resetStates() {
+		for (double[] s : states) {
+			java.util.Arrays.fill(s, 0);
+		}
+	}
+
+	/** Binds the view to one device of a solution, to read its pin currents. */
+	SolutionView view(double[] solution, int deviceIndex) {
+		x = solution;
+		device = deviceIndex;
+		return this;
+	}
+
+	@Override
+	public double voltage(int net) {
+		return net == 0 ? 0 : x[net - 1];
+	}
+
+	@Override
+	public double branchCurrent(int k) {
+		return x[layout.branchOffset[device] + k];
+	}
+
+	@Override
+	public void netNet(int rowNet, int colNet, double value) {
+		if (rowNet != 0 && colNet != 0) {
+			matrix[rowNet - 1][colNet - 1] += value;
+		}
+	}
+
+	@Override
+	public void netBranch(int rowNet, int k, double value) {
+		if (rowNet != 0) {
+			matrix[rowNet - 1][layout.branchOffset[device] + k] += value;
+		}
+	}
+
+	@Override
+	public void branchNet(int k, int colNet, double value) {
+		if (colNet != 0) {
+			matrix[layout.branchOffset[device] + k][colNet - 1] += value;
+		}
+	}
+
+	@Override
+	public void branchBranch(int k, int j, double value) {
+		matrix[layout.branchOffset[device] + k][layout.branchOffset[device] + j] += value;
+	}
+
+	@Override
+	public void injectNet(int net, double amps) {
+		if (net != 0) {
+			rhs[net - 1] += amps;
+		}
+	}
+
+	@Override
+	public void branchRhs(int k, double value) {
+		rhs[layout.branchOffset[device] + k] += value;
+	}
+
+	@Override
+	public double sourceScale() {
+		return sourceScale;
+	}
+
+	@Override
+	public double[] state() {
+		return states[device];
+	}
+
+	@Override
+	public void notConverged() {
+		limited = true;
+	}
+}
