@@ -65,7 +65,7 @@ public class Application implements IApplication {
 									first = first == null ? editor : first;
 								}
 							}
-							if (snapshot != null && first != null) {
+							if (snapshot != null) {
 								Snapshot.whenChecked(c.getWindow(), first, snapshot);
 							}
 						}

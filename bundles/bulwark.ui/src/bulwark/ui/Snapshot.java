@@ -28,7 +28,13 @@ final class Snapshot {
 	private Snapshot() {
 	}
 
+	/** With no editor (no design named, or it did not open) it writes what it has at once. */
 	static void whenChecked(IWorkbenchWindow window, DesignEditor editor, Path file) {
+		if (editor == null) {
+			write(window, null, null, file);
+			PlatformUI.getWorkbench().close();
+			return;
+		}
 		long deadline = System.currentTimeMillis() + DEADLINE_MS;
 		Display display = window.getShell().getDisplay();
 		Runnable[] poll = new Runnable[1];
@@ -47,7 +53,9 @@ final class Snapshot {
 
 	private static void write(IWorkbenchWindow window, DesignEditor editor, DesignResult result, Path file) {
 		List<String> lines = new ArrayList<>();
-		if (result == null) {
+		if (editor == null) {
+			lines.add("no design editor was opened");
+		} else if (result == null) {
 			lines.add("no check result before the deadline");
 		} else {
 			for (FindingAnnotation a : editor.findingAnnotations()) {
