@@ -10,7 +10,8 @@ import java.util.List;
 import org.eclipse.xtext.util.CancelIndicator;
 import org.eclipse.xtext.validation.Issue;
 
-import bulwark.check.compile.CaseGenerator;
+import bulwark.check.compile.CaseOutcome;
+import bulwark.check.compile.CaseRunner;
 import bulwark.check.compile.CompiledDesign;
 import bulwark.check.compile.DesignCompiler;
 import bulwark.check.compile.FaultCase;
@@ -22,7 +23,6 @@ import bulwark.check.rules.RuleRegistry;
 import bulwark.check.rules.SolvedCase;
 import bulwark.engine.dc.DcResult;
 import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.DcSolver;
 import bulwark.engine.dc.SolveFailure;
 import bulwark.lang.design.Design;
 import bulwark.lang.design.DesignPackage;
@@ -74,9 +74,9 @@ public final class DesignChecker {
 		List<SolvedCase> solved = new ArrayList<>();
 		List<CaseResult> caseResults = new ArrayList<>();
 		boolean solverFailed = false;
-		DcSolver solver = new DcSolver();
-		for (FaultCase c : CaseGenerator.cases(compiled)) {
-			DcResult result = solver.solve(compiled.circuit().plus(c.added()));
+		for (CaseOutcome outcome : CaseRunner.run(compiled)) {
+			FaultCase c = outcome.faultCase();
+			DcResult result = outcome.result();
 			if (result instanceof DcSolution solution) {
 				solved.add(new SolvedCase(c, solution));
 				caseResults.add(new CaseResult(c.name(), c.kind(), true, Stresses.of(compiled, solution)));

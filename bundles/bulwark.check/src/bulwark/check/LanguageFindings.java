@@ -3,11 +3,11 @@ package bulwark.check;
 import org.eclipse.xtext.validation.Issue;
 
 /** Language issues as findings: parse errors under concern syntax, everything else under structure. */
-final class LanguageFindings {
+public final class LanguageFindings {
 	private LanguageFindings() {
 	}
 
-	static Finding of(Issue issue) {
+	public static Finding of(Issue issue) {
 		Severity severity;
 		switch (issue.getSeverity()) {
 		case ERROR:

@@ -14,10 +14,8 @@ import java.util.List;
 import bulwark.check.DesignChecker;
 import bulwark.check.DesignResult;
 import bulwark.check.Status;
-import bulwark.check.load.DesignLoader;
 import bulwark.check.report.JsonReport;
 import bulwark.check.report.TextReport;
-import bulwark.lang.BulwarkStandaloneSetup;
 
 /** Checks a list of design files and writes the report; shared by the check and demo commands. */
 final class Checks {
@@ -30,8 +28,7 @@ final class Checks {
 			err.println("bulwark: no design files (*" + DesignFiles.EXTENSION + ") found in " + paths);
 			return ExitCodes.USAGE;
 		}
-		DesignChecker checker = new DesignChecker(
-				new DesignLoader(new BulwarkStandaloneSetup().createInjectorAndDoEMFRegistration()));
+		DesignChecker checker = Language.checker();
 		List<DesignResult> results = new ArrayList<>();
 		for (Path f : files) {
 			results.add(checker.check(f));

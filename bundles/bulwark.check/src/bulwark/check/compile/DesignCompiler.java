@@ -4,6 +4,8 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
 
+import bulwark.engine.circuit.Bjt;
+import bulwark.engine.circuit.Bjt.Polarity;
 import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.circuit.VoltageSource;
@@ -11,6 +13,7 @@ import bulwark.lang.design.Design;
 import bulwark.lang.design.Member;
 import bulwark.lang.design.Net;
 import bulwark.lang.design.Part;
+import bulwark.lang.design.PartKind;
 import bulwark.lang.design.PinBinding;
 
 /**
@@ -45,6 +48,18 @@ public final class DesignCompiler {
 			case BATTERY:
 				builder.add(new VoltageSource(part.getName(), pin(builder, part, "plus"), pin(builder, part, "minus"),
 						required(part, "emf"), Settings.parameter(part, "resistance").orElse(0.0)));
+				break;
+			case DIODE:
+			case ZENER:
+			case LED:
+				builder.diode(part.getName(), pin(builder, part, "anode"), pin(builder, part, "cathode"),
+						DeviceModels.diode(part));
+				break;
+			case NPN:
+			case PNP:
+				builder.add(new Bjt(part.getName(), pin(builder, part, "collector"), pin(builder, part, "base"),
+						pin(builder, part, "emitter"), part.getKind() == PartKind.NPN ? Polarity.NPN : Polarity.PNP,
+						DeviceModels.bjt(part)));
 				break;
 			default:
 				throw new IllegalArgumentException("no engine model for " + part.getKind());

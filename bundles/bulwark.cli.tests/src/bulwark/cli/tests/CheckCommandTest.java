@@ -112,7 +112,7 @@ class CheckCommandTest {
 	void folderIsSearchedAndHelpMentionsSafety() {
 		CliRun run = CliRun.of("check", CliRun.root().resolve("examples").toString());
 		assertEquals(1, run.exitCode(), run.err());
-		assertTrue(run.err().contains("3 design(s) checked: 2 pass, 1 fail, 0 not checked"), run.err());
+		assertTrue(run.err().contains("4 design(s) checked: 3 pass, 1 fail, 0 not checked"), run.err());
 		CliRun help = CliRun.of("--help");
 		assertEquals(0, help.exitCode());
 		assertTrue(help.out().contains("IEC 61010-1"), help.out());

@@ -84,6 +84,38 @@ class BulwarkParsingTest {
 	}
 
 	@Test
+	void bareprefixIsExplained() throws Exception {
+		Design d = parser.parse("design \"x\"\nreference net gnd\nnet a\nresistor R1 (a: a, b: gnd) { value 10k }\n");
+		List<Diagnostic> errors = d.eResource().getErrors();
+		assertEquals(1, errors.size(), errors.toString());
+		assertEquals("'k' after 10 is only a prefix: write the unit too, for example 10 kΩ", errors.get(0).getMessage());
+		assertEquals(4, errors.get(0).getLine());
+	}
+
+	@Test
+	void unknownUnitWordIsExplained() throws Exception {
+		Design d = parser.parse("design \"x\"\nreference net gnd\nnet a\nsource V1 (plus: a, minus: gnd) { voltage 5 volts }\n");
+		List<Diagnostic> errors = d.eResource().getErrors();
+		assertEquals(1, errors.size(), errors.toString());
+		assertTrue(errors.get(0).getMessage().startsWith("'volts' after 5 is not a unit Bulwark knows"),
+				errors.get(0).getMessage());
+	}
+
+	@Test
+	void namesThatStartLikeUnitsAreNames() throws Exception {
+		Design d = parser.parse("""
+				design "x"
+				reference net gnd
+				net Vcc
+				net mA_sense
+				source V1 (plus: Vcc, minus: gnd) { voltage 5V }
+				resistor R1 (a: Vcc, b: mA_sense) { value 10kΩ }
+				resistor R2 (a: mA_sense, b: gnd) { value 1 kohm }
+				""");
+		validation.assertNoIssues(d);
+	}
+
+	@Test
 	void syntaxErrorHasLineAndColumn() throws Exception {
 		Design d = parser.parse("""
 				design "x"

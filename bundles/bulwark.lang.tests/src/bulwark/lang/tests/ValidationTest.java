@@ -29,14 +29,16 @@ class ValidationTest {
 
 	@Test
 	void unitIsRequired() throws Exception {
-		Design d = parse("resistor R1 (a: a, b: gnd) { value 10 k }");
-		validation.assertError(d, DesignPackage.Literals.QUANTITY, IssueCodes.UNKNOWN_UNIT, "only a prefix");
+		Design d = parse("resistor R1 (a: a, b: gnd) { value 10 }");
+		validation.assertError(d, DesignPackage.Literals.QUANTITY, IssueCodes.MISSING_UNIT,
+				"value needs its unit: write for example 10 Ω");
 	}
 
 	@Test
-	void unknownUnit() throws Exception {
-		validation.assertError(parse("resistor R1 (a: a, b: gnd) { value 10 furlong }"),
-				DesignPackage.Literals.QUANTITY, IssueCodes.UNKNOWN_UNIT, "not a unit");
+	void plainNumberTakesNoUnit() throws Exception {
+		Design d = parse("npn Q1 (collector: a, base: a, emitter: gnd) { beta 100 V }");
+		validation.assertError(d, DesignPackage.Literals.QUANTITY, IssueCodes.UNEXPECTED_UNIT, "plain number");
+		validation.assertNoErrors(parse("npn Q1 (collector: a, base: a, emitter: gnd) { beta 100 }"));
 	}
 
 	@Test
@@ -50,6 +52,19 @@ class ValidationTest {
 		Design d = parse("resistor R1 (plus: a, b: gnd) { value 1 kΩ }");
 		validation.assertError(d, DesignPackage.Literals.PIN_BINDING, IssueCodes.UNKNOWN_PIN, "its pins are a, b");
 		validation.assertError(d, DesignPackage.Literals.PART, IssueCodes.MISSING_PIN, "leaves pin a unconnected");
+	}
+
+	@Test
+	void zenerNeedsItsVoltage() throws Exception {
+		validation.assertError(parse("zener Z1 (anode: gnd, cathode: a) { }"), DesignPackage.Literals.PART,
+				IssueCodes.MISSING_PARAMETER, "needs its breakdown");
+		validation.assertNoErrors(parse("zener Z1 (anode: gnd, cathode: a) { breakdown 5.1 V }"));
+	}
+
+	@Test
+	void transistorPins() throws Exception {
+		validation.assertError(parse("pnp Q1 (collector: a, base: a, drain: gnd) { }"), DesignPackage.Literals.PIN_BINDING,
+				IssueCodes.UNKNOWN_PIN, "its pins are collector, base, emitter");
 	}
 
 	@Test

@@ -25,6 +25,44 @@ public final class KindCatalog {
 					new SettingSpec("capacity", Unit.AMPERE_HOUR, false, "rated capacity")),
 			List.of());
 
+	// Diode parameters are those of the engine's junction model (bulwark.engine.device.DiodeModel).
+	private static final List<SettingSpec> JUNCTION = List.of(
+			new SettingSpec("saturation", Unit.AMPERE, false, "saturation current Is (10 fA when omitted)"),
+			new SettingSpec("emission", null, false, "emission coefficient n (1 when omitted)"),
+			new SettingSpec("resistance", Unit.OHM, false, "series resistance (0 Ω when omitted)"),
+			new SettingSpec("breakdown", Unit.VOLT, false, "reverse breakdown voltage (none when omitted)"),
+			new SettingSpec("knee", Unit.AMPERE, false, "reverse current at the breakdown voltage (1 mA when omitted)"));
+	private static final List<SettingSpec> JUNCTION_RATINGS = List.of(
+			new SettingSpec("reverse", Unit.VOLT, false, "rated reverse voltage"),
+			new SettingSpec("forward", Unit.AMPERE, false, "rated forward current"),
+			new SettingSpec("power", Unit.WATT, false, "rated power"));
+	private static final KindSpec DIODE = new KindSpec("diode", List.of("anode", "cathode"), JUNCTION, JUNCTION_RATINGS);
+	private static final KindSpec ZENER = new KindSpec("zener", List.of("anode", "cathode"),
+			List.of(new SettingSpec("breakdown", Unit.VOLT, true, "zener voltage"),
+					new SettingSpec("knee", Unit.AMPERE, false, "current at the zener voltage (5 mA when omitted)"),
+					new SettingSpec("saturation", Unit.AMPERE, false, "saturation current Is (10 fA when omitted)"),
+					new SettingSpec("emission", null, false, "emission coefficient n (1 when omitted)"),
+					new SettingSpec("resistance", Unit.OHM, false, "series resistance (0 Ω when omitted)")),
+			JUNCTION_RATINGS);
+	private static final KindSpec LED = new KindSpec("led", List.of("anode", "cathode"),
+			List.of(new SettingSpec("forward", Unit.VOLT, true, "forward voltage at 20 mA"),
+					new SettingSpec("emission", null, false, "emission coefficient n (2 when omitted)"),
+					new SettingSpec("resistance", Unit.OHM, false, "series resistance (0 Ω when omitted)")),
+			JUNCTION_RATINGS);
+	private static final List<SettingSpec> TRANSISTOR = List.of(
+			new SettingSpec("beta", null, false, "forward current gain βF (100 when omitted)"),
+			new SettingSpec("reverse_beta", null, false, "reverse current gain βR (1 when omitted)"),
+			new SettingSpec("saturation", Unit.AMPERE, false, "saturation current Is (10 fA when omitted)"),
+			new SettingSpec("breakdown", Unit.VOLT, false, "reverse base-emitter breakdown voltage (6 V when omitted)"));
+	private static final List<SettingSpec> TRANSISTOR_RATINGS = List.of(
+			new SettingSpec("collector_emitter", Unit.VOLT, false, "rated collector-emitter voltage"),
+			new SettingSpec("emitter_base", Unit.VOLT, false, "rated reverse base-emitter voltage"),
+			new SettingSpec("collector", Unit.AMPERE, false, "rated collector current"),
+			new SettingSpec("power", Unit.WATT, false, "rated power"));
+	private static final List<String> BJT_PINS = List.of("collector", "base", "emitter");
+	private static final KindSpec NPN = new KindSpec("npn", BJT_PINS, TRANSISTOR, TRANSISTOR_RATINGS);
+	private static final KindSpec PNP = new KindSpec("pnp", BJT_PINS, TRANSISTOR, TRANSISTOR_RATINGS);
+
 	private KindCatalog() {
 	}
 
@@ -36,6 +74,16 @@ public final class KindCatalog {
 			return SOURCE;
 		case BATTERY:
 			return BATTERY;
+		case DIODE:
+			return DIODE;
+		case ZENER:
+			return ZENER;
+		case LED:
+			return LED;
+		case NPN:
+			return NPN;
+		case PNP:
+			return PNP;
 		default:
 			throw new IllegalArgumentException("no specification for " + kind);
 		}

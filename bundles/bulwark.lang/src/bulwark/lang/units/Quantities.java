@@ -9,10 +9,13 @@ public final class Quantities {
 	private Quantities() {
 	}
 
-	/** The SI value, or empty when the unit is not one Bulwark knows (the validator reports that). */
+	/** The SI value (the number itself when no unit is written), or empty for a unit Bulwark does not know. */
 	public static Optional<Double> si(Quantity q) {
 		if (q == null || q.getMagnitude() == null) {
 			return Optional.empty();
+		}
+		if (q.getUnit() == null) {
+			return Optional.of(Double.parseDouble(q.getMagnitude()));
 		}
 		return UnitParser.parse(q.getUnit()).map(u -> Double.parseDouble(q.getMagnitude()) * u.factor());
 	}

@@ -125,28 +125,41 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 
 	private void checkUnit(Setting s, SettingSpec spec) {
 		Quantity q = s.getValue();
-		if (q == null || q.getUnit() == null) {
+		if (q == null || q.getMagnitude() == null) {
 			return;
 		}
-		Optional<ScaledUnit> unit = UnitParser.parse(q.getUnit());
-		if (unit.isEmpty()) {
-			String hint = UnitParser.isBarePrefix(q.getUnit())
-					? "'" + q.getUnit() + "' is only a prefix: write the unit too, for example " + q.getMagnitude() + " "
-							+ q.getUnit() + spec.unit().symbol()
-					: "'" + q.getUnit() + "' is not a unit Bulwark knows; " + s.getName() + " is in " + spec.unit().symbol();
-			error(hint, q, DesignPackage.Literals.QUANTITY__UNIT, IssueCodes.UNKNOWN_UNIT);
-			return;
+		double value;
+		if (spec.unit() == null) {
+			if (q.getUnit() != null) {
+				error(s.getName() + " is a plain number: write it without a unit", q,
+						DesignPackage.Literals.QUANTITY__UNIT, IssueCodes.UNEXPECTED_UNIT);
+				return;
+			}
+			value = Double.parseDouble(q.getMagnitude());
+		} else {
+			if (q.getUnit() == null) {
+				error(s.getName() + " needs its unit: write for example " + q.getMagnitude() + " "
+						+ spec.unit().symbol(), q, DesignPackage.Literals.QUANTITY__MAGNITUDE, IssueCodes.MISSING_UNIT);
+				return;
+			}
+			Optional<ScaledUnit> unit = UnitParser.parse(q.getUnit());
+			if (unit.isEmpty()) {
+				error("'" + q.getUnit() + "' is not a unit Bulwark knows; " + s.getName() + " is in "
+						+ spec.unit().symbol(), q, DesignPackage.Literals.QUANTITY__UNIT, IssueCodes.UNKNOWN_UNIT);
+				return;
+			}
+			if (unit.get().unit() != spec.unit()) {
+				error(s.getName() + " is a " + spec.unit().quantity() + " (" + spec.unit().symbol() + "), not a "
+						+ unit.get().unit().quantity() + " (" + unit.get().unit().symbol() + ")", q,
+						DesignPackage.Literals.QUANTITY__UNIT, IssueCodes.WRONG_UNIT);
+				return;
+			}
+			value = Double.parseDouble(q.getMagnitude()) * unit.get().factor();
 		}
-		if (unit.get().unit() != spec.unit()) {
-			error(s.getName() + " is a " + spec.unit().quantity() + " (" + spec.unit().symbol() + "), not a "
-					+ unit.get().unit().quantity() + " (" + unit.get().unit().symbol() + ")", q,
-					DesignPackage.Literals.QUANTITY__UNIT, IssueCodes.WRONG_UNIT);
-			return;
-		}
-		double value = Double.parseDouble(q.getMagnitude()) * unit.get().factor();
-		boolean mayBeZero = s instanceof Parameter && ("resistance".equals(s.getName()) || "voltage".equals(s.getName())
+		boolean isParameter = s instanceof Parameter;
+		boolean mayBeZero = isParameter && ("resistance".equals(s.getName()) || "voltage".equals(s.getName())
 				|| "emf".equals(s.getName()));
-		boolean mayBeNegative = s instanceof Parameter && ("voltage".equals(s.getName()) || "emf".equals(s.getName()));
+		boolean mayBeNegative = isParameter && ("voltage".equals(s.getName()) || "emf".equals(s.getName()));
 		if (value < 0 && !mayBeNegative || value == 0 && !mayBeZero) {
 			error(s.getName() + " must be " + (mayBeZero ? "zero or more" : "more than zero"), q,
 					DesignPackage.Literals.QUANTITY__MAGNITUDE, IssueCodes.VALUE_OUT_OF_RANGE);

@@ -1,0 +1,26 @@
+package bulwark.cli;
+
+import com.google.inject.Injector;
+
+import bulwark.check.DesignChecker;
+import bulwark.check.load.DesignLoader;
+import bulwark.lang.BulwarkStandaloneSetup;
+
+/** The language runtime, set up once per run (building the injector is most of the start-up time). */
+final class Language {
+	private static Injector injector;
+
+	private Language() {
+	}
+
+	static synchronized DesignLoader loader() {
+		if (injector == null) {
+			injector = new BulwarkStandaloneSetup().createInjectorAndDoEMFRegistration();
+		}
+		return new DesignLoader(injector);
+	}
+
+	static DesignChecker checker() {
+		return new DesignChecker(loader());
+	}
+}
