@@ -2,6 +2,7 @@ package bulwark.engine.dc;
 
 import java.util.Arrays;
 
+import bulwark.engine.linear.CscMatrix;
 import bulwark.engine.mna.SolutionView;
 import bulwark.engine.mna.Stamp;
 
@@ -11,7 +12,7 @@ import bulwark.engine.mna.Stamp;
  */
 final class Assembly implements Stamp, SolutionView {
 	private final Layout layout;
-	final double[][] matrix;
+	final CscMatrix matrix;
 	final double[] rhs;
 	private final double[][] states;
 	private double[] x;
@@ -22,7 +23,7 @@ final class Assembly implements Stamp, SolutionView {
 
 	Assembly(Layout layout) {
 		this.layout = layout;
-		matrix = new double[layout.size][layout.size];
+		matrix = layout.pattern.copy();
 		rhs = new double[layout.size];
 		states = new double[layout.devices.length][];
 		for (int i = 0; i < states.length; i++) {
@@ -36,16 +37,16 @@ final class Assembly implements Stamp, SolutionView {
 		sourceScale = scale;
 		nodeGmin = gminToReference;
 		limited = false;
-		for (double[] row : matrix) {
-			Arrays.fill(row, 0);
-		}
+		matrix.clear();
 		Arrays.fill(rhs, 0);
+		cursor = 0;
 		for (device = 0; device < layout.devices.length; device++) {
 			layout.devices[device].stamp(this);
 		}
+		recording = false;
 		if (nodeGmin > 0) {
 			for (int i = 0; i < layout.nodes; i++) {
-				matrix[i][i] += nodeGmin;
+				add(i, i, nodeGmin);
 			}
 		}
 		return !limited;
@@ -78,27 +79,67 @@ final class Assembly implements Stamp, SolutionView {
 	@Override
 	public void netNet(int rowNet, int colNet, double value) {
 		if (rowNet != 0 && colNet != 0) {
-			matrix[rowNet - 1][colNet - 1] += value;
+			add(rowNet - 1, colNet - 1, value);
 		}
 	}
 
 	@Override
 	public void netBranch(int rowNet, int k, double value) {
 		if (rowNet != 0) {
-			matrix[rowNet - 1][layout.branchOffset[device] + k] += value;
+			add(rowNet - 1, layout.branchOffset[device] + k, value);
 		}
 	}
 
 	@Override
 	public void branchNet(int k, int colNet, double value) {
 		if (colNet != 0) {
-			matrix[layout.branchOffset[device] + k][colNet - 1] += value;
+			add(layout.branchOffset[device] + k, colNet - 1, value);
 		}
 	}
 
 	@Override
 	public void branchBranch(int k, int j, double value) {
-		matrix[layout.branchOffset[device] + k][layout.branchOffset[device] + j] += value;
+		add(layout.branchOffset[device] + k, layout.branchOffset[device] + j, value);
+	}
+
+	/**
+	 * Devices stamp the same places in the same order at every iterate, so the slots found by the first
+	 * assembly are replayed afterwards; each replayed call is checked against the recorded (row, column)
+	 * and falls back to a search when it differs.
+	 */
+	private int[] replayRow = new int[64], replayCol = new int[64], replaySlot = new int[64];
+	private int replayLength;
+	private int cursor;
+	private boolean recording = true;
+
+	private void add(int row, int col, double value) {
+		int slot;
+		if (!recording && cursor < replayLength && replayRow[cursor] == row && replayCol[cursor] == col) {
+			slot = replaySlot[cursor++];
+		} else {
+			slot = matrix.slot(row, col);
+			if (recording) {
+				record(row, col, slot);
+			} else {
+				cursor++;
+			}
+		}
+		if (slot < 0) {
+			// a device stamped a place its dry run did not: a bug in that device, never a user error
+			throw new IllegalStateException(layout.devices[device].name() + " stamped outside its pattern");
+		}
+		matrix.addAt(slot, value);
+	}
+
+	private void record(int row, int col, int slot) {
+		if (replayLength == replayRow.length) {
+			replayRow = java.util.Arrays.copyOf(replayRow, 2 * replayLength);
+			replayCol = java.util.Arrays.copyOf(replayCol, 2 * replayLength);
+			replaySlot = java.util.Arrays.copyOf(replaySlot, 2 * replayLength);
+		}
+		replayRow[replayLength] = row;
+		replayCol[replayLength] = col;
+		replaySlot[replayLength++] = slot;
 	}
 
 	@Override

@@ -2,15 +2,13 @@ package bulwark.engine.dc;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
-import java.util.Optional;
 
 import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Device;
-import bulwark.engine.linear.DenseLuSolver;
-import bulwark.engine.linear.LinearSolver;
+import bulwark.engine.linear.SparseLu;
 
 /**
- * DC operating point by modified nodal analysis (Ho, Ruehli and Brennan, "The modified nodal approach to
+ * DC operating point by modified nodal analysis, solved with a sparse LU in a fill-reducing order, (Ho, Ruehli and Brennan, "The modified nodal approach to
  * network analysis", IEEE Trans. Circuits and Systems 22(6), 1975) and Newton–Raphson iteration on the
  * devices' companion models, with the fall-backs of SPICE2 (Nagel, ERL memo M520, 1975) when plain Newton
  * fails: gmin stepping, then source stepping. A circuit without nonlinear devices is solved in one step.
@@ -37,15 +35,22 @@ public final class DcSolver {
 		this.tolerances = tolerances;
 	}
 
+	/** Does the symbolic work for a circuit once, so that it can be solved many times. */
+	public static PreparedCircuit prepare(Circuit circuit) {
+		return new PreparedCircuit(circuit);
+	}
+
 	public DcResult solve(Circuit circuit) {
-		if (circuit.devices().isEmpty()) {
-			return new SolveFailure(SolveFailure.Reason.EMPTY_CIRCUIT, null, "the circuit has no devices");
+		return solve(prepare(circuit));
+	}
+
+	/** Solves a prepared circuit; its symbolic work is reused. */
+	public DcResult solve(PreparedCircuit prepared) {
+		if (prepared.structural != null) {
+			return prepared.structural;
 		}
-		Optional<SolveFailure> structural = TopologyCheck.check(circuit);
-		if (structural.isPresent()) {
-			return structural.get();
-		}
-		Layout layout = new Layout(circuit);
+		Layout layout = prepared.layout;
+		Circuit circuit = layout.circuit;
 		Assembly assembly = new Assembly(layout);
 		boolean nonlinear = circuit.devices().stream().anyMatch(Device::nonlinear);
 		double[] zero = new double[layout.size];
@@ -117,8 +122,7 @@ public final class DcSolver {
 		int n = layout.size;
 		double[] x = x0.clone();
 		double[] xNew = new double[n];
-		double[][] work = new double[n][];
-		LinearSolver lu = new DenseLuSolver();
+		SparseLu lu = new SparseLu(n, layout.order);
 		assembly.resetStates();
 		boolean updateSmall = false;
 		int worst = 0;
@@ -127,10 +131,7 @@ public final class DcSolver {
 			if (updateSmall && clean && residualSmall(layout, assembly, x)) {
 				return new Attempt(x, iteration - 1, -1, worst);
 			}
-			for (int i = 0; i < n; i++) {
-				work[i] = assembly.matrix[i].clone();
-			}
-			if (!lu.factor(work)) {
+			if (!lu.factor(assembly.matrix)) {
 				return new Attempt(null, iteration, lu.singularColumn(), lu.singularColumn());
 			}
 			lu.solve(assembly.rhs, xNew);
@@ -167,17 +168,15 @@ public final class DcSolver {
 	/** KCL (and branch equation) residual of the equations assembled at x, row by row. */
 	private boolean residualSmall(Layout layout, Assembly assembly, double[] x) {
 		int n = layout.size;
+		double[] ax = new double[n];
+		double[] scale = new double[n];
+		assembly.matrix.multiply(x, ax);
+		assembly.matrix.rowTermScale(x, scale);
 		for (int i = 0; i < n; i++) {
-			double[] row = assembly.matrix[i];
-			double sum = -assembly.rhs[i];
-			double scale = Math.abs(assembly.rhs[i]);
-			for (int j = 0; j < n; j++) {
-				double term = row[j] * x[j];
-				sum += term;
-				scale = Math.max(scale, Math.abs(term));
-			}
+			double sum = ax[i] - assembly.rhs[i];
+			double rowScale = Math.max(scale[i], Math.abs(assembly.rhs[i]));
 			double abs = i < layout.nodes ? tolerances.current() : tolerances.voltage();
-			if (Math.abs(sum) > tolerances.relative() * scale + abs) {
+			if (Math.abs(sum) > tolerances.relative() * rowScale + abs) {
 				return false;
 			}
 		}

@@ -4,10 +4,14 @@ import java.util.List;
 
 import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Device;
+import bulwark.engine.linear.CscMatrix;
+import bulwark.engine.linear.MinimumDegree;
+import bulwark.engine.linear.PatternBuilder;
 
 /**
- * Numbering of the unknowns: nets 1…N−1 take rows 0…N−2 (the reference net has none), then each device's
- * branch currents in device order. Computed once per circuit.
+ * Numbering of the unknowns — nets 1…N−1 take rows 0…N−2 (the reference net has none), then each device's
+ * branch currents in device order — with the matrix pattern and its elimination order. Computed once per
+ * circuit and shared by every Newton iteration and every fall-back step.
  */
 final class Layout {
 	final Circuit circuit;
@@ -15,6 +19,10 @@ final class Layout {
 	final int nodes;
 	final int[] branchOffset;
 	final int size;
+	/** The places every stamp lands on, with zero values; each assembly works on a copy. */
+	final CscMatrix pattern;
+	/** Fill-reducing column order for the sparse LU. */
+	final int[] order;
 
 	Layout(Circuit circuit) {
 		this.circuit = circuit;
@@ -28,6 +36,10 @@ final class Layout {
 			row += devices[i].branchCount();
 		}
 		size = row;
+		PatternBuilder builder = new PatternBuilder(size);
+		new PatternRecorder(this, builder).record();
+		pattern = builder.build();
+		order = MinimumDegree.order(pattern);
 
 	}
 
