@@ -50,6 +50,27 @@ class DeviceKindsTest {
 	}
 
 	@Test
+	void comparatorSwitchesOnItsInputs() {
+		// in+ at 3 V against 2.5 V on in−: the push-pull output sits at the upper rail, less the drop of its
+		// 50 Ω output resistance into a 10 kΩ load: 5·10k/10.05k [closed form, divider]
+		DesignResult r = Fixtures.check("""
+				design "comparator"
+				reference net gnd
+				net vcc
+				net ref
+				net sig
+				net out
+				source VCC (plus: vcc, minus: gnd) { voltage 5 V }
+				source VREF (plus: ref, minus: gnd) { voltage 2.5 V }
+				source VSIG (plus: sig, minus: gnd) { voltage 3 V }
+				comparator U1 (in_plus: sig, in_minus: ref, out: out, supply_plus: vcc, supply_minus: gnd)
+				resistor RL (a: out, b: gnd) { value 10 kΩ rated power 125 mW }
+				""");
+		assertEquals(Status.PASS, r.status(), r.findings().toString());
+		assertEquals(5 * 10e3 / 10.05e3, part(r, "RL").voltage(), 1e-3);
+	}
+
+	@Test
 	void transistorSwitchSaturates() {
 		DesignResult r = Fixtures.check("""
 				design "switch"

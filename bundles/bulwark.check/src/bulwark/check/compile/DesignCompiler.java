@@ -7,6 +7,7 @@ import java.util.Optional;
 import bulwark.engine.circuit.Bjt;
 import bulwark.engine.circuit.Bjt.Polarity;
 import bulwark.engine.circuit.Circuit;
+import bulwark.engine.circuit.Comparator;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.circuit.VoltageSource;
 import bulwark.lang.design.Design;
@@ -60,6 +61,11 @@ public final class DesignCompiler {
 				builder.add(new Bjt(part.getName(), pin(builder, part, "collector"), pin(builder, part, "base"),
 						pin(builder, part, "emitter"), part.getKind() == PartKind.NPN ? Polarity.NPN : Polarity.PNP,
 						DeviceModels.bjt(part)));
+				break;
+			case COMPARATOR:
+				builder.add(new Comparator(part.getName(), pin(builder, part, "in_plus"), pin(builder, part, "in_minus"),
+						pin(builder, part, "out"), pin(builder, part, "supply_plus"), pin(builder, part, "supply_minus"),
+						DeviceModels.comparator(part)));
 				break;
 			default:
 				throw new IllegalArgumentException("no engine model for " + part.getKind());

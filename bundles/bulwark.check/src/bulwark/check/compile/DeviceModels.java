@@ -1,6 +1,7 @@
 package bulwark.check.compile;
 
 import bulwark.engine.device.BjtModel;
+import bulwark.engine.device.ComparatorModel;
 import bulwark.engine.device.DiodeModel;
 import bulwark.engine.device.Physics;
 import bulwark.lang.design.Part;
@@ -36,6 +37,13 @@ final class DeviceModels {
 				.orElse(part.getKind() == PartKind.ZENER ? ZENER_KNEE : base.breakdownCurrent());
 		return new DiodeModel(saturation, emission, Settings.parameter(part, "resistance").orElse(0.0), breakdown,
 				knee, base.breakdownEmission(), base.kelvin());
+	}
+
+	static ComparatorModel comparator(Part part) {
+		ComparatorModel base = ComparatorModel.GENERIC;
+		return new ComparatorModel(Settings.parameter(part, "gain").orElse(base.gain()),
+				Settings.parameter(part, "resistance").orElse(base.outputOhms()),
+				Settings.parameter(part, "quiescent").orElse(base.quiescentAmps()), false, base.clamp());
 	}
 
 	static BjtModel bjt(Part part) {

@@ -46,6 +46,23 @@ public final class Circuit {
 		return new Circuit(netNames, all);
 	}
 
+	/** A copy with the device at {@code index} replaced, for example a swept resistor at its next value. */
+	public Circuit withDevice(int index, Device replacement) {
+		List<Device> all = new ArrayList<>(devices);
+		all.set(index, replacement);
+		return new Circuit(netNames, all);
+	}
+
+	/** Index of the named device, or −1. */
+	public int deviceIndex(String name) {
+		for (int i = 0; i < devices.size(); i++) {
+			if (devices.get(i).name().equals(name)) {
+				return i;
+			}
+		}
+		return -1;
+	}
+
 	public int netIndex(String name) {
 		int i = netNames.indexOf(name);
 		if (i < 0) {

@@ -13,9 +13,12 @@ public final class DcSolution implements DcResult {
 	private final Map<String, OperatingPoint> devices;
 	private final int iterations;
 	private final Strategy strategy;
+	/** Every unknown of the nodal equations, to start a neighbouring solve from (continuation). */
+	final double[] unknowns;
 
 	DcSolution(Circuit circuit, double[] netVoltages, Map<String, OperatingPoint> devices, int iterations,
-			Strategy strategy) {
+			Strategy strategy, double[] unknowns) {
+		this.unknowns = unknowns.clone();
 		this.circuit = circuit;
 		this.netVoltages = netVoltages.clone();
 		this.devices = Collections.unmodifiableMap(new LinkedHashMap<>(devices));

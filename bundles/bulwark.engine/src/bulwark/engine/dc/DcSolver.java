@@ -46,6 +46,14 @@ public final class DcSolver {
 
 	/** Solves a prepared circuit; its symbolic work is reused. */
 	public DcResult solve(PreparedCircuit prepared) {
+		return solve(prepared, null);
+	}
+
+	/**
+	 * Solves a prepared circuit starting from a neighbouring solution (continuation: the previous point of a
+	 * sweep), which keeps a circuit with hysteresis on the branch it was on. With no start, from zero.
+	 */
+	public DcResult solve(PreparedCircuit prepared, DcSolution start) {
 		if (prepared.structural != null) {
 			return prepared.structural;
 		}
@@ -54,8 +62,9 @@ public final class DcSolver {
 		Assembly assembly = new Assembly(layout);
 		boolean nonlinear = circuit.devices().stream().anyMatch(Device::nonlinear);
 		double[] zero = new double[layout.size];
+		double[] first = start != null && start.unknowns.length == layout.size ? start.unknowns : zero;
 
-		Attempt plain = newton(layout, assembly, zero, 1, 0, nonlinear);
+		Attempt plain = newton(layout, assembly, first, 1, 0, nonlinear);
 		if (plain.converged()) {
 			return solution(layout, assembly, plain.x, plain.iterations, Strategy.NEWTON);
 		}
@@ -204,7 +213,7 @@ public final class DcSolver {
 			}
 			points.put(d.name(), new OperatingPoint(d.name(), d.pinNames(), pinV, d.pinCurrents(assembly.view(x, i))));
 		}
-		return new DcSolution(circuit, v, points, iterations, strategy);
+		return new DcSolution(circuit, v, points, iterations, strategy, x);
 	}
 
 	/** Outcome of one Newton run: x when converged, else where it broke down. */

@@ -24,6 +24,21 @@ final class Layout {
 	/** Fill-reducing column order for the sparse LU. */
 	final int[] order;
 
+	/** The same numbering, pattern and order for a circuit whose device at {@code index} was replaced. */
+	private Layout(Layout base, Circuit circuit) {
+		this.circuit = circuit;
+		devices = circuit.devices().toArray(new Device[0]);
+		nodes = base.nodes;
+		branchOffset = base.branchOffset;
+		size = base.size;
+		pattern = base.pattern;
+		order = base.order;
+	}
+
+	Layout withCircuit(Circuit replaced) {
+		return new Layout(this, replaced);
+	}
+
 	Layout(Circuit circuit) {
 		this.circuit = circuit;
 		List<Device> list = circuit.devices();

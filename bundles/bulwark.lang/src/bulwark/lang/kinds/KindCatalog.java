@@ -63,6 +63,15 @@ public final class KindCatalog {
 	private static final KindSpec NPN = new KindSpec("npn", BJT_PINS, TRANSISTOR, TRANSISTOR_RATINGS);
 	private static final KindSpec PNP = new KindSpec("pnp", BJT_PINS, TRANSISTOR, TRANSISTOR_RATINGS);
 
+	private static final KindSpec COMPARATOR = new KindSpec("comparator",
+			List.of("in_plus", "in_minus", "out", "supply_plus", "supply_minus"),
+			List.of(new SettingSpec("gain", null, false, "open-loop gain at the switching point (1e5 when omitted)"),
+					new SettingSpec("resistance", Unit.OHM, false, "output resistance (50 Ω when omitted)"),
+					new SettingSpec("quiescent", Unit.AMPERE, false, "supply current with no load (10 µA when omitted)")),
+			List.of(new SettingSpec("input_margin", Unit.VOLT, false, "absolute-maximum input beyond either rail"),
+					new SettingSpec("clamp", Unit.AMPERE, false, "rated input clamp current"),
+					new SettingSpec("supply", Unit.VOLT, false, "rated supply voltage")));
+
 	private KindCatalog() {
 	}
 
@@ -84,6 +93,8 @@ public final class KindCatalog {
 			return NPN;
 		case PNP:
 			return PNP;
+		case COMPARATOR:
+			return COMPARATOR;
 		default:
 			throw new IllegalArgumentException("no specification for " + kind);
 		}

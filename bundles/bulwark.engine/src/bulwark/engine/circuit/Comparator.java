@@ -1,0 +1,148 @@
+package bulwark.engine.circuit;
+
+import bulwark.engine.device.ComparatorModel;
+import bulwark.engine.mna.SolutionView;
+import bulwark.engine.mna.Stamp;
+
+/**
+ * A comparator with pins in_plus, in_minus, out, supply_plus, supply_minus; see {@link ComparatorModel}.
+ * The four input clamp junctions are stamped like diodes, with junction limiting; the output stage's
+ * linearisation is taken by central differences, because its currents depend smoothly on all five pins.
+ */
+public final class Comparator implements Device {
+	private static final int INP = 0, INN = 1, OUT = 2, VP = 3, VN = 4;
+	/** Relative step of the central differences of the output stage. */
+	private static final double DIFFERENCE_STEP = 1e-7;
+	/** Current scale over which the output's return current moves from one rail to the other. */
+	private static final double RETURN_SPLIT = 1e-6;
+
+	private final String name;
+	private final int[] pins;
+	private final ComparatorModel model;
+
+	public Comparator(String name, int inPlus, int inMinus, int out, int supplyPlus, int supplyMinus,
+			ComparatorModel model) {
+		this.name = name;
+		this.pins = new int[] { inPlus, inMinus, out, supplyPlus, supplyMinus };
+		this.model = model;
+	}
+
+	@Override
+	public String name() {
+		return name;
+	}
+
+	@Override
+	public int[] pins() {
+		return pins.clone();
+	}
+
+	@Override
+	public String[] pinNames() {
+		return new String[] { "in_plus", "in_minus", "out", "supply_plus", "supply_minus" };
+	}
+
+	@Override
+	public int stateSize() {
+		return 8; // four clamp junction voltages and whether each has one
+	}
+
+	@Override
+	public boolean nonlinear() {
+		return true;
+	}
+
+	@Override
+	public void stamp(Stamp s) {
+		double[] v = new double[5];
+		for (int p = 0; p < 5; p++) {
+			v[p] = s.voltage(pins[p]);
+		}
+		double[] state = s.state();
+		clamp(s, state, 0, INP, VP);
+		clamp(s, state, 1, VN, INP);
+		clamp(s, state, 2, INN, VP);
+		clamp(s, state, 3, VN, INN);
+		// output stage: currents into out, supply_plus, supply_minus as functions of all five pin voltages
+		double[] i0 = stage(v);
+		double[][] g = new double[3][5];
+		for (int k = 0; k < 5; k++) {
+			double h = DIFFERENCE_STEP * Math.max(1, Math.abs(v[k]));
+			double keep = v[k];
+			v[k] = keep + h;
+			double[] up = stage(v);
+			v[k] = keep - h;
+			double[] down = stage(v);
+			v[k] = keep;
+			for (int r = 0; r < 3; r++) {
+				g[r][k] = (up[r] - down[r]) / (2 * h);
+			}
+		}
+		int[] rows = { OUT, VP, VN };
+		for (int r = 0; r < 3; r++) {
+			double linear = 0;
+			for (int k = 0; k < 5; k++) {
+				s.netNet(pins[rows[r]], pins[k], g[r][k]);
+				linear += g[r][k] * v[k];
+			}
+			s.injectNet(pins[rows[r]], -(i0[r] - linear));
+		}
+	}
+
+	/** One clamp junction from pin a (anode) to pin k (cathode), stamped like a diode with limiting. */
+	private void clamp(Stamp s, double[] state, int which, int a, int k) {
+		double v = s.voltage(pins[a]) - s.voltage(pins[k]);
+		if (state[2 * which + 1] != 0) {
+			double limited = model.clamp().limit(v, state[2 * which]);
+			if (limited != v) {
+				s.notConverged();
+				v = limited;
+			}
+		}
+		state[2 * which] = v;
+		state[2 * which + 1] = 1;
+		double g = model.clamp().conductance(v);
+		s.conductance(pins[a], pins[k], g);
+		s.current(pins[a], pins[k], model.clamp().current(v) - g * v);
+	}
+
+	/** Currents into out, supply_plus and supply_minus from the output stage and the quiescent current. */
+	private double[] stage(double[] v) {
+		double span = v[VP] - v[VN];
+		double vd = v[INP] - v[INN];
+		double out;
+		if (model.openDrain()) {
+			// on (sinking to the lower rail) when vin+ < vin−
+			double on = (1 - Math.tanh(2 * model.gain() * vd / Math.max(Math.abs(span), 1e-3))) / 2;
+			out = (v[OUT] - v[VN]) / model.outputOhms() * on;
+		} else {
+			double target = v[VN] + span * (1 + Math.tanh(2 * model.gain() * vd / Math.max(Math.abs(span), 1e-3))) / 2;
+			out = (v[OUT] - target) / model.outputOhms();
+		}
+		double sourced = -out; // current the output delivers into its load
+		double upper = (1 + Math.tanh(sourced / RETURN_SPLIT)) / 2;
+		double iPlus = model.quiescentAmps() + sourced * upper;
+		double iMinus = -model.quiescentAmps() + sourced * (1 - upper);
+		return new double[] { out, iPlus, iMinus };
+	}
+
+	@Override
+	public double[] pinCurrents(SolutionView x) {
+		double[] v = new double[5];
+		for (int p = 0; p < 5; p++) {
+			v[p] = x.voltage(pins[p]);
+		}
+		double c1 = model.clamp().current(v[INP] - v[VP]);
+		double c2 = model.clamp().current(v[VN] - v[INP]);
+		double c3 = model.clamp().current(v[INN] - v[VP]);
+		double c4 = model.clamp().current(v[VN] - v[INN]);
+		double[] st = stage(v);
+		double[] i = new double[5];
+		i[INP] = c1 - c2;
+		i[INN] = c3 - c4;
+		i[OUT] = st[0];
+		i[VP] = st[1] - c1 - c3;
+		i[VN] = st[2] + c2 + c4;
+		return i;
+	}
+}
