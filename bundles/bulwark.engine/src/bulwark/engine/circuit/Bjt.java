@@ -9,7 +9,7 @@ import bulwark.engine.mna.Stamp;
  * A bipolar transistor (NPN or PNP) with pins collector, base, emitter; see {@link BjtModel} for the
  * equations. Stamped as its linearisation in (vbe, vbc) at the limited junction voltages.
  */
-public final class Bjt implements Device {
+public final class Bjt extends MultiTerminal {
 	public enum Polarity {
 		NPN(1), PNP(-1);
 
@@ -22,26 +22,13 @@ public final class Bjt implements Device {
 
 	private static final int C = 0, B = 1, E = 2;
 
-	private final String name;
-	private final int[] pins;
 	private final Polarity polarity;
 	private final BjtModel model;
 
 	public Bjt(String name, int collector, int base, int emitter, Polarity polarity, BjtModel model) {
-		this.name = name;
-		this.pins = new int[] { collector, base, emitter };
+		super(name, collector, base, emitter);
 		this.polarity = polarity;
 		this.model = model;
-	}
-
-	@Override
-	public String name() {
-		return name;
-	}
-
-	@Override
-	public int[] pins() {
-		return pins.clone();
 	}
 
 	@Override

@@ -9,32 +9,19 @@ import bulwark.engine.mna.Stamp;
  * The four input clamp junctions are stamped like diodes, with junction limiting; the output stage's
  * linearisation is taken by central differences, because its currents depend smoothly on all five pins.
  */
-public final class Comparator implements Device {
+public final class Comparator extends MultiTerminal {
 	private static final int INP = 0, INN = 1, OUT = 2, VP = 3, VN = 4;
 	/** Relative step of the central differences of the output stage. */
 	private static final double DIFFERENCE_STEP = 1e-7;
 	/** Current scale over which the output's return current moves from one rail to the other. */
 	private static final double RETURN_SPLIT = 1e-6;
 
-	private final String name;
-	private final int[] pins;
 	private final ComparatorModel model;
 
 	public Comparator(String name, int inPlus, int inMinus, int out, int supplyPlus, int supplyMinus,
 			ComparatorModel model) {
-		this.name = name;
-		this.pins = new int[] { inPlus, inMinus, out, supplyPlus, supplyMinus };
+		super(name, inPlus, inMinus, out, supplyPlus, supplyMinus);
 		this.model = model;
-	}
-
-	@Override
-	public String name() {
-		return name;
-	}
-
-	@Override
-	public int[] pins() {
-		return pins.clone();
 	}
 
 	@Override

@@ -2,6 +2,7 @@ package bulwark.engine.circuit;
 
 import bulwark.engine.mna.SolutionView;
 import bulwark.engine.mna.Stamp;
+import bulwark.engine.mna.TransientStep;
 
 /**
  * A device of the compiled circuit. It names its pins (net indices, in the order of {@link #pinNames()}),
@@ -46,6 +47,26 @@ public interface Device {
 	/** True when the device conducts at DC between its pins (false for current sources and capacitors). */
 	default boolean conductsAtDc() {
 		return true;
+	}
+
+	/** Number of doubles a reactive device keeps from one accepted time point to the next. */
+	default int historySize() {
+		return 0;
+	}
+
+	/**
+	 * Records the device's values at an accepted point: the operating point that starts a transient
+	 * ({@code step} null) or the end of an accepted time step.
+	 */
+	default void accept(SolutionView x, double[] history, TransientStep step) {
+	}
+
+	/**
+	 * The quantity a reactive device integrates (a capacitor's voltage, an inductor's current) at a
+	 * solution, whose local truncation error limits the time step; NaN for devices that integrate nothing.
+	 */
+	default double integrated(SolutionView x) {
+		return Double.NaN;
 	}
 
 	void stamp(Stamp s);

@@ -2,6 +2,7 @@ package bulwark.engine.circuit;
 
 import bulwark.engine.mna.SolutionView;
 import bulwark.engine.mna.Stamp;
+import bulwark.engine.source.Waveform;
 
 /**
  * An EMF of {@code volts} (plus pin a, minus pin b) in series with an internal resistance, which may be
@@ -10,24 +11,41 @@ import bulwark.engine.mna.Stamp;
  * resistance enters the branch equation, v+ − v− − R·i = E, so no hidden net is needed.
  */
 public final class VoltageSource extends TwoTerminal {
-	private final double volts;
+	private final Waveform waveform;
 	private final double seriesOhms;
 
 	public VoltageSource(String name, int plus, int minus, double volts, double seriesOhms) {
+		this(name, plus, minus, checked(name, volts), seriesOhms);
+	}
+
+	/** A source whose EMF follows a waveform in a transient (its value at t = 0 in an operating point). */
+	public VoltageSource(String name, int plus, int minus, Waveform waveform, double seriesOhms) {
 		super(name, plus, minus);
-		if (!Double.isFinite(volts) || !(seriesOhms >= 0) || Double.isInfinite(seriesOhms)) {
-			throw new IllegalArgumentException(name + ": EMF must be finite and internal resistance non-negative");
+		if (!(seriesOhms >= 0) || Double.isInfinite(seriesOhms)) {
+			throw new IllegalArgumentException(name + ": internal resistance must be non-negative and finite");
 		}
-		this.volts = volts;
+		this.waveform = waveform;
 		this.seriesOhms = seriesOhms;
+	}
+
+	private static Waveform checked(String name, double volts) {
+		if (!Double.isFinite(volts)) {
+			throw new IllegalArgumentException(name + ": EMF must be finite");
+		}
+		return Waveform.constant(volts);
 	}
 
 	public static VoltageSource ideal(String name, int plus, int minus, double volts) {
 		return new VoltageSource(name, plus, minus, volts, 0);
 	}
 
+	/** The EMF at t = 0 (the operating point's value). */
 	public double volts() {
-		return volts;
+		return waveform.at(0);
+	}
+
+	public Waveform waveform() {
+		return waveform;
 	}
 
 	public double seriesOhms() {
@@ -56,7 +74,7 @@ public final class VoltageSource extends TwoTerminal {
 		s.branchNet(0, a, 1);
 		s.branchNet(0, b, -1);
 		s.branchBranch(0, 0, -seriesOhms);
-		s.branchRhs(0, volts * s.sourceScale());
+		s.branchRhs(0, waveform.at(s.time()) * s.sourceScale());
 	}
 
 	@Override

@@ -5,6 +5,7 @@ import java.util.Arrays;
 import bulwark.engine.linear.CscMatrix;
 import bulwark.engine.mna.SolutionView;
 import bulwark.engine.mna.Stamp;
+import bulwark.engine.mna.TransientStep;
 
 /**
  * The nodal equations at one iterate: every device adds its stamp to a dense matrix and right-hand side.
@@ -20,11 +21,18 @@ final class Assembly implements Stamp, SolutionView {
 	private boolean limited;
 	private double sourceScale = 1;
 	private double nodeGmin;
+	private double time;
+	private TransientStep step;
+	private final double[][] histories;
 
 	Assembly(Layout layout) {
 		this.layout = layout;
 		matrix = layout.pattern.copy();
 		rhs = new double[layout.size];
+		histories = new double[layout.devices.length][];
+		for (int i = 0; i < histories.length; i++) {
+			histories[i] = new double[layout.devices[i].historySize()];
+		}
 		states = new double[layout.devices.length][];
 		for (int i = 0; i < states.length; i++) {
 			states[i] = new double[layout.devices[i].stateSize()];
@@ -32,8 +40,10 @@ final class Assembly implements Stamp, SolutionView {
 	}
 
 	/** Builds the equations at iterate x. Returns false if some device limited a junction voltage. */
-	boolean assemble(double[] iterate, double scale, double gminToReference) {
+	boolean assemble(double[] iterate, double scale, double gminToReference, TransientStep transientStep) {
 		x = iterate;
+		step = transientStep;
+		time = transientStep == null ? 0 : transientStep.time();
 		sourceScale = scale;
 		nodeGmin = gminToReference;
 		limited = false;
@@ -64,6 +74,31 @@ final class Assembly implements Stamp, SolutionView {
 		x = solution;
 		device = deviceIndex;
 		return this;
+	}
+
+	/** Lets every device record its values at an accepted point (the start of a transient, or a time step). */
+	void acceptPoint(double[] solution, TransientStep acceptedStep) {
+		x = solution;
+		step = acceptedStep;
+		time = acceptedStep == null ? 0 : acceptedStep.time();
+		for (device = 0; device < layout.devices.length; device++) {
+			layout.devices[device].accept(this, histories[device], acceptedStep);
+		}
+	}
+
+	@Override
+	public double time() {
+		return time;
+	}
+
+	@Override
+	public TransientStep transientStep() {
+		return step;
+	}
+
+	@Override
+	public double[] history() {
+		return histories[device];
 	}
 
 	@Override

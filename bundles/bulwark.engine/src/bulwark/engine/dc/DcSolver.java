@@ -6,6 +6,7 @@ import java.util.Map;
 import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Device;
 import bulwark.engine.linear.SparseLu;
+import bulwark.engine.mna.TransientStep;
 
 /**
  * DC operating point by modified nodal analysis, solved with a sparse LU in a fill-reducing order, (Ho, Ruehli and Brennan, "The modified nodal approach to
@@ -128,6 +129,12 @@ public final class DcSolver {
 	/** One Newton–Raphson run from x0 with the sources scaled and gmin to the reference. */
 	private Attempt newton(Layout layout, Assembly assembly, double[] x0, double scale, double nodeGmin,
 			boolean nonlinear) {
+		return newton(layout, assembly, x0, scale, nodeGmin, nonlinear, null);
+	}
+
+	/** One Newton–Raphson run; with a transient step, the reactive devices stamp their companion models. */
+	Attempt newton(Layout layout, Assembly assembly, double[] x0, double scale, double nodeGmin, boolean nonlinear,
+			TransientStep step) {
 		int n = layout.size;
 		double[] x = x0.clone();
 		double[] xNew = new double[n];
@@ -136,7 +143,7 @@ public final class DcSolver {
 		boolean updateSmall = false;
 		int worst = 0;
 		for (int iteration = 1; iteration <= tolerances.maxIterations(); iteration++) {
-			boolean clean = assembly.assemble(x, scale, nodeGmin);
+			boolean clean = assembly.assemble(x, scale, nodeGmin, step);
 			if (updateSmall && clean && residualSmall(layout, assembly, x)) {
 				return new Attempt(x, iteration - 1, -1, worst);
 			}
@@ -198,8 +205,7 @@ public final class DcSolver {
 				"the nodal equations are singular at " + layout.describe(column));
 	}
 
-	private static DcSolution solution(Layout layout, Assembly assembly, double[] x, int iterations,
-			Strategy strategy) {
+	static DcSolution solution(Layout layout, Assembly assembly, double[] x, int iterations, Strategy strategy) {
 		Circuit circuit = layout.circuit;
 		double[] v = new double[circuit.netCount()];
 		System.arraycopy(x, 0, v, 1, layout.nodes);
@@ -217,7 +223,7 @@ public final class DcSolver {
 	}
 
 	/** Outcome of one Newton run: x when converged, else where it broke down. */
-	private record Attempt(double[] x, int iterations, int singularAt, int worst) {
+	record Attempt(double[] x, int iterations, int singularAt, int worst) {
 		boolean converged() {
 			return x != null;
 		}

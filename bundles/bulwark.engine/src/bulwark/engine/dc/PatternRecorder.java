@@ -2,6 +2,7 @@ package bulwark.engine.dc;
 
 import bulwark.engine.linear.PatternBuilder;
 import bulwark.engine.mna.Stamp;
+import bulwark.engine.mna.TransientStep;
 
 /**
  * A dry run of every device's stamp at the zero iterate that records where the entries go, so that the
@@ -76,6 +77,21 @@ final class PatternRecorder implements Stamp {
 	@Override
 	public double[] state() {
 		return new double[layout.devices[device].stateSize()];
+	}
+
+	@Override
+	public double time() {
+		return 0;
+	}
+
+	@Override
+	public TransientStep transientStep() {
+		return null;
+	}
+
+	@Override
+	public double[] history() {
+		return new double[layout.devices[device].historySize()];
 	}
 
 	@Override

@@ -15,6 +15,8 @@ public record SolveFailure(Reason reason, String place, String message) implemen
 		SINGULAR_MATRIX,
 		/** Newton's method, gmin stepping and source stepping all failed to converge. */
 		NO_CONVERGENCE,
+		/** A transient could not go on: Newton failed even at the smallest time step allowed. */
+		TIMESTEP_TOO_SMALL,
 		/** The circuit has no device at all. */
 		EMPTY_CIRCUIT
 	}

@@ -110,7 +110,6 @@ public final class SparseLu {
 	}
 
 	private boolean fullFactor(CscMatrix a) {
-		double tiny = a.maxAbs() * DenseLuSolver.RELATIVE_PIVOT_TOLERANCE;
 		Arrays.fill(pinv, -1);
 		singularColumn = -1;
 		int lnz = 0, unz = 0;
@@ -126,6 +125,14 @@ public final class SparseLu {
 				ux = Arrays.copyOf(ux, ui.length);
 			}
 			int col = q[k];
+			// a pivot counts as zero when it is negligible against its own column of A: a relative test
+			// against the whole matrix would refuse well-posed systems whose columns differ in scale by
+			// more than 1e13 (a transient's 2L/h beside a megohm's conductance)
+			double columnMax = 0;
+			for (int p = a.colStart[col]; p < a.colStart[col + 1]; p++) {
+				columnMax = Math.max(columnMax, Math.abs(a.values[p]));
+			}
+			double tiny = columnMax * DenseLuSolver.RELATIVE_PIVOT_TOLERANCE;
 			int top = solveColumn(a, col);
 			int ipiv = -1;
 			double largest = -1;

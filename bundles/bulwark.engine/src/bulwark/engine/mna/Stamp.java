@@ -38,6 +38,15 @@ public interface Stamp {
 	/** Per-device memory between iterations (junction voltages for limiting); sized by the device. */
 	double[] state();
 
+	/** Time of the point being solved, s (0 for an operating point). */
+	double time();
+
+	/** The integration step of a transient point, or null for an operating point (capacitors open, inductors short). */
+	TransientStep transientStep();
+
+	/** The device's values at the last accepted time point (sized by {@link bulwark.engine.circuit.Device#historySize()}). */
+	double[] history();
+
 	/** Tells the solver this iterate is not final, for example because a junction voltage was limited. */
 	void notConverged();
 

@@ -1,0 +1,132 @@
+package bulwark.engine.dc;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import bulwark.engine.circuit.Device;
+import bulwark.engine.mna.TransientStep;
+
+/**
+ * Transient analysis: the operating point at t = 0, then time steps by the trapezoidal rule (backward
+ * Euler on the first step), each solved by Newton–Raphson on the devices' companion models. The step is
+ * controlled by the local truncation error of what the reactive devices integrate (capacitor voltages,
+ * inductor currents), estimated by Milne's device: the trapezoidal solution against a quadratic
+ * extrapolation of the last three accepted points; for equal steps their error constants are
+ * −1/12 and 1, so LTE ≈ |corrector − predictor| / 13 (Lambert, Numerical Methods for Ordinary Differential
+ * Systems, Wiley 1991, §4.3; SPICE2 uses the same idea on charges, Nagel 1975 §3.6). A step whose LTE
+ * exceeds {@link #RELATIVE}·|q| + {@link #ABSOLUTE} for any integrated quantity q is retried shorter; a step Newton cannot solve
+ * is retried an eighth as long, down to {@link #SMALLEST_STEP_FRACTION} of the largest step.
+ */
+public final class TransientSolver {
+	/** Below this fraction of the largest step, a failing step ends the run with TIMESTEP_TOO_SMALL. */
+	static final double SMALLEST_STEP_FRACTION = 1e-9;
+	/** Accepted relative error per step of an integrated quantity. */
+	static final double RELATIVE = 1e-3;
+	/** Accepted absolute error per step of an integrated quantity (V or A). */
+	static final double ABSOLUTE = 1e-6;
+
+	private final DcSolver solver;
+
+	public TransientSolver(DcSolver solver) {
+		this.solver = solver;
+	}
+
+	/** Runs from 0 to {@code stop} seconds with steps no longer than {@code maxStep}. */
+	public TransientResult run(PreparedCircuit prepared, double stop, double maxStep) {
+		if (!(stop > 0 && maxStep > 0)) {
+			throw new IllegalArgumentException("stop time and largest step must be positive");
+		}
+		List<Double> times = new ArrayList<>();
+		List<DcSolution> points = new ArrayList<>();
+		DcResult op = solver.solve(prepared);
+		if (!(op instanceof DcSolution start)) {
+			return new TransientResult(times, points, (SolveFailure) op, 0);
+		}
+		Layout layout = prepared.layout;
+		Assembly assembly = new Assembly(layout);
+		boolean nonlinear = layout.circuit.devices().stream().anyMatch(Device::nonlinear);
+		assembly.acceptPoint(start.unknowns, null);
+		times.add(0.0);
+		points.add(start);
+		double[][] recent = { start.unknowns, null, null };
+		double[][] integrated = { integrated(layout, assembly, start.unknowns), null, null };
+		double[] recentTimes = { 0, Double.NaN, Double.NaN };
+		double t = 0;
+		double h = Math.min(maxStep, stop) / 64;
+		double smallest = maxStep * SMALLEST_STEP_FRACTION;
+		boolean first = true;
+		int rejected = 0;
+		while (t < stop * (1 - 1e-12)) {
+			h = Math.min(Math.min(h, maxStep), stop - t);
+			TransientStep step = new TransientStep(t + h, h, !first);
+			DcSolver.Attempt a = solver.newton(layout, assembly, recent[0], 1, 0, nonlinear, step);
+			if (!a.converged()) {
+				rejected++;
+				h /= 8;
+				if (h < smallest) {
+					return new TransientResult(times, points, new SolveFailure(SolveFailure.Reason.TIMESTEP_TOO_SMALL,
+							layout.place(a.worst()), "the transient stopped at t = " + t + " s: no convergence even with a "
+									+ h * 8 + " s step, the largest last change at " + layout.describe(a.worst())),
+							rejected);
+				}
+				continue;
+			}
+			double grow = 2;
+			double[] now = integrated(layout, assembly, a.x());
+			if (integrated[2] != null && step.trapezoidal()) {
+				double ratio = errorRatio(now, integrated, recentTimes, t + h);
+				if (ratio > 1) {
+					rejected++;
+					h *= Math.max(0.25, 0.9 * Math.cbrt(1 / ratio));
+					continue;
+				}
+				grow = ratio == 0 ? 2 : Math.min(2, 0.9 * Math.cbrt(1 / ratio));
+			}
+			t += h;
+			points.add(DcSolver.solution(layout, assembly, a.x(), a.iterations(), Strategy.NEWTON));
+			times.add(t);
+			assembly.acceptPoint(a.x(), step);
+			recent[2] = recent[1];
+			recent[1] = recent[0];
+			recent[0] = a.x().clone();
+			integrated[2] = integrated[1];
+			integrated[1] = integrated[0];
+			integrated[0] = now;
+			recentTimes[2] = recentTimes[1];
+			recentTimes[1] = recentTimes[0];
+			recentTimes[0] = t;
+			first = false;
+			h *= grow;
+		}
+		return new TransientResult(times, points, null, rejected);
+	}
+
+	/** What every reactive device integrates, at a solution (NaN for the others). */
+	private static double[] integrated(Layout layout, Assembly assembly, double[] x) {
+		double[] q = new double[layout.devices.length];
+		for (int i = 0; i < q.length; i++) {
+			q[i] = layout.devices[i].integrated(assembly.view(x, i));
+		}
+		return q;
+	}
+
+	/** Largest LTE over the integrated quantities, as a multiple of what a step may make (>1: reject). */
+	private static double errorRatio(double[] corrector, double[][] recent, double[] times, double t) {
+		double t0 = times[0], t1 = times[1], t2 = times[2];
+		// Lagrange weights of the quadratic through the last three points, evaluated at t
+		double w0 = (t - t1) * (t - t2) / ((t0 - t1) * (t0 - t2));
+		double w1 = (t - t0) * (t - t2) / ((t1 - t0) * (t1 - t2));
+		double w2 = (t - t0) * (t - t1) / ((t2 - t0) * (t2 - t1));
+		double worst = 0;
+		for (int i = 0; i < corrector.length; i++) {
+			if (Double.isNaN(corrector[i])) {
+				continue;
+			}
+			double predicted = w0 * recent[0][i] + w1 * recent[1][i] + w2 * recent[2][i];
+			double lte = Math.abs(corrector[i] - predicted) / 13;
+			double allowed = RELATIVE * Math.max(Math.abs(corrector[i]), Math.abs(recent[0][i])) + ABSOLUTE;
+			worst = Math.max(worst, lte / allowed);
+		}
+		return worst;
+	}
+}
