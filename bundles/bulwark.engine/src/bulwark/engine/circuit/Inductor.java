@@ -46,10 +46,7 @@ public final class Inductor extends TwoTerminal {
 
 	@Override
 	public void stamp(Stamp s) {
-		s.netBranch(a, 0, 1);
-		s.netBranch(b, 0, -1);
-		s.branchNet(0, a, 1);
-		s.branchNet(0, b, -1);
+		s.incidence(0, a, b);
 		TransientStep step = s.transientStep();
 		if (step == null) {
 			s.branchBranch(0, 0, 0);

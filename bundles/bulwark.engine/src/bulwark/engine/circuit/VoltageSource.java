@@ -69,10 +69,7 @@ public final class VoltageSource extends TwoTerminal {
 
 	@Override
 	public void stamp(Stamp s) {
-		s.netBranch(a, 0, 1);
-		s.netBranch(b, 0, -1);
-		s.branchNet(0, a, 1);
-		s.branchNet(0, b, -1);
+		s.incidence(0, a, b);
 		s.branchBranch(0, 0, -seriesOhms);
 		s.branchRhs(0, waveform.at(s.time()) * s.sourceScale());
 	}

@@ -58,6 +58,17 @@ public interface Stamp {
 		netNet(q, p, -g);
 	}
 
+	/**
+	 * Ties this device's branch current k to nets plus and minus: it leaves plus's equation, enters
+	 * minus's, and the branch equation reads v(plus) − v(minus) + … (what every voltage-defined branch shares).
+	 */
+	default void incidence(int k, int plus, int minus) {
+		netBranch(plus, k, 1);
+		netBranch(minus, k, -1);
+		branchNet(k, plus, 1);
+		branchNet(k, minus, -1);
+	}
+
 	/** A current of {@code amps} flowing out of net {@code from}, through the device, into net {@code to}. */
 	default void current(int from, int to, double amps) {
 		injectNet(from, -amps);
