@@ -115,6 +115,13 @@ final class SolveCommand implements Callable<Integer> {
 					w.name(p.pinNames()[i]).value(p.pinCurrents()[i]);
 				}
 				w.endObject();
+				if (p.junctionNames().length > 0) {
+					w.name("reverse").beginObject();
+					for (int i = 0; i < p.junctionNames().length; i++) {
+						w.name(p.junctionNames()[i]).value(p.reverseVoltages()[i]);
+					}
+					w.endObject();
+				}
 				w.endObject();
 			}
 			w.endArray();

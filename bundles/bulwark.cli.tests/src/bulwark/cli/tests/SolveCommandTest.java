@@ -43,6 +43,10 @@ class SolveCommandTest {
 				// probes open: the PNP's base is held at its emitter, so the LED carries leakage only
 				assertTrue(Math.abs(p.get("current").getAsDouble()) < 1e-9, p.toString());
 			}
+			if (p.get("part").getAsString().equals("Z1")) {
+				// the zener sits across the 3 V cell, reverse-biased by its voltage
+				assertEquals(3.0, p.getAsJsonObject("reverse").get("junction").getAsDouble(), 1e-3);
+			}
 		}
 	}
 

@@ -97,6 +97,7 @@ class BjtTest {
 				.add(new Resistor("RC", col, 0, 1e6)).add(new Bjt("Q1", col, 0, emi, Polarity.NPN, BjtModel.SMALL_SIGNAL));
 		DcSolution s = solve(b.build());
 		double veb = s.voltage("emitter");
+		assertEquals(veb, s.device("Q1").reverseVoltage("base-emitter"), 0); // base on the reference
 		double current = (12 - veb) / 10e3;
 		assertTrue(current > 5e-4, "breakdown current " + current);
 		assertEquals(6 + Physics.thermalVoltage(300) * Math.log(current / 1e-3), veb, 1e-3);

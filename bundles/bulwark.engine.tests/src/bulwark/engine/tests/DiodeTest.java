@@ -98,6 +98,7 @@ class DiodeTest {
 		double i = s.device("D1").current();
 		assertTrue(i < 0 && i > -2e-11, "reverse current " + i);
 		assertEquals(-12, s.device("D1").voltage(), 1e-6);
+		assertEquals(12, s.device("D1").reverseVoltage("junction"), 1e-6);
 	}
 
 	@Test

@@ -92,6 +92,18 @@ public final class Bjt extends MultiTerminal {
 	}
 
 	@Override
+	public String[] junctionNames() {
+		return new String[] { "base-emitter", "base-collector" };
+	}
+
+	@Override
+	public double[] reverseVoltages(SolutionView x) {
+		double sign = polarity.sign;
+		double vb = x.voltage(pins[B]);
+		return new double[] { sign * (x.voltage(pins[E]) - vb), sign * (x.voltage(pins[C]) - vb) };
+	}
+
+	@Override
 	public double[] pinCurrents(SolutionView x) {
 		double sign = polarity.sign;
 		double vbe = sign * (x.voltage(pins[B]) - x.voltage(pins[E]));

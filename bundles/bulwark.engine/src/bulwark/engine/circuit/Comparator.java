@@ -29,9 +29,12 @@ public final class Comparator extends MultiTerminal {
 		return new String[] { "in_plus", "in_minus", "out", "supply_plus", "supply_minus" };
 	}
 
+	/** Half-width of the output's linear region, in units of the tanh argument (tanh(1) = 0.76). */
+	private static final double LINEAR_EDGE = 1;
+
 	@Override
 	public int stateSize() {
-		return 8; // four clamp junction voltages and whether each has one
+		return 11; // four clamp junction voltages and whether each has one; last input difference, whether, its sign before
 	}
 
 	@Override
@@ -50,6 +53,7 @@ public final class Comparator extends MultiTerminal {
 		clamp(s, state, 1, VN, INP);
 		clamp(s, state, 2, INN, VP);
 		clamp(s, state, 3, VN, INN);
+		limitInputDifference(s, v, state);
 		// output stage: currents into out, supply_plus, supply_minus as functions of all five pin voltages
 		double[] i0 = stage(v);
 		double[][] g = new double[3][5];
@@ -74,6 +78,30 @@ public final class Comparator extends MultiTerminal {
 			}
 			s.injectNet(pins[rows[r]], -(i0[r] - linear));
 		}
+	}
+
+	/**
+	 * Keeps Newton from bouncing between the rails, the way a comparator in negative feedback (an op-amp)
+	 * otherwise does: when the input difference has changed sign on two iterations running and lands beyond
+	 * the linear region, the stage is evaluated at the switching point instead, where its slope is the full
+	 * gain (the same idea as junction limiting; the iterate is then not final). A single change of sign is
+	 * left alone: with positive feedback (a Schmitt trigger) it is the real switching and must go through.
+	 */
+	private void limitInputDifference(Stamp s, double[] v, double[] state) {
+		double vd = v[INP] - v[INN];
+		double edge = LINEAR_EDGE * Math.max(Math.abs(v[VP] - v[VN]), 1e-3) / (2 * model.gain());
+		double previousSign = Math.signum(state[8]);
+		double olderSign = state[10];
+		boolean bouncing = state[9] != 0 && olderSign != 0 && Math.signum(vd) != previousSign
+				&& previousSign != olderSign;
+		state[10] = previousSign;
+		if (bouncing && Math.abs(vd) > edge) {
+			vd = 0;
+			v[INP] = v[INN];
+			s.notConverged();
+		}
+		state[8] = vd;
+		state[9] = 1;
 	}
 
 	/** One clamp junction from pin a (anode) to pin k (cathode), stamped like a diode with limiting. */

@@ -69,6 +69,16 @@ public interface Device {
 		return Double.NaN;
 	}
 
+	/** Names of the device's pn junctions whose reverse voltage a rating limits ("junction", "base-emitter"…). */
+	default String[] junctionNames() {
+		return new String[0];
+	}
+
+	/** Reverse voltage of each junction at a solution (positive when reverse-biased), in junctionNames() order. */
+	default double[] reverseVoltages(SolutionView x) {
+		return new double[0];
+	}
+
 	void stamp(Stamp s);
 
 	/** Current into each external pin at a solution (they sum to zero). */

@@ -88,6 +88,16 @@ public final class Diode implements Device {
 	}
 
 	@Override
+	public String[] junctionNames() {
+		return new String[] { "junction" };
+	}
+
+	@Override
+	public double[] reverseVoltages(SolutionView x) {
+		return new double[] { x.voltage(cathode) - x.voltage(anode) };
+	}
+
+	@Override
 	public double[] pinCurrents(SolutionView x) {
 		double i = model.current(x.voltage(junction) - x.voltage(cathode));
 		return new double[] { i, -i };

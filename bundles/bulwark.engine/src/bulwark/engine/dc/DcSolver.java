@@ -217,7 +217,9 @@ public final class DcSolver {
 			for (int p = 0; p < pins.length; p++) {
 				pinV[p] = v[pins[p]];
 			}
-			points.put(d.name(), new OperatingPoint(d.name(), d.pinNames(), pinV, d.pinCurrents(assembly.view(x, i))));
+			double[] currents = d.pinCurrents(assembly.view(x, i));
+			points.put(d.name(), new OperatingPoint(d.name(), d.pinNames(), pinV, currents, d.junctionNames(),
+					d.reverseVoltages(assembly.view(x, i))));
 		}
 		return new DcSolution(circuit, v, points, iterations, strategy, x);
 	}
