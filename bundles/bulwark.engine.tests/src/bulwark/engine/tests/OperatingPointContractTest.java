@@ -1,0 +1,13 @@
+package bulwark.engine.tests;
+
+import bulwark.engine.circuit.Circuit;
+import bulwark.engine.dc.DcResult;
+import bulwark.engine.dc.DcSolver;
+
+/** The contract for the operating point solved from a circuit. */
+class OperatingPointContractTest extends SolverContract {
+	@Override
+	DcResult solve(Circuit circuit) {
+		return new DcSolver().solve(circuit);
+	}
+}
