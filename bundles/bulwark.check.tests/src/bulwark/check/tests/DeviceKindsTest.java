@@ -71,6 +71,35 @@ class DeviceKindsTest {
 	}
 
 	@Test
+	void ledByColourAndTheOtherNewKinds() {
+		// a green LED without a forward voltage takes the middle of green's range, 2.95 V, at 20 mA
+		// [published ranges, sources.md]; the rest must compile and solve
+		DesignResult r = Fixtures.check("""
+				design "kinds"
+				reference net gnd
+				net v
+				net w
+				net d
+				net g
+				source V1 (plus: v, minus: gnd) { voltage 2.95 V }
+				led D1 (anode: v, cathode: gnd) { colour green }
+				capacitor C1 (a: v, b: gnd) { value 100 nF rated voltage 50 V }
+				inductor L1 (a: v, b: w) { value 10 µH }
+				resistor RW (a: w, b: gnd) { value 1 kΩ rated power 250 mW }
+				potentiometer P1 (a: v, b: gnd, wiper: g) { value 10 kΩ position 0.25 }
+				nmos M1 (drain: d, gate: g, source: gnd) { threshold 2 V drive 25 mA }
+				protector F1 (a: v, b: d) { resistance 10 Ω trip 100 mA }
+				fuse F2 (a: v, b: gnd) { resistance 1 kΩ rated current 100 mA }
+				resettable_fuse F3 (a: v, b: gnd) { resistance 1 kΩ rated hold 50 mA }
+				indicator BZ1 (a: v, b: gnd) { resistance 1 kΩ activation 1 mA }
+				""");
+		assertEquals(Status.PASS, r.status(), r.findings().toString());
+		assertEquals(20e-3, part(r, "D1").current(), 20e-3 * 1e-6);
+		assertEquals(2.95 / 1e3, part(r, "RW").current(), 1e-9); // the inductor is a short at DC
+		assertEquals(0, part(r, "C1").current(), 0); // the capacitor is open at DC
+	}
+
+	@Test
 	void transistorSwitchSaturates() {
 		DesignResult r = Fixtures.check("""
 				design "switch"

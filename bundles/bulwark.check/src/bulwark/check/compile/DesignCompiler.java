@@ -7,7 +7,15 @@ import java.util.Optional;
 import bulwark.engine.circuit.Bjt;
 import bulwark.engine.circuit.Bjt.Polarity;
 import bulwark.engine.circuit.Circuit;
+import bulwark.engine.circuit.Capacitor;
 import bulwark.engine.circuit.Comparator;
+import bulwark.engine.circuit.Fuse;
+import bulwark.engine.circuit.Indicator;
+import bulwark.engine.circuit.Inductor;
+import bulwark.engine.circuit.Mosfet;
+import bulwark.engine.circuit.Mosfet.Channel;
+import bulwark.engine.circuit.Potentiometer;
+import bulwark.engine.circuit.Protector;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.circuit.VoltageSource;
 import bulwark.lang.design.Design;
@@ -61,6 +69,42 @@ public final class DesignCompiler {
 				builder.add(new Bjt(part.getName(), pin(builder, part, "collector"), pin(builder, part, "base"),
 						pin(builder, part, "emitter"), part.getKind() == PartKind.NPN ? Polarity.NPN : Polarity.PNP,
 						DeviceModels.bjt(part)));
+				break;
+			case NMOS:
+			case PMOS:
+				builder.add(new Mosfet(part.getName(), pin(builder, part, "drain"), pin(builder, part, "gate"),
+						pin(builder, part, "source"), part.getKind() == PartKind.NMOS ? Channel.N : Channel.P,
+						DeviceModels.mosfet(part)));
+				break;
+			case CAPACITOR:
+				builder.add(new Capacitor(part.getName(), pin(builder, part, "a"), pin(builder, part, "b"),
+						required(part, "value")));
+				break;
+			case INDUCTOR:
+				builder.add(new Inductor(part.getName(), pin(builder, part, "a"), pin(builder, part, "b"),
+						required(part, "value")));
+				break;
+			case POTENTIOMETER:
+				builder.add(new Potentiometer(part.getName(), pin(builder, part, "a"), pin(builder, part, "b"),
+						pin(builder, part, "wiper"), required(part, "value"),
+						Settings.parameter(part, "position").orElse(0.5)));
+				break;
+			case PROTECTOR:
+				builder.add(new Protector(part.getName(), pin(builder, part, "a"), pin(builder, part, "b"),
+						DeviceModels.protector(part)));
+				break;
+			case FUSE:
+			case RESETTABLE_FUSE:
+				boolean resettable = part.getKind() == PartKind.RESETTABLE_FUSE;
+				builder.add(new Fuse(part.getName(), pin(builder, part, "a"), pin(builder, part, "b"),
+						Settings.parameter(part, "resistance").orElse(DeviceModels.FUSE_COLD_OHMS),
+						Settings.rating(part, resettable ? "hold" : "current").orElse(Double.POSITIVE_INFINITY),
+						resettable));
+				break;
+			case INDICATOR:
+				builder.add(new Indicator(part.getName(), pin(builder, part, "a"), pin(builder, part, "b"),
+						required(part, "resistance"),
+						Settings.parameter(part, "activation").orElse(DeviceModels.INDICATOR_ACTIVATION)));
 				break;
 			case COMPARATOR:
 				builder.add(new Comparator(part.getName(), pin(builder, part, "in_plus"), pin(builder, part, "in_minus"),

@@ -1,16 +1,24 @@
 package bulwark.check.compile;
 
+import java.util.Locale;
+
 import bulwark.engine.device.BjtModel;
 import bulwark.engine.device.ComparatorModel;
 import bulwark.engine.device.DiodeModel;
-import bulwark.engine.device.Physics;
+import bulwark.engine.device.LedColour;
+import bulwark.engine.device.MosfetModel;
+import bulwark.engine.device.ProtectorModel;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
 
 /** The engine's device models for a part, from its parameters and the defaults the language documents. */
 final class DeviceModels {
-	/** Current at which an LED's forward voltage is stated [common practice for indicator LEDs]. */
-	static final double LED_REFERENCE_CURRENT = 20e-3;
+	/** Cold resistance of a fuse when the design gives none [memory: typical of small glass fuses]. */
+	static final double FUSE_COLD_OHMS = 0.1;
+	/** Activation current of an indicator when the design gives none [common practice: a visible LED]. */
+	static final double INDICATOR_ACTIVATION = 1e-3;
+	/** Trip delay of a protector when the design gives none [memory: typical of electronic current limiters]. */
+	static final double PROTECTOR_DELAY = 1e-6;
 	/** Emission coefficient of an LED when the design gives none [memory: typical of visible LEDs]. */
 	static final double LED_EMISSION = 2;
 	/** Current at a zener's stated voltage when the design gives none [common practice: 5 mA test current]. */
@@ -25,10 +33,10 @@ final class DeviceModels {
 				.orElse(part.getKind() == PartKind.LED ? LED_EMISSION : base.emission());
 		double saturation;
 		if (part.getKind() == PartKind.LED) {
-			// Is from the forward voltage at the reference current: If = Is·(exp(Vf/(n·Vt)) − 1)
-			double vf = Settings.parameter(part, "forward").orElseThrow();
-			double nvt = emission * Physics.thermalVoltage(base.kelvin());
-			saturation = LED_REFERENCE_CURRENT / Math.expm1(vf / nvt);
+			// Is from the forward voltage at 20 mA, given or by colour (red when neither is)
+			double vf = Settings.parameter(part, "forward").orElseGet(() -> LedColour
+					.valueOf(Settings.word(part, "colour").orElse("red").toUpperCase(Locale.ROOT)).forwardVolts());
+			saturation = DiodeModel.led(vf, emission).saturationCurrent();
 		} else {
 			saturation = Settings.parameter(part, "saturation").orElse(base.saturationCurrent());
 		}
@@ -44,6 +52,18 @@ final class DeviceModels {
 		return new ComparatorModel(Settings.parameter(part, "gain").orElse(base.gain()),
 				Settings.parameter(part, "resistance").orElse(base.outputOhms()),
 				Settings.parameter(part, "quiescent").orElse(base.quiescentAmps()), false, base.clamp());
+	}
+
+	static MosfetModel mosfet(Part part) {
+		MosfetModel base = MosfetModel.SMALL_SIGNAL;
+		double drive = Settings.parameter(part, "drive").orElse(base.beta() / 2); // Id at 1 V overdrive = β/2
+		return new MosfetModel(Settings.parameter(part, "threshold").orElse(base.threshold()), 2 * drive, base.lambda(),
+				base.bodyDiode());
+	}
+
+	static ProtectorModel protector(Part part) {
+		return new ProtectorModel(Settings.parameter(part, "resistance").orElseThrow(),
+				Settings.parameter(part, "trip").orElseThrow(), Settings.parameter(part, "delay").orElse(PROTECTOR_DELAY));
 	}
 
 	static BjtModel bjt(Part part) {

@@ -22,6 +22,16 @@ public final class Settings {
 		return Optional.empty();
 	}
 
+	/** A parameter given as a word (colour red). */
+	public static Optional<String> word(Part part, String name) {
+		for (Setting s : part.getSettings()) {
+			if (s instanceof Parameter p && name.equals(s.getName()) && p.getWord() != null) {
+				return Optional.of(p.getWord());
+			}
+		}
+		return Optional.empty();
+	}
+
 	public static Optional<Double> rating(Part part, String name) {
 		return ratingSetting(part, name).flatMap(r -> Quantities.si(r.getValue()));
 	}

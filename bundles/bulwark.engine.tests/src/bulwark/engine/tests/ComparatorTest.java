@@ -71,6 +71,23 @@ class ComparatorTest {
 	}
 
 	@Test
+	void openDrainOutputOnlySinks() {
+		// open drain with a 10 kΩ pull-up to 5 V: off (in+ > in−) the pull-up sets 5 V; on, the 50 Ω on-resistance
+		// pulls down to 5·50/10050 V [closed form, divider]
+		ComparatorModel od = ComparatorModel.GENERIC.withOpenDrain(true);
+		for (double vin : new double[] { 3, 2 }) {
+			Circuit.Builder b = Circuit.withReference("gnd");
+			int vcc = b.net("vcc"), ref = b.net("ref"), in = b.net("in"), out = b.net("out");
+			b.add(VoltageSource.ideal("VCC", vcc, 0, VCC)).add(VoltageSource.ideal("VREF", ref, 0, VREF))
+					.add(VoltageSource.ideal("VIN", in, 0, vin)).add(new Resistor("RPU", vcc, out, 10e3))
+					.add(new Comparator("U1", in, ref, out, vcc, 0, od));
+			DcSolution s = (DcSolution) new DcSolver().solve(b.build());
+			double expected = vin > VREF ? VCC : VCC * 50 / 10050;
+			assertEquals(expected, s.voltage("out"), 1e-6, "input " + vin);
+		}
+	}
+
+	@Test
 	void clampCurrentAtMainsPeakOnTheInput() {
 		// 357.8 V peak through 1 MΩ into in+: the upper clamp conducts into the 5 V rail, I ≈ (357.8 − 5 − Vclamp)/1 MΩ
 		double peak = 253 * Math.sqrt(2);

@@ -3,8 +3,8 @@ package bulwark.engine.circuit;
 import bulwark.engine.mna.SolutionView;
 import bulwark.engine.mna.Stamp;
 
-/** Linear resistor between pins a and b; Ohm's law. */
-public final class Resistor extends TwoTerminal {
+/** Linear resistor between pins a and b; Ohm's law. Fuses and indicator loads are resistors with more to say. */
+public class Resistor extends TwoTerminal {
 	private final double ohms;
 
 	public Resistor(String name, int a, int b, double ohms) {
@@ -20,17 +20,17 @@ public final class Resistor extends TwoTerminal {
 	}
 
 	@Override
-	public String[] pinNames() {
+	public final String[] pinNames() {
 		return new String[] { "a", "b" };
 	}
 
 	@Override
-	public void stamp(Stamp s) {
+	public final void stamp(Stamp s) {
 		s.conductance(a, b, 1.0 / ohms);
 	}
 
 	@Override
-	public double[] pinCurrents(SolutionView x) {
+	public final double[] pinCurrents(SolutionView x) {
 		double i = (x.voltage(a) - x.voltage(b)) / ohms;
 		return new double[] { i, -i };
 	}

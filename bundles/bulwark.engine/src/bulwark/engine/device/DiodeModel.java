@@ -28,6 +28,18 @@ public record DiodeModel(double saturationCurrent, double emission, double serie
 	public static final DiodeModel SILICON = new DiodeModel(1e-14, 1, 0, Double.POSITIVE_INFINITY, 1e-3, 1,
 			Physics.DEFAULT_TEMPERATURE);
 
+	/** Current at which an LED's forward voltage is stated [common practice for indicator LEDs]. */
+	public static final double LED_REFERENCE_CURRENT = 20e-3;
+
+	/**
+	 * An LED of emission coefficient n that drops {@code forwardVolts} at 20 mA: Is from
+	 * If = Is·(exp(Vf/(n·Vt)) − 1).
+	 */
+	public static DiodeModel led(double forwardVolts, double emission) {
+		double nvt = emission * Physics.thermalVoltage(Physics.DEFAULT_TEMPERATURE);
+		return SILICON.withSaturation(LED_REFERENCE_CURRENT / Math.expm1(forwardVolts / nvt), emission);
+	}
+
 	public DiodeModel {
 		if (!(saturationCurrent > 0) || !(emission > 0) || !(seriesOhms >= 0) || !(breakdownVolts > 0)
 				|| !(breakdownCurrent > 0) || !(breakdownEmission > 0) || !(kelvin > 0)) {

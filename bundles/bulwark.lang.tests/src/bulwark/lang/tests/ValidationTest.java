@@ -68,6 +68,22 @@ class ValidationTest {
 	}
 
 	@Test
+	void wordsWhereTheKindListsThem() throws Exception {
+		validation.assertNoErrors(parse("led D1 (anode: a, cathode: gnd) { colour blue }"));
+		validation.assertError(parse("led D1 (anode: a, cathode: gnd) { colour plaid }"), DesignPackage.Literals.PARAMETER,
+				IssueCodes.UNKNOWN_WORD, "one of: red, orange");
+		validation.assertError(parse("resistor R1 (a: a, b: gnd) { value big }"), DesignPackage.Literals.PARAMETER,
+				IssueCodes.UNKNOWN_WORD, "value takes a number");
+	}
+
+	@Test
+	void potentiometerPositionRunsFromZeroToOne() throws Exception {
+		validation.assertNoErrors(parse("potentiometer P1 (a: a, b: gnd, wiper: a) { value 1 kΩ position 0 }"));
+		validation.assertError(parse("potentiometer P1 (a: a, b: gnd, wiper: a) { value 1 kΩ position 1.5 }"),
+				DesignPackage.Literals.QUANTITY, IssueCodes.VALUE_OUT_OF_RANGE, "position runs from 0");
+	}
+
+	@Test
 	void duplicatePin() throws Exception {
 		validation.assertError(parse("resistor R1 (a: a, a: gnd, b: gnd) { value 1 kΩ }"),
 				DesignPackage.Literals.PIN_BINDING, IssueCodes.DUPLICATE_PIN);

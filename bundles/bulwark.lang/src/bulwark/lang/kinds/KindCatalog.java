@@ -45,7 +45,9 @@ public final class KindCatalog {
 					new SettingSpec("resistance", Unit.OHM, false, "series resistance (0 Ω when omitted)")),
 			JUNCTION_RATINGS);
 	private static final KindSpec LED = new KindSpec("led", List.of("anode", "cathode"),
-			List.of(new SettingSpec("forward", Unit.VOLT, true, "forward voltage at 20 mA"),
+			List.of(new SettingSpec("forward", Unit.VOLT, false, "forward voltage at 20 mA (by colour when omitted)"),
+					SettingSpec.word("colour", "sets the forward voltage to the middle of the colour's range (red when omitted)",
+							List.of("red", "orange", "yellow", "green", "blue", "violet", "white")),
 					new SettingSpec("emission", null, false, "emission coefficient n (2 when omitted)"),
 					new SettingSpec("resistance", Unit.OHM, false, "series resistance (0 Ω when omitted)")),
 			JUNCTION_RATINGS);
@@ -72,6 +74,49 @@ public final class KindCatalog {
 					new SettingSpec("clamp", Unit.AMPERE, false, "rated input clamp current"),
 					new SettingSpec("supply", Unit.VOLT, false, "rated supply voltage")));
 
+	private static final List<String> TWO = List.of("a", "b");
+	private static final KindSpec CAPACITOR = new KindSpec("capacitor", TWO,
+			List.of(new SettingSpec("value", Unit.FARAD, true, "capacitance")),
+			List.of(new SettingSpec("voltage", Unit.VOLT, false, "rated voltage")));
+	private static final KindSpec INDUCTOR = new KindSpec("inductor", TWO,
+			List.of(new SettingSpec("value", Unit.HENRY, true, "inductance")),
+			List.of(new SettingSpec("current", Unit.AMPERE, false, "rated current")));
+	private static final KindSpec POTENTIOMETER = new KindSpec("potentiometer", List.of("a", "b", "wiper"),
+			List.of(new SettingSpec("value", Unit.OHM, true, "track resistance"),
+					new SettingSpec("position", null, false, "wiper position from a (0) to b (1), 0.5 when omitted")),
+			List.of(new SettingSpec("power", Unit.WATT, false, "rated power")));
+	private static final List<SettingSpec> MOSFET = List.of(
+			new SettingSpec("threshold", Unit.VOLT, false, "gate threshold voltage (2 V when omitted)"),
+			new SettingSpec("drive", Unit.AMPERE, false, "drain current 1 V above threshold, in saturation (25 mA when omitted)"));
+	private static final List<SettingSpec> MOSFET_RATINGS = List.of(
+			new SettingSpec("drain_source", Unit.VOLT, false, "rated drain-source voltage"),
+			new SettingSpec("gate_source", Unit.VOLT, false, "rated gate-source voltage"),
+			new SettingSpec("drain", Unit.AMPERE, false, "rated drain current"),
+			new SettingSpec("power", Unit.WATT, false, "rated power"));
+	private static final List<String> MOSFET_PINS = List.of("drain", "gate", "source");
+	private static final KindSpec NMOS = new KindSpec("nmos", MOSFET_PINS, MOSFET, MOSFET_RATINGS);
+	private static final KindSpec PMOS = new KindSpec("pmos", MOSFET_PINS, MOSFET, MOSFET_RATINGS);
+	private static final KindSpec PROTECTOR = new KindSpec("protector", TWO,
+			List.of(new SettingSpec("resistance", Unit.OHM, true, "on-resistance below the trip current"),
+					new SettingSpec("trip", Unit.AMPERE, true, "trip current"),
+					new SettingSpec("delay", Unit.SECOND, false, "trip delay (1 µs when omitted)")),
+			List.of(new SettingSpec("blocking", Unit.VOLT, false, "rated blocking voltage"),
+					new SettingSpec("power", Unit.WATT, false, "rated power")));
+	private static final KindSpec FUSE = new KindSpec("fuse", TWO,
+			List.of(new SettingSpec("resistance", Unit.OHM, false, "cold resistance (0.1 Ω when omitted)")),
+			List.of(new SettingSpec("current", Unit.AMPERE, false, "rated current"),
+					new SettingSpec("voltage", Unit.VOLT, false, "rated voltage")));
+	private static final KindSpec RESETTABLE_FUSE = new KindSpec("resettable_fuse", TWO,
+			List.of(new SettingSpec("resistance", Unit.OHM, false, "resistance when cold (0.1 Ω when omitted)")),
+			List.of(new SettingSpec("hold", Unit.AMPERE, false, "rated hold current"),
+					new SettingSpec("trip", Unit.AMPERE, false, "rated trip current"),
+					new SettingSpec("voltage", Unit.VOLT, false, "rated voltage")));
+	private static final KindSpec INDICATOR = new KindSpec("indicator", TWO,
+			List.of(new SettingSpec("resistance", Unit.OHM, true, "resistance of the lamp, buzzer or LED string"),
+					new SettingSpec("activation", Unit.AMPERE, false, "current at which it is on (1 mA when omitted)")),
+			List.of(new SettingSpec("power", Unit.WATT, false, "rated power"),
+					new SettingSpec("voltage", Unit.VOLT, false, "rated voltage")));
+
 	private KindCatalog() {
 	}
 
@@ -95,6 +140,24 @@ public final class KindCatalog {
 			return PNP;
 		case COMPARATOR:
 			return COMPARATOR;
+		case NMOS:
+			return NMOS;
+		case PMOS:
+			return PMOS;
+		case CAPACITOR:
+			return CAPACITOR;
+		case INDUCTOR:
+			return INDUCTOR;
+		case POTENTIOMETER:
+			return POTENTIOMETER;
+		case PROTECTOR:
+			return PROTECTOR;
+		case FUSE:
+			return FUSE;
+		case RESETTABLE_FUSE:
+			return RESETTABLE_FUSE;
+		case INDICATOR:
+			return INDICATOR;
 		default:
 			throw new IllegalArgumentException("no specification for " + kind);
 		}

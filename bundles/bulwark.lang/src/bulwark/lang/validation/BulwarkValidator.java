@@ -124,6 +124,11 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 	}
 
 	private void checkUnit(Setting s, SettingSpec spec) {
+		String word = s instanceof Parameter p ? p.getWord() : null;
+		if (spec.isWord() || word != null) {
+			checkWord(s, spec, word);
+			return;
+		}
 		Quantity q = s.getValue();
 		if (q == null || q.getMagnitude() == null) {
 			return;
@@ -158,11 +163,29 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 		}
 		boolean isParameter = s instanceof Parameter;
 		boolean mayBeZero = isParameter && ("resistance".equals(s.getName()) || "voltage".equals(s.getName())
-				|| "emf".equals(s.getName()));
+				|| "emf".equals(s.getName()) || "position".equals(s.getName()) || "delay".equals(s.getName())
+				|| "threshold".equals(s.getName()));
+		if ("position".equals(s.getName()) && value > 1) {
+			error("position runs from 0 (at a) to 1 (at b)", q, DesignPackage.Literals.QUANTITY__MAGNITUDE,
+					IssueCodes.VALUE_OUT_OF_RANGE);
+		}
 		boolean mayBeNegative = isParameter && ("voltage".equals(s.getName()) || "emf".equals(s.getName()));
 		if (value < 0 && !mayBeNegative || value == 0 && !mayBeZero) {
 			error(s.getName() + " must be " + (mayBeZero ? "zero or more" : "more than zero"), q,
 					DesignPackage.Literals.QUANTITY__MAGNITUDE, IssueCodes.VALUE_OUT_OF_RANGE);
+		}
+	}
+
+	private void checkWord(Setting s, SettingSpec spec, String word) {
+		if (!spec.isWord()) {
+			error(s.getName() + " takes a number" + (spec.unit() == null ? "" : " with its unit, for example 1 " + spec.unit().symbol())
+					+ ", not '" + word + "'", s, DesignPackage.Literals.PARAMETER__WORD, IssueCodes.UNKNOWN_WORD);
+		} else if (word == null) {
+			error(s.getName() + " is one of: " + String.join(", ", spec.choices()), s, DesignPackage.Literals.SETTING__NAME,
+					IssueCodes.UNKNOWN_WORD);
+		} else if (!spec.choices().contains(word)) {
+			error("'" + word + "' is not a " + s.getName() + " Bulwark knows; it is one of: "
+					+ String.join(", ", spec.choices()), s, DesignPackage.Literals.PARAMETER__WORD, IssueCodes.UNKNOWN_WORD);
 		}
 	}
 

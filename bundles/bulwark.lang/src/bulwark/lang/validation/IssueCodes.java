@@ -8,6 +8,7 @@ public final class IssueCodes {
 	public static final String WRONG_UNIT = PREFIX + "wrongUnit";
 	public static final String MISSING_UNIT = PREFIX + "missingUnit";
 	public static final String UNEXPECTED_UNIT = PREFIX + "unexpectedUnit";
+	public static final String UNKNOWN_WORD = PREFIX + "unknownWord";
 	public static final String VALUE_OUT_OF_RANGE = PREFIX + "valueOutOfRange";
 	public static final String UNKNOWN_PIN = PREFIX + "unknownPin";
 	public static final String MISSING_PIN = PREFIX + "missingPin";
