@@ -84,6 +84,18 @@ class ValidationTest {
 	}
 
 	@Test
+	void unusedAndDanglingNets() throws Exception {
+		Design d = parse("net spare\nnet tail\nresistor R1 (a: a, b: tail) { value 1 kΩ }\n"
+				+ "resistor R2 (a: a, b: gnd) { value 1 kΩ }");
+		validation.assertWarning(d, DesignPackage.Literals.NET, IssueCodes.UNUSED_NET, "'spare' connects no pin");
+		validation.assertWarning(d, DesignPackage.Literals.NET, IssueCodes.SINGLE_CONNECTION, "'tail' reaches only one pin");
+		// a net with one pin and a terminal is an input, not a dangling wire
+		Design input = parse("terminal T1 at tail\nnet tail\nresistor R1 (a: a, b: tail) { value 1 kΩ }\n"
+				+ "resistor R2 (a: a, b: gnd) { value 1 kΩ }");
+		validation.assertNoIssue(input, DesignPackage.Literals.NET, IssueCodes.SINGLE_CONNECTION);
+	}
+
+	@Test
 	void duplicatePin() throws Exception {
 		validation.assertError(parse("resistor R1 (a: a, a: gnd, b: gnd) { value 1 kΩ }"),
 				DesignPackage.Literals.PIN_BINDING, IssueCodes.DUPLICATE_PIN);

@@ -63,6 +63,41 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 		}
 	}
 
+	/**
+	 * A net no pin uses is dead text; a net with a single pin and no terminal leads nowhere, which in a
+	 * schematic is almost always a wire that was meant to go on. Both are warnings: the design still solves.
+	 */
+	@Check
+	public void netsAreConnected(Design design) {
+		Map<Net, Integer> pins = new HashMap<>();
+		Set<Net> atTerminals = new HashSet<>();
+		for (Member m : design.getMembers()) {
+			if (m instanceof Part part) {
+				for (PinBinding b : part.getPins()) {
+					if (b.getNet() != null && !b.getNet().eIsProxy()) {
+						pins.merge(b.getNet(), 1, Integer::sum);
+					}
+				}
+			} else if (m instanceof bulwark.lang.design.Terminal t && t.getNet() != null) {
+				atTerminals.add(t.getNet());
+			}
+		}
+		for (Member m : design.getMembers()) {
+			if (!(m instanceof Net net)) {
+				continue;
+			}
+			int count = pins.getOrDefault(net, 0);
+			if (count == 0) {
+				warning("Net '" + net.getName() + "' connects no pin" + (atTerminals.contains(net)
+						? ": its terminal leads nowhere" : ""), net, DesignPackage.Literals.MEMBER__NAME,
+						IssueCodes.UNUSED_NET);
+			} else if (count == 1 && !atTerminals.contains(net) && !net.isReference()) {
+				warning("Net '" + net.getName() + "' reaches only one pin; was another meant to join it?", net,
+						DesignPackage.Literals.MEMBER__NAME, IssueCodes.SINGLE_CONNECTION);
+			}
+		}
+	}
+
 	@Check
 	public void pinsMatchKind(Part part) {
 		KindSpec spec = KindCatalog.of(part.getKind());

@@ -21,6 +21,8 @@ public final class IssueCodes {
 	public static final String NO_REFERENCE_NET = PREFIX + "noReferenceNet";
 	public static final String MANY_REFERENCE_NETS = PREFIX + "manyReferenceNets";
 	public static final String TOLERANCE_OUT_OF_RANGE = PREFIX + "toleranceOutOfRange";
+	public static final String UNUSED_NET = PREFIX + "unusedNet";
+	public static final String SINGLE_CONNECTION = PREFIX + "singleConnection";
 
 	private IssueCodes() {
 	}
