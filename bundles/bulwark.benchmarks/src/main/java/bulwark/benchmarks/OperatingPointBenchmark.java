@@ -1,4 +1,4 @@
-package bulwark.engine.benchmarks;
+package bulwark.benchmarks;
 
 import java.util.concurrent.TimeUnit;
 

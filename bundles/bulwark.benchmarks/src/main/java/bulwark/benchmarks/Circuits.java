@@ -1,4 +1,4 @@
-package bulwark.engine.benchmarks;
+package bulwark.benchmarks;
 
 import bulwark.engine.circuit.Bjt;
 import bulwark.engine.circuit.Bjt.Polarity;
