@@ -24,6 +24,9 @@ import bulwark.lang.design.Net;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
 import bulwark.lang.design.PinBinding;
+import bulwark.lang.design.Terminal;
+import bulwark.lang.design.Action;
+import bulwark.lang.design.Case;
 
 /**
  * Turns a validated design into the engine's circuit. Only nets that some pin uses become circuit nets:
@@ -113,6 +116,17 @@ public final class DesignCompiler {
 				break;
 			default:
 				throw new IllegalArgumentException("no engine model for " + part.getKind());
+			}
+		}
+		// nets of the terminals the designer's cases act on, even where no pin does (a net nothing uses
+		// stays out: in the normal case it would float)
+		for (Member m : design.getMembers()) {
+			if (m instanceof Case c) {
+				for (Action a : c.getActions()) {
+					for (Terminal t : new Terminal[] { a.getFrom(), a.getTo() }) {
+						builder.net(t.getNet().getName());
+					}
+				}
 			}
 		}
 		return new CompiledDesign(design, builder.build(), parts);

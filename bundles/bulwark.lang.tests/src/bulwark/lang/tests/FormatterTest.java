@@ -67,6 +67,31 @@ class FormatterTest {
 	}
 
 	@Test
+	void casesAreLaidOutLikeParts() throws Exception {
+		String messy = "design \"x\"\nreference net gnd\nnet a\nterminal T1 at a\nterminal T2 at gnd\n"
+				+ "resistor R1 (a: a, b: gnd) { value 1 kΩ }\ncase \"mains\"{apply 325V behind 2Ω from T1 to T2 short T1 to T2}";
+		String expected = """
+				design "x"
+
+				reference net gnd
+				net a
+
+				terminal T1 at a
+				terminal T2 at gnd
+
+				resistor R1 (a: a, b: gnd) {
+				  value 1 kΩ
+				}
+
+				case "mains" {
+				  apply 325 V behind 2 Ω from T1 to T2
+				  short T1 to T2
+				}
+				""";
+		assertEquals(expected, format(messy));
+	}
+
+	@Test
 	void formattingIsStable() throws Exception {
 		String once = format("design \"x\"\nreference net gnd\nnet a\nterminal T1 \"tip\" at a\n"
 				+ "source V1 (plus: a, minus: gnd) { voltage 5 V }\n");

@@ -96,6 +96,21 @@ class ValidationTest {
 	}
 
 	@Test
+	void designerCases() throws Exception {
+		String terminals = "terminal T1 at a\nterminal T2 at gnd\nresistor R1 (a: a, b: gnd) { value 1 kΩ }\n";
+		validation.assertNoErrors(parse(terminals + "case \"mains\" { apply -325 V behind 2 Ω from T1 to T2 }\n"
+				+ "case \"probe\" { connect 4.7 Ω from T1 to T2 short T1 to T2 }"));
+		validation.assertError(parse(terminals + "case \"x\" { apply 5 A from T1 to T2 }"), DesignPackage.Literals.QUANTITY,
+				IssueCodes.WRONG_UNIT, "apply takes a voltage");
+		validation.assertError(parse(terminals + "case \"x\" { connect 0 Ω from T1 to T2 }"),
+				DesignPackage.Literals.QUANTITY, IssueCodes.VALUE_OUT_OF_RANGE);
+		validation.assertError(parse(terminals + "case \"x\" { short T1 to T1 }"), DesignPackage.Literals.SHORT,
+				IssueCodes.SAME_TERMINAL);
+		validation.assertError(parse(terminals + "case \"x\" { short T1 to T9 }"), DesignPackage.Literals.SHORT,
+				org.eclipse.xtext.diagnostics.Diagnostic.LINKING_DIAGNOSTIC, "T9");
+	}
+
+	@Test
 	void duplicatePin() throws Exception {
 		validation.assertError(parse("resistor R1 (a: a, a: gnd, b: gnd) { value 1 kΩ }"),
 				DesignPackage.Literals.PIN_BINDING, IssueCodes.DUPLICATE_PIN);

@@ -10,6 +10,10 @@ import org.eclipse.xtext.formatting2.regionaccess.ISemanticRegion;
 import org.eclipse.xtext.preferences.ITypedPreferenceValues;
 import org.eclipse.xtext.preferences.MapBasedPreferenceValues;
 
+import bulwark.lang.design.Action;
+import bulwark.lang.design.Apply;
+import bulwark.lang.design.Case;
+import bulwark.lang.design.Connect;
 import bulwark.lang.design.Design;
 import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Member;
@@ -109,6 +113,46 @@ public class BulwarkFormatter extends AbstractJavaFormatter {
 				doc.prepend(braceClose, f -> f.newLine());
 			}
 		}
+	}
+
+	protected void format(Case c, IFormattableDocument doc) {
+		var regions = regionFor(c);
+		doc.append(regions.keyword("case"), f -> f.oneSpace());
+		ISemanticRegion open = regions.keyword("{");
+		ISemanticRegion close = regions.keyword("}");
+		doc.prepend(open, f -> f.oneSpace());
+		if (c.getActions().isEmpty()) {
+			doc.append(open, f -> f.oneSpace());
+			return;
+		}
+		doc.interior(open, close, f -> f.indent());
+		for (Action action : c.getActions()) {
+			doc.prepend(action, f -> f.newLine());
+			var a = regionFor(action);
+			for (String word : new String[] { "apply", "connect", "short" }) {
+				doc.append(a.keyword(word), f -> f.oneSpace());
+			}
+			for (String word : new String[] { "behind", "from", "to" }) {
+				doc.surround(a.keyword(word), f -> f.oneSpace());
+			}
+			for (Quantity q : quantities(action)) {
+				doc.prepend(regionFor(q).feature(DesignPackage.Literals.QUANTITY__UNIT), f -> f.oneSpace());
+			}
+		}
+		doc.prepend(close, f -> f.newLine());
+	}
+
+	private static java.util.List<Quantity> quantities(Action action) {
+		java.util.List<Quantity> list = new java.util.ArrayList<>();
+		if (action instanceof Apply a) {
+			list.add(a.getValue());
+			if (a.getResistance() != null) {
+				list.add(a.getResistance());
+			}
+		} else if (action instanceof Connect c) {
+			list.add(c.getValue());
+		}
+		return list;
 	}
 
 	protected void format(Parameter parameter, IFormattableDocument doc) {

@@ -10,6 +10,8 @@ import java.util.stream.Collectors;
 
 import org.eclipse.xtext.validation.Check;
 
+import bulwark.lang.design.Apply;
+import bulwark.lang.design.Connect;
 import bulwark.lang.design.Design;
 import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Member;
@@ -20,11 +22,14 @@ import bulwark.lang.design.PinBinding;
 import bulwark.lang.design.Quantity;
 import bulwark.lang.design.Rating;
 import bulwark.lang.design.Setting;
+import bulwark.lang.design.Short;
+import bulwark.lang.design.Terminal;
 import bulwark.lang.design.Tolerance;
 import bulwark.lang.kinds.KindCatalog;
 import bulwark.lang.kinds.KindSpec;
 import bulwark.lang.kinds.SettingSpec;
 import bulwark.lang.units.ScaledUnit;
+import bulwark.lang.units.Unit;
 import bulwark.lang.units.UnitParser;
 
 /**
@@ -78,7 +83,7 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 						pins.merge(b.getNet(), 1, Integer::sum);
 					}
 				}
-			} else if (m instanceof bulwark.lang.design.Terminal t && t.getNet() != null) {
+			} else if (m instanceof Terminal t && t.getNet() != null) {
 				atTerminals.add(t.getNet());
 			}
 		}
@@ -146,6 +151,51 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 				error(part.getName() + " needs its " + p.name() + " (" + p.meaning() + ", in " + p.unit().symbol()
 						+ ")", part, DesignPackage.Literals.MEMBER__NAME, IssueCodes.MISSING_PARAMETER);
 			}
+		}
+	}
+
+	@Check
+	public void applyIsAVoltageBehindAResistance(Apply apply) {
+		quantityOf(apply.getValue(), Unit.VOLT, "apply", DesignPackage.Literals.APPLY__VALUE, true);
+		if (apply.getResistance() != null) {
+			quantityOf(apply.getResistance(), Unit.OHM, "behind", DesignPackage.Literals.APPLY__RESISTANCE, false);
+		}
+		distinctTerminals(apply, apply.getFrom(), apply.getTo());
+	}
+
+	@Check
+	public void connectIsAResistance(Connect connect) {
+		quantityOf(connect.getValue(), Unit.OHM, "connect", DesignPackage.Literals.CONNECT__VALUE, false);
+		distinctTerminals(connect, connect.getFrom(), connect.getTo());
+	}
+
+	@Check
+	public void shortJoinsTwoTerminals(Short s) {
+		distinctTerminals(s, s.getFrom(), s.getTo());
+	}
+
+	private void distinctTerminals(org.eclipse.emf.ecore.EObject action, Terminal from, Terminal to) {
+		if (from != null && from == to) {
+			error("A case acts between two different terminals", action, null, IssueCodes.SAME_TERMINAL);
+		}
+	}
+
+	/** A case's quantity: its unit (V or Ω), and more than zero unless it may be negative (a voltage). */
+	private void quantityOf(Quantity q, Unit unit, String what, org.eclipse.emf.ecore.EStructuralFeature feature,
+			boolean mayBeNegative) {
+		if (q == null || q.getMagnitude() == null) {
+			return;
+		}
+		Optional<ScaledUnit> u = q.getUnit() == null ? Optional.empty() : UnitParser.parse(q.getUnit());
+		if (u.isEmpty()) {
+			error(what + " needs a value in " + unit.symbol() + ", for example 1 " + unit.symbol(), q,
+					DesignPackage.Literals.QUANTITY__MAGNITUDE, IssueCodes.MISSING_UNIT);
+		} else if (u.get().unit() != unit) {
+			error(what + " takes a " + unit.quantity() + " (" + unit.symbol() + "), not a " + u.get().unit().quantity(),
+					q, DesignPackage.Literals.QUANTITY__UNIT, IssueCodes.WRONG_UNIT);
+		} else if (!mayBeNegative && !(Double.parseDouble(q.getMagnitude()) > 0)) {
+			error(what + " must be more than zero", q, DesignPackage.Literals.QUANTITY__MAGNITUDE,
+					IssueCodes.VALUE_OUT_OF_RANGE);
 		}
 	}
 

@@ -22,6 +22,7 @@ public final class IssueCodes {
 	public static final String MANY_REFERENCE_NETS = PREFIX + "manyReferenceNets";
 	public static final String TOLERANCE_OUT_OF_RANGE = PREFIX + "toleranceOutOfRange";
 	public static final String UNUSED_NET = PREFIX + "unusedNet";
+	public static final String SAME_TERMINAL = PREFIX + "sameTerminal";
 	public static final String SINGLE_CONNECTION = PREFIX + "singleConnection";
 
 	private IssueCodes() {
