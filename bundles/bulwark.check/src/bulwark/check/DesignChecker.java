@@ -59,6 +59,7 @@ public final class DesignChecker {
 
 	public DesignResult check(LoadedDesign loaded) {
 		List<Finding> findings = new ArrayList<>();
+		// (reassigned once the waivers are applied)
 		boolean languageErrors = false;
 		for (Issue issue : loaded.issues()) {
 			Finding f = LanguageFindings.of(issue);
@@ -90,6 +91,7 @@ public final class DesignChecker {
 		for (Rule rule : RuleRegistry.all()) {
 			rule.check(context, findings::add);
 		}
+		findings = new ArrayList<>(Waivers.apply(design, findings));
 		findings.sort(Comparator.comparingInt((Finding f) -> f.location().line())
 				.thenComparingInt(f -> f.location().column()));
 		Status status = solverFailed ? Status.ERROR

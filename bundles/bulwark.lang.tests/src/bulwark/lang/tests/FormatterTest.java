@@ -92,6 +92,26 @@ class FormatterTest {
 	}
 
 	@Test
+	void waiversTakeTwoLines() throws Exception {
+		String messy = "design \"x\"\nreference net gnd\nnet a\nresistor R1 (a: a, b: gnd) { value 1 kΩ }\n"
+				+ "waive \"resistor-power\"   on R1 because \"pulse\" by \"J. Okafor\"   on \"2026-11-30\"";
+		String expected = """
+				design "x"
+
+				reference net gnd
+				net a
+
+				resistor R1 (a: a, b: gnd) {
+				  value 1 kΩ
+				}
+
+				waive "resistor-power" on R1
+				  because "pulse" by "J. Okafor" on "2026-11-30"
+				""";
+		assertEquals(expected, format(messy));
+	}
+
+	@Test
 	void formattingIsStable() throws Exception {
 		String once = format("design \"x\"\nreference net gnd\nnet a\nterminal T1 \"tip\" at a\n"
 				+ "source V1 (plus: a, minus: gnd) { voltage 5 V }\n");

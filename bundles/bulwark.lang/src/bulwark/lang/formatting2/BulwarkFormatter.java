@@ -26,6 +26,7 @@ import bulwark.lang.design.Rating;
 import bulwark.lang.design.Setting;
 import bulwark.lang.design.Terminal;
 import bulwark.lang.design.Tolerance;
+import bulwark.lang.design.Waiver;
 
 /**
  * The house layout of a design: the header lines, then nets and terminals one per line, each part after a
@@ -64,6 +65,19 @@ public class BulwarkFormatter extends AbstractJavaFormatter {
 			doc.prepend(member, f -> f.setNewLines(loose ? 2 : 1, loose ? 2 : 1, 2));
 			doc.format(member);
 			previous = member;
+		}
+		for (Waiver waiver : design.getWaivers()) {
+			doc.prepend(waiver, f -> f.setNewLines(2, 2, 2));
+			var w = regionFor(waiver);
+			for (String word : new String[] { "waive", "because", "by" }) {
+				doc.append(w.keyword(word), f -> f.oneSpace());
+			}
+			for (ISemanticRegion on : w.keywords("on")) {
+				doc.surround(on, f -> f.oneSpace());
+			}
+			doc.prepend(w.keyword("because"), f -> f.newLine());
+			doc.prepend(w.keyword("by"), f -> f.oneSpace());
+			doc.interior(w.keyword("waive"), w.feature(DesignPackage.Literals.WAIVER__DATE), f -> f.indent());
 		}
 		doc.append(design, f -> f.setNewLines(1, 1, 1));
 	}

@@ -24,6 +24,7 @@ import bulwark.lang.design.Rating;
 import bulwark.lang.design.Setting;
 import bulwark.lang.design.Short;
 import bulwark.lang.design.Terminal;
+import bulwark.lang.design.Waiver;
 import bulwark.lang.design.Tolerance;
 import bulwark.lang.kinds.KindCatalog;
 import bulwark.lang.kinds.KindSpec;
@@ -196,6 +197,25 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 		} else if (!mayBeNegative && !(Double.parseDouble(q.getMagnitude()) > 0)) {
 			error(what + " must be more than zero", q, DesignPackage.Literals.QUANTITY__MAGNITUDE,
 					IssueCodes.VALUE_OUT_OF_RANGE);
+		}
+	}
+
+	/** A waiver is a record for review: it needs a reason, a name and a real date (ISO 8601, yyyy-mm-dd). */
+	@Check
+	public void waiverIsComplete(Waiver waiver) {
+		if (waiver.getJustification() == null || waiver.getJustification().isBlank()) {
+			error("A waiver needs its reason", waiver, DesignPackage.Literals.WAIVER__JUSTIFICATION,
+					IssueCodes.WAIVER_INCOMPLETE);
+		}
+		if (waiver.getWho() == null || waiver.getWho().isBlank()) {
+			error("A waiver needs the name of who accepted it", waiver, DesignPackage.Literals.WAIVER__WHO,
+					IssueCodes.WAIVER_INCOMPLETE);
+		}
+		try {
+			java.time.LocalDate.parse(waiver.getDate());
+		} catch (RuntimeException e) {
+			error("A waiver's date is written yyyy-mm-dd, for example \"2026-11-30\"", waiver,
+					DesignPackage.Literals.WAIVER__DATE, IssueCodes.WAIVER_INCOMPLETE);
 		}
 	}
 

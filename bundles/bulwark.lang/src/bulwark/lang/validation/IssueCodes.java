@@ -23,6 +23,7 @@ public final class IssueCodes {
 	public static final String TOLERANCE_OUT_OF_RANGE = PREFIX + "toleranceOutOfRange";
 	public static final String UNUSED_NET = PREFIX + "unusedNet";
 	public static final String SAME_TERMINAL = PREFIX + "sameTerminal";
+	public static final String WAIVER_INCOMPLETE = PREFIX + "waiverIncomplete";
 	public static final String SINGLE_CONNECTION = PREFIX + "singleConnection";
 
 	private IssueCodes() {

@@ -1,0 +1,64 @@
+package bulwark.check;
+
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Set;
+
+import bulwark.check.rules.Rule;
+import bulwark.check.rules.RuleRegistry;
+import bulwark.lang.design.Design;
+import bulwark.lang.design.Waiver;
+
+/**
+ * Applies a design's waivers: a finding of the waived rule on the waived part stays in every report,
+ * marked waived, and no longer fails the design. A waiver that matches nothing, or names a rule Bulwark
+ * does not have, is itself reported, so that stale waivers do not pile up unseen.
+ */
+final class Waivers {
+	static final String RULE = "waiver";
+
+	private Waivers() {
+	}
+
+	static List<Finding> apply(Design design, List<Finding> findings) {
+		List<Finding> result = new ArrayList<>(findings.size());
+		Set<Waiver> used = new HashSet<>();
+		for (Finding f : findings) {
+			Waiver w = match(design, f);
+			if (w != null) {
+				used.add(w);
+				result.add(new Finding(f.rule(), f.concern(), f.severity(), f.message() + " [waived by " + w.getWho()
+						+ " on " + w.getDate() + ": " + w.getJustification() + "]", f.part(), f.caseName(), f.location(),
+						f.value(), f.limit(), f.unit(), true));
+			} else {
+				result.add(f);
+			}
+		}
+		Set<String> known = new HashSet<>();
+		for (Rule r : RuleRegistry.all()) {
+			known.add(r.info().id());
+		}
+		for (Waiver w : design.getWaivers()) {
+			if (!known.contains(w.getRule())) {
+				result.add(Finding.plain(RULE, Concern.STRUCTURE, Severity.WARNING, "the waiver names no rule Bulwark has: '"
+						+ w.getRule() + "' (rules: " + String.join(", ", known) + ")", null, Locations.of(w)));
+			} else if (!used.contains(w)) {
+				result.add(Finding.plain(RULE, Concern.STRUCTURE, Severity.WARNING, "the waiver of " + w.getRule() + " on "
+						+ w.getPart().getName() + " matches no finding; remove it if the design no longer needs it",
+						w.getPart().getName(), Locations.of(w)));
+			}
+		}
+		return result;
+	}
+
+	private static Waiver match(Design design, Finding f) {
+		for (Waiver w : design.getWaivers()) {
+			if (f.part() != null && w.getPart() != null && f.rule().equals(w.getRule())
+					&& f.part().equals(w.getPart().getName())) {
+				return w;
+			}
+		}
+		return null;
+	}
+}
