@@ -6,6 +6,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Optional;
 
 import org.eclipse.xtext.util.CancelIndicator;
 import org.eclipse.xtext.validation.Issue;
@@ -42,6 +43,12 @@ public final class DesignChecker {
 	public DesignResult check(Path file) {
 		String text;
 		try {
+			if (Files.size(file) > 4L * InputLimits.MAX_CHARACTERS) { // refuse before reading it into memory
+				return new DesignResult(file.toString(), null, Status.ERROR, List.of(Finding.plain("file",
+						Concern.STRUCTURE, Severity.ERROR, "the file has " + Files.size(file)
+								+ " bytes; designs are limited to " + InputLimits.MAX_CHARACTERS + " characters",
+						null, SourceLocation.NONE)), List.of());
+			}
 			text = Files.readString(file, StandardCharsets.UTF_8);
 		} catch (Exception e) {
 			return new DesignResult(file.toString(), null, Status.ERROR,
@@ -54,6 +61,10 @@ public final class DesignChecker {
 	}
 
 	public DesignResult check(String text, String file, CancelIndicator cancel) {
+		Optional<Finding> refused = InputLimits.check(text);
+		if (refused.isPresent()) {
+			return new DesignResult(file, null, Status.ERROR, List.of(refused.get()), List.of());
+		}
 		return check(loader.load(text, file, cancel));
 	}
 
