@@ -70,7 +70,6 @@ public final class DesignChecker {
 
 	public DesignResult check(LoadedDesign loaded) {
 		List<Finding> findings = new ArrayList<>();
-		// (reassigned once the waivers are applied)
 		boolean languageErrors = false;
 		for (Issue issue : loaded.issues()) {
 			Finding f = LanguageFindings.of(issue);
@@ -120,7 +119,9 @@ public final class DesignChecker {
 				where = Locations.of(compiled.parts().get(part), DesignPackage.Literals.MEMBER__NAME);
 			} else {
 				for (Member m : compiled.design().getMembers()) {
-					if (failure.place().equals(m.getName())) {
+					// a net by its name, or a case by the devices it adds ("case NAME #k")
+					if (failure.place().equals(m.getName())
+							|| m instanceof bulwark.lang.design.Case && failure.place().startsWith("case " + m.getName() + " #")) {
 						where = Locations.of(m, DesignPackage.Literals.MEMBER__NAME);
 					}
 				}

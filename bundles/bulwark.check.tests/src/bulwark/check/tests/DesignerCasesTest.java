@@ -63,6 +63,17 @@ class DesignerCasesTest {
 	}
 
 	@Test
+	void aCaseThatCannotBeSolvedIsFoundOnItsLine() {
+		// two wires across the same terminals form a loop of ideal sources: the solver names the case's device
+		DesignResult r = Fixtures.check(INPUT + "case \"double short\" { short TIP to COM short COM to TIP }\n");
+		assertEquals(Status.ERROR, r.status());
+		Finding f = r.findings().stream().filter(x -> x.rule().equals("solver")).findFirst().orElseThrow();
+		assertEquals("double short", f.caseName());
+		assertEquals(INPUT.split("\n").length + 1, f.location().line());
+		assertTrue(f.message().contains("voltage source loop"), f.message());
+	}
+
+	@Test
 	void caseMistakesAreLanguageErrors() {
 		DesignResult r = Fixtures.check(INPUT.replace("apply 357.8 V from TIP", "apply 357.8 Ω from TIP")
 				.replace("short TIP to COM", "short TIP to TIP"));
