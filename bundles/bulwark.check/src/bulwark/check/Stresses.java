@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Optional;
 
 import bulwark.check.compile.CompiledDesign;
+import bulwark.check.compile.ResistorRatings;
 import bulwark.check.compile.Settings;
 import bulwark.engine.dc.DcSolution;
 import bulwark.engine.dc.OperatingPoint;
@@ -13,7 +14,7 @@ import bulwark.lang.design.PartKind;
 
 /**
  * Every part's figures in one solved case. A resistor's utilisation is the larger of P / rated power and
- * |V| / rated voltage, over whichever ratings the design gives.
+ * |V| / limiting element voltage (rated, or by package; see ResistorRatings), over whichever the design gives.
  */
 final class Stresses {
 	private Stresses() {
@@ -27,7 +28,8 @@ final class Stresses {
 			String limiting = null;
 			if (part.getKind() == PartKind.RESISTOR) {
 				Optional<Double> power = Settings.rating(part, "power");
-				Optional<Double> voltage = Settings.rating(part, "voltage");
+				Optional<Double> voltage = ResistorRatings.limitingElementVoltage(part)
+						.map(ResistorRatings.VoltageRating::volts);
 				if (power.isPresent()) {
 					utilisation = Math.abs(p.power()) / power.get();
 					limiting = "power";

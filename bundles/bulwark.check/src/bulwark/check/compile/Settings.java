@@ -22,6 +22,17 @@ public final class Settings {
 		return Optional.empty();
 	}
 
+	/** A parameter given as a word (colour red) or as a listed number (package 1206), as written. */
+	public static Optional<String> wordOrNumber(Part part, String name) {
+		for (Setting s : part.getSettings()) {
+			if (s instanceof Parameter p && name.equals(s.getName())) {
+				return Optional.ofNullable(p.getWord() != null ? p.getWord()
+						: p.getValue() == null ? null : p.getValue().getMagnitude());
+			}
+		}
+		return Optional.empty();
+	}
+
 	/** A parameter given as a word (colour red). */
 	public static Optional<String> word(Part part, String name) {
 		for (Setting s : part.getSettings()) {

@@ -11,8 +11,13 @@ import bulwark.lang.units.Unit;
  * a source's and a battery's plus and minus.
  */
 public final class KindCatalog {
+	/** Resistor packages whose limiting element voltage Bulwark knows (sources.md, common practice). */
+	public static final List<String> RESISTOR_PACKAGES = List.of("0402", "0603", "0805", "1206", "2512",
+			"axial_quarter", "axial_half");
 	private static final KindSpec RESISTOR = new KindSpec("resistor", List.of("a", "b"),
-			List.of(new SettingSpec("value", Unit.OHM, true, "resistance")),
+			List.of(new SettingSpec("value", Unit.OHM, true, "resistance"),
+					SettingSpec.word("package", "the package, which sets the limiting element voltage",
+							RESISTOR_PACKAGES)),
 			List.of(new SettingSpec("power", Unit.WATT, false, "rated power"),
 					new SettingSpec("voltage", Unit.VOLT, false, "rated working voltage")));
 	private static final KindSpec SOURCE = new KindSpec("source", List.of("plus", "minus"),

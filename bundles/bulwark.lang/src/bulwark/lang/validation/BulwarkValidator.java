@@ -286,8 +286,13 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 			error(s.getName() + " takes a number" + (spec.unit() == null ? "" : " with its unit, for example 1 " + spec.unit().symbol())
 					+ ", not '" + word + "'", s, DesignPackage.Literals.PARAMETER__WORD, IssueCodes.UNKNOWN_WORD);
 		} else if (word == null) {
-			error(s.getName() + " is one of: " + String.join(", ", spec.choices()), s, DesignPackage.Literals.SETTING__NAME,
-					IssueCodes.UNKNOWN_WORD);
+			// a package size such as 1206 is read as a number: accept it when it is one of the choices
+			Quantity q = s.getValue();
+			boolean listedNumber = q != null && q.getUnit() == null && spec.choices().contains(q.getMagnitude());
+			if (!listedNumber) {
+				error(s.getName() + " is one of: " + String.join(", ", spec.choices()), s,
+						DesignPackage.Literals.SETTING__NAME, IssueCodes.UNKNOWN_WORD);
+			}
 		} else if (!spec.choices().contains(word)) {
 			error("'" + word + "' is not a " + s.getName() + " Bulwark knows; it is one of: "
 					+ String.join(", ", spec.choices()), s, DesignPackage.Literals.PARAMETER__WORD, IssueCodes.UNKNOWN_WORD);

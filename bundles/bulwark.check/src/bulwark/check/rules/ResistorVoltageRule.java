@@ -1,0 +1,63 @@
+package bulwark.check.rules;
+
+import java.util.Locale;
+import java.util.Optional;
+import java.util.function.Consumer;
+
+import bulwark.check.Concern;
+import bulwark.check.Finding;
+import bulwark.check.Locations;
+import bulwark.check.Severity;
+import bulwark.check.compile.ResistorRatings;
+import bulwark.check.compile.ResistorRatings.VoltageRating;
+import bulwark.engine.dc.OperatingPoint;
+import bulwark.lang.design.DesignPackage;
+import bulwark.lang.design.Part;
+import bulwark.lang.design.PartKind;
+
+/**
+ * A resistor has more voltage across it than its limiting element voltage — the failure of a series
+ * string whose resistors were chosen by power alone: each dissipates little, but flashes over. With
+ * resistor-power this applies MIL-PRF-39005G §3.5.8's rated voltage, min(√(P·R), limiting element
+ * voltage). The worst case over all cases is reported on the designator.
+ */
+public final class ResistorVoltageRule implements Rule {
+	public static final String ID = "resistor-voltage";
+	private static final RuleInfo INFO = new RuleInfo(ID, Concern.SERIES_STRING, Severity.ERROR,
+			"a resistor has more voltage across it than its limiting element voltage");
+
+	@Override
+	public RuleInfo info() {
+		return INFO;
+	}
+
+	@Override
+	public void check(CheckContext context, Consumer<Finding> findings) {
+		for (Part part : context.design().parts().values()) {
+			if (part.getKind() != PartKind.RESISTOR) {
+				continue;
+			}
+			Optional<VoltageRating> rated = ResistorRatings.limitingElementVoltage(part);
+			if (rated.isEmpty()) {
+				continue;
+			}
+			double worst = -1;
+			String worstCase = null;
+			for (SolvedCase c : context.cases()) {
+				OperatingPoint p = c.solution().device(part.getName());
+				if (Math.abs(p.voltage()) > worst) {
+					worst = Math.abs(p.voltage());
+					worstCase = c.faultCase().name();
+				}
+			}
+			double limit = rated.get().volts();
+			if (worstCase != null && worst > limit) {
+				String message = String.format(Locale.ROOT, "%s has %s across it in case '%s', over its rated %s (%s; %.0f %%)",
+						part.getName(), Figures.engineering(worst, "V"), worstCase, Figures.engineering(limit, "V"),
+						rated.get().basis(), 100 * worst / limit);
+				findings.accept(new Finding(ID, INFO.concern(), INFO.severity(), message, part.getName(), worstCase,
+						Locations.of(part, DesignPackage.Literals.MEMBER__NAME), worst, limit, "V", false));
+			}
+		}
+	}
+}
