@@ -8,7 +8,6 @@ import bulwark.check.Finding;
 import bulwark.check.Locations;
 import bulwark.check.Severity;
 import bulwark.check.compile.Settings;
-import bulwark.engine.dc.OperatingPoint;
 import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
@@ -37,16 +36,10 @@ public final class ResistorPowerRule implements Rule {
 			if (rated.isEmpty()) {
 				continue; // reported by rating-missing
 			}
-			double worst = -1;
-			String worstCase = null;
-			for (SolvedCase c : context.cases()) {
-				OperatingPoint p = c.solution().device(part.getName());
-				if (Math.abs(p.power()) > worst) {
-					worst = Math.abs(p.power());
-					worstCase = c.faultCase().name();
-				}
-			}
-			if (worstCase != null && worst > rated.get()) {
+			Optional<WorstCase> found = WorstCase.of(context, part.getName(), p -> Math.abs(p.power()));
+			if (found.isPresent() && found.get().value() > rated.get()) {
+				double worst = found.get().value();
+				String worstCase = found.get().caseName();
 				String message = String.format(java.util.Locale.ROOT,
 						"%s dissipates %s in case '%s', over its rated %s (%.0f %% of rating)", part.getName(),
 						Figures.watts(worst), worstCase, Figures.watts(rated.get()), 100 * worst / rated.get());

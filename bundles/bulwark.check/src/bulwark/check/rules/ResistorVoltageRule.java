@@ -10,7 +10,6 @@ import bulwark.check.Locations;
 import bulwark.check.Severity;
 import bulwark.check.compile.ResistorRatings;
 import bulwark.check.compile.ResistorRatings.VoltageRating;
-import bulwark.engine.dc.OperatingPoint;
 import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
@@ -41,17 +40,11 @@ public final class ResistorVoltageRule implements Rule {
 			if (rated.isEmpty()) {
 				continue;
 			}
-			double worst = -1;
-			String worstCase = null;
-			for (SolvedCase c : context.cases()) {
-				OperatingPoint p = c.solution().device(part.getName());
-				if (Math.abs(p.voltage()) > worst) {
-					worst = Math.abs(p.voltage());
-					worstCase = c.faultCase().name();
-				}
-			}
+			Optional<WorstCase> found = WorstCase.of(context, part.getName(), p -> Math.abs(p.voltage()));
 			double limit = rated.get().volts();
-			if (worstCase != null && worst > limit) {
+			if (found.isPresent() && found.get().value() > limit) {
+				double worst = found.get().value();
+				String worstCase = found.get().caseName();
 				String message = String.format(Locale.ROOT, "%s has %s across it in case '%s', over its rated %s (%s; %.0f %%)",
 						part.getName(), Figures.engineering(worst, "V"), worstCase, Figures.engineering(limit, "V"),
 						rated.get().basis(), 100 * worst / limit);
