@@ -5,10 +5,8 @@ import java.util.function.Consumer;
 
 import bulwark.check.Concern;
 import bulwark.check.Finding;
-import bulwark.check.Locations;
 import bulwark.check.Severity;
 import bulwark.check.compile.Settings;
-import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
 
@@ -43,8 +41,7 @@ public final class ResistorPowerRule implements Rule {
 				String message = String.format(java.util.Locale.ROOT,
 						"%s dissipates %s in case '%s', over its rated %s (%.0f %% of rating)", part.getName(),
 						Figures.watts(worst), worstCase, Figures.watts(rated.get()), 100 * worst / rated.get());
-				findings.accept(new Finding(ID, INFO.concern(), INFO.severity(), message, part.getName(), worstCase,
-						Locations.of(part, DesignPackage.Literals.MEMBER__NAME), worst, rated.get(), "W", false));
+				findings.accept(OverLimit.of(INFO, part, found.get(), rated.get(), "W", message));
 			}
 		}
 	}

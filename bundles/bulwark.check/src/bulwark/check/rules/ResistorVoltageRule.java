@@ -6,11 +6,9 @@ import java.util.function.Consumer;
 
 import bulwark.check.Concern;
 import bulwark.check.Finding;
-import bulwark.check.Locations;
 import bulwark.check.Severity;
 import bulwark.check.compile.ResistorRatings;
 import bulwark.check.compile.ResistorRatings.VoltageRating;
-import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
 
@@ -48,8 +46,7 @@ public final class ResistorVoltageRule implements Rule {
 				String message = String.format(Locale.ROOT, "%s has %s across it in case '%s', over its rated %s (%s; %.0f %%)",
 						part.getName(), Figures.engineering(worst, "V"), worstCase, Figures.engineering(limit, "V"),
 						rated.get().basis(), 100 * worst / limit);
-				findings.accept(new Finding(ID, INFO.concern(), INFO.severity(), message, part.getName(), worstCase,
-						Locations.of(part, DesignPackage.Literals.MEMBER__NAME), worst, limit, "V", false));
+				findings.accept(OverLimit.of(INFO, part, found.get(), limit, "V", message));
 			}
 		}
 	}

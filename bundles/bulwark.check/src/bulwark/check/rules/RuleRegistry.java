@@ -5,7 +5,7 @@ import java.util.List;
 /** Every rule Bulwark runs, listed explicitly (no class-path scanning), in report order. */
 public final class RuleRegistry {
 	private static final List<Rule> ALL = List.of(new ResistorPowerRule(), new ResistorVoltageRule(),
-			new RatingMissingRule());
+			new DiodeReverseRule(), new BaseEmitterRule(), new RatingMissingRule());
 
 	private RuleRegistry() {
 	}
