@@ -9,7 +9,8 @@ import picocli.CommandLine.Command;
 @Command(name = "bulwark", mixinStandardHelpOptions = true, versionProvider = Version.class,
 		description = { "Checks instrument input designs against their ratings and abuse at the terminals.", "",
 				Safety.CAUTION },
-		subcommands = { CheckCommand.class, SolveCommand.class, DemoCommand.class, CommandLine.HelpCommand.class },
+		subcommands = { CheckCommand.class, SolveCommand.class, ExplainCommand.class, DemoCommand.class,
+				CommandLine.HelpCommand.class },
 		footer = { "", "Exit codes: 0 no error finding, 1 error findings, 2 a design could not be checked, "
 				+ "3 usage error." })
 public final class BulwarkCommand implements Runnable {

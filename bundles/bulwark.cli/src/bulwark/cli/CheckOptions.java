@@ -7,8 +7,20 @@ import picocli.CommandLine.Option;
 /** Options shared by the commands that check designs. */
 public final class CheckOptions {
 	public enum Format {
-		text, json
+		text, json, junit
 	}
+
+	public enum FailOn {
+		error, warning, never
+	}
+
+	@Option(names = "--fail-on", defaultValue = "error",
+			description = "Exit with 1 when a finding of this severity or worse is not waived: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
+	FailOn failOn;
+
+	@Option(names = "--jobs", defaultValue = "0", paramLabel = "N",
+			description = "Designs checked at once (default: one per processor).")
+	int jobs;
 
 	@Option(names = "--format", defaultValue = "text",
 			description = "Report format: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")

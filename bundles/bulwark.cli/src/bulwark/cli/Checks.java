@@ -10,10 +10,18 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+
+import javax.xml.stream.XMLStreamException;
 
 import bulwark.check.DesignChecker;
 import bulwark.check.DesignResult;
+import bulwark.check.Severity;
 import bulwark.check.Status;
+import bulwark.check.report.JUnitReport;
 import bulwark.check.report.JsonReport;
 import bulwark.check.report.TextReport;
 
@@ -28,11 +36,7 @@ final class Checks {
 			err.println("bulwark: no design files (*" + DesignFiles.EXTENSION + ") found in " + paths);
 			return ExitCodes.USAGE;
 		}
-		DesignChecker checker = Language.checker();
-		List<DesignResult> results = new ArrayList<>();
-		for (Path f : files) {
-			results.add(checker.check(f));
-		}
+		List<DesignResult> results = checkAll(files, options.jobs);
 		StringWriter report = new StringWriter();
 		write(results, options, report);
 		if (options.out == null) {
@@ -47,13 +51,69 @@ final class Checks {
 		err.printf("bulwark: %d design(s) checked: %d pass, %d fail, %d not checked%n", results.size(), pass, fail,
 				error);
 		err.flush();
-		return error > 0 ? ExitCodes.NOT_CHECKED : fail > 0 ? ExitCodes.FINDINGS : ExitCodes.CLEAN;
+		if (error > 0) {
+			return ExitCodes.NOT_CHECKED;
+		}
+		boolean failing;
+		switch (options.failOn) {
+		case never:
+			failing = false;
+			break;
+		case warning:
+			failing = results.stream().flatMap(r -> r.findings().stream())
+					.anyMatch(f -> !f.waived() && f.severity() != Severity.INFO);
+			break;
+		case error:
+		default:
+			failing = fail > 0;
+		}
+		return failing ? ExitCodes.FINDINGS : ExitCodes.CLEAN;
+	}
+
+	/** Checks the files on a pool of threads (each load has its own resource set); results in file order. */
+	private static List<DesignResult> checkAll(List<Path> files, int jobs) throws IOException {
+		DesignChecker checker = Language.checker();
+		int threads = Math.max(1, Math.min(files.size(),
+				jobs > 0 ? jobs : Runtime.getRuntime().availableProcessors()));
+		if (threads == 1) {
+			List<DesignResult> results = new ArrayList<>();
+			for (Path f : files) {
+				results.add(checker.check(f));
+			}
+			return results;
+		}
+		ExecutorService pool = Executors.newFixedThreadPool(threads);
+		try {
+			List<Future<DesignResult>> futures = new ArrayList<>();
+			for (Path f : files) {
+				futures.add(pool.submit(() -> checker.check(f)));
+			}
+			List<DesignResult> results = new ArrayList<>();
+			for (Future<DesignResult> future : futures) {
+				results.add(future.get());
+			}
+			return results;
+		} catch (InterruptedException e) {
+			Thread.currentThread().interrupt();
+			throw new IOException("interrupted", e);
+		} catch (ExecutionException e) {
+			throw new IOException("a check stopped: " + e.getCause(), e.getCause());
+		} finally {
+			pool.shutdownNow();
+		}
 	}
 
 	private static void write(List<DesignResult> results, CheckOptions options, Writer w) throws IOException {
 		switch (options.format) {
 		case json:
 			JsonReport.write(results, Version.get(), Safety.CAUTION, w);
+			break;
+		case junit:
+			try {
+				JUnitReport.write(results, w);
+			} catch (XMLStreamException e) {
+				throw new IOException(e);
+			}
 			break;
 		case text:
 		default:

@@ -1,0 +1,63 @@
+package bulwark.cli.tests;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.ByteArrayInputStream;
+import java.nio.charset.StandardCharsets;
+
+import javax.xml.parsers.DocumentBuilderFactory;
+
+import org.junit.jupiter.api.Test;
+import org.w3c.dom.Document;
+import org.w3c.dom.Element;
+import org.w3c.dom.NodeList;
+
+/** explain, --fail-on, --jobs and the JUnit XML report. */
+class ReportsAndOptionsTest {
+	private static final String LAB = "lab-indicator-seeded.bulwark";
+	private static final String LOOM = "stage-loom-checker.bulwark";
+
+	@Test
+	void explainRendersTheRulePage() {
+		CliRun run = CliRun.of("explain", "resistor-power");
+		assertEquals(0, run.exitCode(), run.err());
+		assertTrue(run.out().startsWith("RESISTOR-POWER — A RESISTOR DISSIPATES MORE THAN ITS RATED POWER\n"), run.out());
+		assertTrue(run.out().contains("\nHow it is computed\n------------------\n"), run.out());
+		CliRun unknown = CliRun.of("explain", "no-such-rule");
+		assertEquals(3, unknown.exitCode());
+		assertTrue(unknown.err().contains("resistor-power"), unknown.err());
+	}
+
+	@Test
+	void failOnDecidesWhatFails() {
+		assertEquals(0, CliRun.of("check", CliRun.example(LOOM)).exitCode()); // a warning only
+		assertEquals(1, CliRun.of("check", "--fail-on", "warning", CliRun.example(LOOM)).exitCode());
+		assertEquals(0, CliRun.of("check", "--fail-on", "never", CliRun.example(LAB)).exitCode());
+	}
+
+	@Test
+	void parallelChecksReportInFileOrder() {
+		String folder = CliRun.root().resolve("examples").toString();
+		CliRun one = CliRun.of("check", "--jobs", "1", folder);
+		CliRun four = CliRun.of("check", "--jobs", "4", folder);
+		assertEquals(one.out(), four.out());
+		assertEquals(one.exitCode(), four.exitCode());
+	}
+
+	@Test
+	void junitReportHasOneCasePerRuleAndDesign() throws Exception {
+		CliRun run = CliRun.of("check", "--format", "junit", CliRun.example(LAB), CliRun.example("greenhouse-vent-input.bulwark"));
+		assertEquals(1, run.exitCode(), run.err());
+		Document xml = DocumentBuilderFactory.newInstance().newDocumentBuilder()
+				.parse(new ByteArrayInputStream(run.out().getBytes(StandardCharsets.UTF_8)));
+		NodeList suites = xml.getElementsByTagName("testsuite");
+		assertEquals(2, suites.getLength());
+		NodeList failures = xml.getElementsByTagName("failure");
+		assertEquals(1, failures.getLength());
+		Element failed = (Element) failures.item(0).getParentNode();
+		assertEquals("resistor-power", failed.getAttribute("name"));
+		assertTrue(failed.getAttribute("classname").endsWith(LAB));
+		assertEquals(0, xml.getElementsByTagName("error").getLength());
+	}
+}
