@@ -1,0 +1,99 @@
+package bulwark.fuzz;
+
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+
+import org.eclipse.xtext.util.CancelIndicator;
+
+import bulwark.check.DesignChecker;
+import bulwark.check.DesignResult;
+import bulwark.check.Finding;
+import bulwark.check.load.DesignLoader;
+import bulwark.lang.BulwarkStandaloneSetup;
+import net.jqwik.api.Arbitraries;
+import net.jqwik.api.Arbitrary;
+import net.jqwik.api.Combinators;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.Provide;
+
+/**
+ * Generated designs, well-formed and mangled, through the whole check. Whatever the text, the check must
+ * end in a result — pass, fail, or not checked with located reasons — never in an exception.
+ */
+class CheckFuzz {
+	private static final DesignChecker CHECKER = new DesignChecker(
+			new DesignLoader(new BulwarkStandaloneSetup().createInjectorAndDoEMFRegistration()));
+	private static final List<String> KINDS = List.of("resistor", "source", "battery", "diode", "zener", "led", "npn",
+			"pnp", "nmos", "pmos", "comparator", "capacitor", "inductor", "potentiometer", "protector", "fuse",
+			"indicator");
+	private static final List<String> PINS = List.of("a", "b", "plus", "minus", "anode", "cathode", "collector",
+			"base", "emitter", "drain", "gate", "source", "in_plus", "in_minus", "out", "supply_plus", "supply_minus",
+			"wiper");
+	private static final List<String> SETTINGS = List.of("value", "voltage", "resistance", "emf", "forward",
+			"breakdown", "beta", "gain", "trip", "position", "rated power", "rated voltage", "rated reverse", "colour");
+	private static final List<String> UNITS = List.of("Ω", "kΩ", "MΩ", "V", "mV", "A", "mA", "W", "mW", "F", "nF", "H",
+			"µH", "s", "", "k", "furlong");
+
+	@Provide
+	Arbitrary<String> designs() {
+		Arbitrary<Integer> net = Arbitraries.integers().between(0, 6);
+		Arbitrary<String> quantity = Combinators.combine(Arbitraries.doubles().between(-1e6, 1e6).ofScale(3),
+				Arbitraries.of(UNITS)).as((v, u) -> v + " " + u);
+		Arbitrary<String> setting = Combinators.combine(Arbitraries.of(SETTINGS), quantity).as((s, q) -> s + " " + q);
+		Arbitrary<String> pin = Combinators.combine(Arbitraries.of(PINS), net).as((p, n) -> p + ": n" + n);
+		Arbitrary<String> part = Combinators.combine(Arbitraries.of(KINDS), Arbitraries.integers().between(1, 30),
+				pin.list().ofMinSize(1).ofMaxSize(5), setting.list().ofMaxSize(5))
+				.as((k, i, pins, settings) -> k + " P" + i + " (" + String.join(", ", pins) + ") { "
+						+ String.join(" ", settings) + " }");
+		Arbitrary<String> action = Combinators.combine(Arbitraries.of("apply", "connect", "short"), quantity,
+				Arbitraries.integers().between(0, 2), Arbitraries.integers().between(0, 2))
+				.as((a, q, f, t) -> a.equals("short") ? "short T" + f + " to T" + t : a + " " + q + " from T" + f + " to T" + t);
+		Arbitrary<String> member = Arbitraries.oneOf(part, part, part,
+				action.list().ofMaxSize(3).map(as -> "case \"c\" { " + String.join(" ", as) + " }"),
+				net.map(n -> "waive \"resistor-power\" on P" + n + " because \"r\" by \"w\" on \"2026-11-30\""));
+		Arbitrary<String> body = member.list().ofMaxSize(12).map(ms -> String.join("\n", ms));
+		return body.map(b -> {
+			StringBuilder text = new StringBuilder("design \"fuzz\"\nreference net n0\n");
+			for (int i = 1; i <= 6; i++) {
+				text.append("net n").append(i).append('\n');
+			}
+			text.append("terminal T0 at n0\nterminal T1 at n1\nterminal T2 at n2\n");
+			return text.append(b).append('\n').toString();
+		});
+	}
+
+	@Provide
+	Arbitrary<String> mangled() {
+		return Combinators.combine(designs(), Arbitraries.integers().between(0, 10_000),
+				Arbitraries.integers().between(1, 20), Arbitraries.strings().ofMaxLength(6))
+				.as((text, at, cut, insert) -> {
+					int from = Math.min(at, text.length());
+					int to = Math.min(from + cut, text.length());
+					return text.substring(0, from) + insert + text.substring(to);
+				});
+	}
+
+	@Property
+	void wellFormedDesignsEndInAResult(@ForAll("designs") String text) {
+		checkSurvives(text);
+	}
+
+	@Property
+	void mangledDesignsEndInAResult(@ForAll("mangled") String text) {
+		checkSurvives(text);
+	}
+
+	private static void checkSurvives(String text) {
+		DesignResult r = CHECKER.check(text, "fuzz.bulwark", CancelIndicator.NullImpl);
+		assertNotNull(r.status());
+		for (Finding f : r.findings()) {
+			assertNotNull(f.message());
+			if (f.rule().equals("syntax") || f.rule().equals("structure")) {
+				assertTrue(f.location().line() >= 1, () -> "unlocated: " + f + "\n" + text);
+			}
+		}
+	}
+}
