@@ -21,6 +21,7 @@ import bulwark.check.DesignChecker;
 import bulwark.check.DesignResult;
 import bulwark.check.Severity;
 import bulwark.check.Status;
+import bulwark.check.report.HtmlReport;
 import bulwark.check.report.JUnitReport;
 import bulwark.check.report.JsonReport;
 import bulwark.check.report.TextReport;
@@ -107,6 +108,9 @@ final class Checks {
 		switch (options.format) {
 		case json:
 			JsonReport.write(results, Version.get(), Safety.CAUTION, w);
+			break;
+		case html:
+			HtmlReport.write(results, Version.get(), Safety.CAUTION, w);
 			break;
 		case junit:
 			try {

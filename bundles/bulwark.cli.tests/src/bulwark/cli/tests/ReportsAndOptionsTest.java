@@ -46,6 +46,23 @@ class ReportsAndOptionsTest {
 	}
 
 	@Test
+	void htmlReportIsSelfContainedAndEscaped(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir) throws Exception {
+		java.nio.file.Path hostile = dir.resolve("hostile.bulwark");
+		java.nio.file.Files.writeString(hostile, java.nio.file.Files.readString(CliRun.root().resolve("examples").resolve(LAB))
+				.replace("design \"Lab:", "design \"<script>alert(1)</script> Lab:"));
+		CliRun run = CliRun.of("check", "--format", "html", hostile.toString());
+		assertEquals(1, run.exitCode(), run.err());
+		String html = run.out();
+		assertTrue(html.startsWith("<!DOCTYPE html>"), html);
+		assertTrue(html.contains("&lt;script&gt;alert(1)&lt;/script&gt; Lab:"), "title escaped");
+		assertTrue(!html.contains("<script"), "nothing from the design runs");
+		assertTrue(html.contains("IEC 61010-1"), "the safety caution");
+		assertTrue(html.contains("<svg") && html.contains(">R_DROP</text>"), "a utilisation bar for R_DROP");
+		assertTrue(html.contains("276 % (power, normal, terminals open)"), html);
+		assertTrue(!html.contains("http"), "nothing fetched from anywhere");
+	}
+
+	@Test
 	void junitReportHasOneCasePerRuleAndDesign() throws Exception {
 		CliRun run = CliRun.of("check", "--format", "junit", CliRun.example(LAB), CliRun.example("greenhouse-vent-input.bulwark"));
 		assertEquals(1, run.exitCode(), run.err());

@@ -1,0 +1,120 @@
+package bulwark.check.report;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import bulwark.check.CaseResult;
+import bulwark.check.DesignResult;
+import bulwark.check.Finding;
+import bulwark.check.PartStress;
+
+/**
+ * One self-contained HTML page per run (no script, no link, nothing fetched): per design its status, the
+ * findings, each part's worst utilisation as a bar (inline SVG), and the cases; the safety caution on top.
+ * Every string from a design is escaped.
+ */
+public final class HtmlReport {
+	/** Bar colours of our own: calm below 80 % of the rating, amber to 100 %, red beyond. */
+	private static final String OK = "#4a7c59", NEAR = "#c8963e", OVER = "#b23a48";
+
+	private HtmlReport() {
+	}
+
+	public static void write(List<DesignResult> results, String version, String caution, Writer w) throws IOException {
+		w.write("<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\"><title>Bulwark report</title>\n<style>");
+		w.write("body{font-family:sans-serif;margin:2em;max-width:70em}table{border-collapse:collapse;margin:.5em 0}"
+				+ "td,th{border:1px solid #bbb;padding:.2em .5em;text-align:left;vertical-align:top}"
+				+ ".caution{border:2px solid #b23a48;padding:.6em}.pass{color:#4a7c59}.fail,.error{color:#b23a48}"
+				+ ".waived{color:#777}");
+		w.write("</style></head><body>\n<h1>Bulwark report</h1>\n");
+		w.write("<p class=\"caution\"><strong>" + escape(caution) + "</strong></p>\n");
+		w.write("<p>bulwark " + escape(version) + " — " + results.size() + " design(s)</p>\n");
+		for (DesignResult r : results) {
+			design(r, w);
+		}
+		w.write("</body></html>\n");
+		w.flush();
+	}
+
+	private static void design(DesignResult r, Writer w) throws IOException {
+		w.write("<h2>" + escape(r.title() == null ? r.file() : r.title()) + " <span class=\"" + r.status().id() + "\">"
+				+ r.status().id() + "</span></h2>\n<p>" + escape(r.file()) + "</p>\n");
+		if (r.findings().isEmpty()) {
+			w.write("<p>No findings.</p>\n");
+		} else {
+			w.write("<table><tr><th>line</th><th>severity</th><th>rule</th><th>part</th><th>case</th><th>message</th></tr>\n");
+			for (Finding f : r.findings()) {
+				w.write("<tr" + (f.waived() ? " class=\"waived\"" : "") + "><td>" + f.location().line() + "</td><td>"
+						+ f.severity().id() + (f.waived() ? " (waived)" : "") + "</td><td>" + escape(f.rule()) + "</td><td>"
+						+ escape(f.part() == null ? "" : f.part()) + "</td><td>" + escape(f.caseName() == null ? "" : f.caseName())
+						+ "</td><td>" + escape(f.message()) + "</td></tr>\n");
+			}
+			w.write("</table>\n");
+		}
+		Map<String, PartStress> worst = new LinkedHashMap<>();
+		Map<String, String> worstCase = new LinkedHashMap<>();
+		for (CaseResult c : r.cases()) {
+			for (PartStress p : c.parts()) {
+				if (p.utilisation() != null && (!worst.containsKey(p.part()) || p.utilisation() > worst.get(p.part()).utilisation())) {
+					worst.put(p.part(), p);
+					worstCase.put(p.part(), c.name());
+				}
+			}
+		}
+		if (!worst.isEmpty()) {
+			w.write("<h3>Worst utilisation of each rated part</h3>\n");
+			w.write(bars(worst, worstCase));
+		}
+		if (!r.cases().isEmpty()) {
+			w.write("<h3>Cases</h3>\n<ul>");
+			for (CaseResult c : r.cases()) {
+				w.write("<li>" + escape(c.name()) + " (" + escape(c.kind()) + "): "
+						+ (c.converged() ? "solved" : "<strong>not solved</strong>") + "</li>");
+			}
+			w.write("</ul>\n");
+		}
+	}
+
+	/** Horizontal bars, 100 % of the rating marked by a line, longer bars clipped at 200 % with the figure beside. */
+	static String bars(Map<String, PartStress> worst, Map<String, String> worstCase) {
+		int row = 22, label = 110, width = 400;
+		StringBuilder svg = new StringBuilder(String.format(Locale.ROOT,
+				"<svg width=\"%d\" height=\"%d\" role=\"img\" font-size=\"12\">",
+				label + width + 170, row * worst.size() + 10));
+		int y = 5;
+		for (Map.Entry<String, PartStress> e : worst.entrySet()) {
+			double u = e.getValue().utilisation();
+			double shown = Math.min(u, 2.0);
+			String colour = u > 1 ? OVER : u > 0.8 ? NEAR : OK;
+			svg.append(String.format(Locale.ROOT, "<text x=\"0\" y=\"%d\">%s</text>", y + 14, escape(e.getKey())));
+			svg.append(String.format(Locale.ROOT, "<rect x=\"%d\" y=\"%d\" width=\"%.1f\" height=\"16\" fill=\"%s\"/>", label,
+					y, shown / 2 * width, colour));
+			svg.append(String.format(Locale.ROOT, "<text x=\"%d\" y=\"%d\">%.0f %% (%s, %s)</text>", label + width + 6,
+					y + 14, 100 * u, escape(e.getValue().limiting()), escape(worstCase.get(e.getKey()))));
+			y += row;
+		}
+		svg.append(String.format(Locale.ROOT, "<line x1=\"%d\" y1=\"0\" x2=\"%d\" y2=\"%d\" stroke=\"#333\"/>",
+				label + width / 2, label + width / 2, y));
+		return svg.append("</svg>\n").toString();
+	}
+
+	/** Escapes text for HTML element content and attribute values. */
+	public static String escape(String s) {
+		StringBuilder out = new StringBuilder(s.length());
+		for (char c : s.toCharArray()) {
+			switch (c) {
+			case '<' -> out.append("&lt;");
+			case '>' -> out.append("&gt;");
+			case '&' -> out.append("&amp;");
+			case '"' -> out.append("&quot;");
+			case '\'' -> out.append("&#39;");
+			default -> out.append(c);
+			}
+		}
+		return out.toString();
+	}
+}
