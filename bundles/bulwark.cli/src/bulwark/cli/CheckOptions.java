@@ -18,6 +18,10 @@ public final class CheckOptions {
 			description = "Exit with 1 when a finding of this severity or worse is not waived: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
 	FailOn failOn;
 
+	@Option(names = "--shard", paramLabel = "K/N",
+			description = "Check only the K-th of N equal shares of the designs (1 ≤ K ≤ N), the same share on every runner.")
+	String shard;
+
 	@Option(names = "--jobs", defaultValue = "0", paramLabel = "N",
 			description = "Designs checked at once (default: one per processor).")
 	int jobs;

@@ -33,11 +33,24 @@ final class Checks {
 
 	static int run(List<Path> paths, CheckOptions options, PrintWriter out, PrintWriter err) throws IOException {
 		List<Path> files = DesignFiles.collect(paths);
+		if (options.shard != null) {
+			java.util.regex.Matcher m = java.util.regex.Pattern.compile("(\\d+)/(\\d+)").matcher(options.shard);
+			int k = m.matches() ? Integer.parseInt(m.group(1)) : 0, n = m.matches() ? Integer.parseInt(m.group(2)) : 0;
+			if (n < 1 || k < 1 || k > n) {
+				err.println("bulwark: --shard takes K/N with 1 ≤ K ≤ N, for example 2/4; not '" + options.shard + "'");
+				return ExitCodes.USAGE;
+			}
+			files = shard(files, k, n);
+			if (files.isEmpty()) {
+				err.println("bulwark: shard " + options.shard + " holds no design");
+				return ExitCodes.CLEAN;
+			}
+		}
 		if (files.isEmpty()) {
 			err.println("bulwark: no design files (*" + DesignFiles.EXTENSION + ") found in " + paths);
 			return ExitCodes.USAGE;
 		}
-		List<DesignResult> results = checkAll(files, options.jobs);
+		List<DesignResult> results = checkAll(files, options.jobs, progress(files.size(), err));
 		StringWriter report = new StringWriter();
 		write(results, options, report);
 		if (options.out == null) {
@@ -71,15 +84,55 @@ final class Checks {
 		return failing ? ExitCodes.FINDINGS : ExitCodes.CLEAN;
 	}
 
+	/**
+	 * A progress line on standard error for long runs at a terminal ("checked 12 of 300"); nothing when the
+	 * output goes to a file or a pipe, or for a handful of designs.
+	 */
+	private static Runnable progress(int total, PrintWriter err) {
+		if (System.console() == null || total < 10) {
+			return () -> {
+			};
+		}
+		java.util.concurrent.atomic.AtomicInteger done = new java.util.concurrent.atomic.AtomicInteger();
+		return () -> {
+			int n = done.incrementAndGet();
+			synchronized (err) {
+				err.print("\rbulwark: checked " + n + " of " + total + (n == total ? "\n" : ""));
+				err.flush();
+			}
+		};
+	}
+
+	/**
+	 * The K-th of N shares of the files, by position in path order, so that every runner that lists the same
+	 * folders gets the same share and the shares cover every file once.
+	 */
+	static List<Path> shard(List<Path> files, int k, int n) {
+		List<Path> sorted = new ArrayList<>(files);
+		sorted.sort(null);
+		List<Path> mine = new ArrayList<>();
+		for (int i = 0; i < sorted.size(); i++) {
+			if (i % n == k - 1) {
+				mine.add(sorted.get(i));
+			}
+		}
+		return mine;
+	}
+
 	/** Checks the files on a pool of threads (each load has its own resource set); results in file order. */
-	private static List<DesignResult> checkAll(List<Path> files, int jobs) throws IOException {
-		DesignChecker checker = Language.checker();
+	private static List<DesignResult> checkAll(List<Path> files, int jobs, Runnable progress) throws IOException {
+		DesignChecker base = Language.checker();
+		java.util.function.Function<Path, DesignResult> checker = f -> {
+			DesignResult r = base.check(f);
+			progress.run();
+			return r;
+		};
 		int threads = Math.max(1, Math.min(files.size(),
 				jobs > 0 ? jobs : Runtime.getRuntime().availableProcessors()));
 		if (threads == 1) {
 			List<DesignResult> results = new ArrayList<>();
 			for (Path f : files) {
-				results.add(checker.check(f));
+				results.add(checker.apply(f));
 			}
 			return results;
 		}
@@ -87,7 +140,7 @@ final class Checks {
 		try {
 			List<Future<DesignResult>> futures = new ArrayList<>();
 			for (Path f : files) {
-				futures.add(pool.submit(() -> checker.check(f)));
+				futures.add(pool.submit(() -> checker.apply(f)));
 			}
 			List<DesignResult> results = new ArrayList<>();
 			for (Future<DesignResult> future : futures) {
