@@ -86,6 +86,18 @@ class DesignEditorUiTest {
 
 	@Test
 	@Order(2)
+	void hoverOverAPartShowsItsWorstStress() throws Exception {
+		DesignEditor editor = Application.openFile(page(), LAB);
+		assertTrue(waitUntil(() -> editor.lastResult() != null), "no check result");
+		String hover = editor.hoverText("R_DROP");
+		// 0.3456 W against 125 mW [closed form]: 276 %
+		assertTrue(hover.startsWith("R_DROP: worst 276 % of its power rating, in case 'normal, terminals open'"), hover);
+		assertTrue(hover.contains("\nerror resistor-power: R_DROP dissipates 346 mW"), hover);
+		assertEquals(null, editor.hoverText("nothing_here"));
+	}
+
+	@Test
+	@Order(3)
 	void findingDisappearsWhileTyping() throws Exception {
 		FindingsView view = (FindingsView) page().showView(FindingsView.ID);
 		DesignEditor editor = Application.openFile(page(), LAB);

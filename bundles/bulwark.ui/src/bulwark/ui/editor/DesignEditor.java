@@ -44,6 +44,12 @@ public class DesignEditor extends TextEditor {
 		return lastResult;
 	}
 
+	/** What hovering over a name shows (null when it is not a part of the last check). */
+	public String hoverText(String name) {
+		DesignResult result = lastResult;
+		return result == null ? null : PartHover.describe(result, name);
+	}
+
 	/** Finding annotations now in the editor. */
 	public List<FindingAnnotation> findingAnnotations() {
 		List<FindingAnnotation> result = new ArrayList<>();

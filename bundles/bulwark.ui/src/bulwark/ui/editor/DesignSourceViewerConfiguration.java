@@ -1,6 +1,7 @@
 package bulwark.ui.editor;
 
 import org.eclipse.jface.preference.IPreferenceStore;
+import org.eclipse.jface.text.ITextHover;
 import org.eclipse.jface.text.reconciler.IReconciler;
 import org.eclipse.jface.text.reconciler.MonoReconciler;
 import org.eclipse.jface.text.source.ISourceViewer;
@@ -16,6 +17,11 @@ class DesignSourceViewerConfiguration extends TextSourceViewerConfiguration {
 	DesignSourceViewerConfiguration(DesignEditor editor, IPreferenceStore store) {
 		super(store);
 		this.editor = editor;
+	}
+
+	@Override
+	public ITextHover getTextHover(ISourceViewer sourceViewer, String contentType) {
+		return new PartHover(editor);
 	}
 
 	@Override
