@@ -21,7 +21,7 @@ import bulwark.engine.device.Physics;
 /** Transistor circuits against closed forms (shared/docs/sources.md, "Four-resistor BJT bias"). */
 class BjtTest {
 	/**
-	 * The model keeps GMIN = 1 pS across each junction (SPICE practice); across the reverse-biased
+	 * The model keeps GMIN = 1 pS across each junction (common practice in circuit solvers); across the reverse-biased
 	 * collector junction (−4 V) it adds about 4 pA of base current, which moves IC by 3e-8 relative.
 	 */
 	private static final double RELATIVE = 1e-7;

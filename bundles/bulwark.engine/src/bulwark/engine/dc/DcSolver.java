@@ -11,7 +11,7 @@ import bulwark.engine.mna.TransientStep;
 /**
  * DC operating point by modified nodal analysis, solved with a sparse LU in a fill-reducing order, (Ho, Ruehli and Brennan, "The modified nodal approach to
  * network analysis", IEEE Trans. Circuits and Systems 22(6), 1975) and Newton–Raphson iteration on the
- * devices' companion models, with the fall-backs of SPICE2 (Nagel, ERL memo M520, 1975) when plain Newton
+ * devices' companion models, with the fall-backs Nagel describes (ERL memo M520, 1975) when plain Newton
  * fails: gmin stepping, then source stepping. A circuit without nonlinear devices is solved in one step.
  * Every outcome is a value: a {@link DcSolution} or a {@link SolveFailure} naming reason and place.
  */

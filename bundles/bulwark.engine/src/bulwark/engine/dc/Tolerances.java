@@ -4,7 +4,7 @@ package bulwark.engine.dc;
  * When a Newton iterate counts as the solution. An unknown has converged when its last update is within
  * {@code relative} × its magnitude plus the absolute tolerance of its kind (volts for nets, amperes for
  * branch currents), no junction voltage was limited, and every net's current residual is within
- * {@code relative} × the largest current meeting there plus {@code current}. The scheme follows SPICE2
+ * {@code relative} × the largest current meeting there plus {@code current}. The scheme follows Nagel
  * (Nagel, ERL memo M520, 1975, §4), with tighter defaults: rating checks compare small differences.
  */
 public record Tolerances(double relative, double voltage, double current, int maxIterations) {

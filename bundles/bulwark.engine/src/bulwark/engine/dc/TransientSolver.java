@@ -13,7 +13,7 @@ import bulwark.engine.mna.TransientStep;
  * inductor currents), estimated by Milne's device: the trapezoidal solution against a quadratic
  * extrapolation of the last three accepted points; for equal steps their error constants are
  * −1/12 and 1, so LTE ≈ |corrector − predictor| / 13 (Lambert, Numerical Methods for Ordinary Differential
- * Systems, Wiley 1991, §4.3; SPICE2 uses the same idea on charges, Nagel 1975 §3.6). A step whose LTE
+ * Systems, Wiley 1991, §4.3; Nagel, ERL memo M520, 1975, §3.6, applies the same idea to charges). A step whose LTE
  * exceeds {@link #RELATIVE}·|q| + {@link #ABSOLUTE} for any integrated quantity q is retried shorter; a step Newton cannot solve
  * is retried an eighth as long, down to {@link #SMALLEST_STEP_FRACTION} of the largest step.
  */

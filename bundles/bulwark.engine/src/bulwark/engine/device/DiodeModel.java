@@ -7,7 +7,7 @@ package bulwark.engine.device;
  *   I(v) = Is·(exp(v / (n·Vt)) − 1) − Ibv·exp(−(v + BV) / (nbv·Vt)) + GMIN·v      (v across the junction)
  * </pre>
  * Shockley, "The theory of p-n junctions in semiconductors", Bell Syst. Tech. J. 28, 1949; the breakdown
- * term is the exponential knee of SPICE2's diode (Nagel, 1975). At v = −BV the reverse current is Ibv;
+ * term is the exponential knee of Nagel's diode model (ERL memo M520, 1975). At v = −BV the reverse current is Ibv;
  * nbv sets how sharp the knee is. A zener is this model with its zener voltage as BV.
  *
  * @param saturationCurrent Is, A

@@ -2,11 +2,11 @@ package bulwark.engine.device;
 
 /**
  * The arithmetic of a pn junction shared by diodes and transistors: the Shockley exponential with a
- * linear continuation past a large argument (so that no iterate overflows), and SPICE2's junction-voltage
- * limiting (Nagel, ERL memo M520, 1975, "pnjlim"), which keeps Newton from leaping up the exponential.
+ * linear continuation past a large argument (so that no iterate overflows), and the junction-voltage
+ * limiting (Nagel, ERL memo M520, 1975), which keeps Newton from leaping up the exponential.
  */
 public final class Junction {
-	/** Conductance across every junction (SPICE's GMIN), so that no net hangs on a reverse-biased junction alone. */
+	/** Conductance across every junction (the customary minimum conductance, GMIN), so that no net hangs on a reverse-biased junction alone. */
 	public static final double GMIN = 1e-12;
 	/** Exponent beyond which exp() is continued by its tangent. */
 	static final double MAX_EXPONENT = 80;

@@ -9,7 +9,7 @@ import java.util.Arrays;
  * Sci. Stat. Comput. 9(5), 1988; the layout follows Davis, Direct Methods for Sparse Linear Systems, SIAM
  * 2006, §6.3). Columns are taken in a fill-reducing order given once per circuit; rows are pivoted by
  * magnitude, preferring the diagonal while it is within {@link #DIAGONAL_PREFERENCE} of the largest
- * candidate, which keeps the fill of the ordering (as KLU does).
+ * candidate, which keeps the fill of the ordering (Davis, §6.3, threshold partial pivoting).
  */
 public final class SparseLu {
 	/** A diagonal pivot is kept while |diagonal| ≥ this × the largest candidate in its column. */
@@ -68,7 +68,7 @@ public final class SparseLu {
 	}
 
 	/**
-	 * Numerical refactorisation with the previous pivot order and patterns (as KLU's klu_refactor): no
+	 * Numerical refactorisation with the previous pivot order and patterns (Davis, Direct Methods for Sparse Linear Systems, §6.3, numerical refactorisation): no
 	 * search of L's graph and no pivot search. Refuses (returns false) when a pivot falls below
 	 * {@link #DIAGONAL_PREFERENCE} × the largest entry of its column, so that stability is never traded.
 	 */
