@@ -44,18 +44,13 @@ public final class DesignChecker {
 		String text;
 		try {
 			if (Files.size(file) > 4L * InputLimits.MAX_CHARACTERS) { // refuse before reading it into memory
-				return new DesignResult(file.toString(), null, Status.ERROR, List.of(Finding.plain("file",
-						Concern.STRUCTURE, Severity.ERROR, "the file has " + Files.size(file)
-								+ " bytes; designs are limited to " + InputLimits.MAX_CHARACTERS + " characters",
-						null, SourceLocation.NONE)), List.of());
+				return notChecked(file.toString(), "the file has " + Files.size(file) + " bytes; designs are limited to "
+						+ InputLimits.MAX_CHARACTERS + " characters", SourceLocation.NONE);
 			}
 			text = Files.readString(file, StandardCharsets.UTF_8);
 		} catch (Exception e) {
-			return new DesignResult(file.toString(), null, Status.ERROR,
-					List.of(Finding.plain("file", Concern.STRUCTURE, Severity.ERROR,
-							"cannot read the file: " + e.getClass().getSimpleName() + ": " + e.getMessage(), null,
-							SourceLocation.NONE)),
-					List.of());
+			return notChecked(file.toString(),
+					"cannot read the file: " + e.getClass().getSimpleName() + ": " + e.getMessage(), SourceLocation.NONE);
 		}
 		return check(text, file.toString(), CancelIndicator.NullImpl);
 	}
@@ -63,7 +58,7 @@ public final class DesignChecker {
 	public DesignResult check(String text, String file, CancelIndicator cancel) {
 		Optional<Finding> refused = InputLimits.check(text);
 		if (refused.isPresent()) {
-			return new DesignResult(file, null, Status.ERROR, List.of(refused.get()), List.of());
+			return notChecked(file, refused.get().message(), refused.get().location());
 		}
 		return check(loader.load(text, file, cancel));
 	}
@@ -108,6 +103,12 @@ public final class DesignChecker {
 				: findings.stream().anyMatch(f -> f.severity() == Severity.ERROR && !f.waived()) ? Status.FAIL
 						: Status.PASS;
 		return new DesignResult(loaded.file(), title, status, findings, caseResults);
+	}
+
+	/** A design refused before it was read: one finding saying why, status error. */
+	static DesignResult notChecked(String file, String reason, SourceLocation where) {
+		return new DesignResult(file, null, Status.ERROR,
+				List.of(Finding.plain("file", Concern.STRUCTURE, Severity.ERROR, reason, null, where)), List.of());
 	}
 
 	private static Finding solverFinding(CompiledDesign compiled, FaultCase c, SolveFailure failure) {

@@ -2,12 +2,12 @@ package bulwark.check.rules;
 
 import java.util.Locale;
 import java.util.Optional;
-import java.util.function.Consumer;
+import java.util.Set;
 
 import bulwark.check.Concern;
-import bulwark.check.Finding;
 import bulwark.check.Severity;
 import bulwark.check.compile.Settings;
+import bulwark.engine.dc.OperatingPoint;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
 
@@ -16,7 +16,7 @@ import bulwark.lang.design.PartKind;
  * break down at about 5–6 V, and even brief breakdown degrades their current gain [common practice,
  * sources.md]; when the design gives no 'rated emitter_base', 5 V is assumed and the message says so.
  */
-public final class BaseEmitterRule implements Rule {
+public final class BaseEmitterRule extends PartLimitRule {
 	public static final String ID = "base-emitter-reverse";
 	/** Assumed reverse base–emitter rating when none is written [common practice, sources.md: VEBO ≈ 5–6 V]. */
 	static final double ASSUMED_VEBO = 5;
@@ -29,22 +29,31 @@ public final class BaseEmitterRule implements Rule {
 	}
 
 	@Override
-	public void check(CheckContext context, Consumer<Finding> findings) {
-		for (Part part : context.design().parts().values()) {
-			if (part.getKind() != PartKind.NPN && part.getKind() != PartKind.PNP) {
-				continue;
-			}
-			Optional<Double> given = Settings.rating(part, "emitter_base");
-			double rated = given.orElse(ASSUMED_VEBO);
-			Optional<WorstCase> worst = WorstCase.of(context, part.getName(), p -> p.reverseVoltage("base-emitter"));
-			if (worst.isPresent() && worst.get().value() > rated) {
-				double v = worst.get().value();
-				findings.accept(OverLimit.of(INFO, part, worst.get(), rated, "V",
-						String.format(Locale.ROOT, "%s's base-emitter junction is reverse-biased by %s in case '%s', over %s %s (%.0f %%)",
-								part.getName(), Figures.engineering(v, "V"), worst.get().caseName(),
-								given.isPresent() ? "its rated" : "the assumed small-signal", Figures.engineering(rated, "V"),
-								100 * v / rated)));
-			}
-		}
+	Set<PartKind> kinds() {
+		return Set.of(PartKind.NPN, PartKind.PNP);
+	}
+
+	@Override
+	Optional<Limit> limit(Part part) {
+		return Optional.of(Settings.rating(part, "emitter_base").map(Limit::rated)
+				.orElse(new Limit(ASSUMED_VEBO, "the assumed small-signal")));
+	}
+
+	@Override
+	double stress(OperatingPoint point) {
+		return point.reverseVoltage("base-emitter");
+	}
+
+	@Override
+	String unit() {
+		return "V";
+	}
+
+	@Override
+	String message(Part part, WorstCase worst, Limit limit) {
+		return String.format(Locale.ROOT,
+				"%s's base-emitter junction is reverse-biased by %s in case '%s', over %s %s (%.0f %%)", part.getName(),
+				Figures.engineering(worst.value(), "V"), worst.caseName(), limit.basis(),
+				Figures.engineering(limit.value(), "V"), 100 * worst.value() / limit.value());
 	}
 }

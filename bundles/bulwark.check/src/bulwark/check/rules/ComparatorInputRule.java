@@ -2,10 +2,9 @@ package bulwark.check.rules;
 
 import java.util.Locale;
 import java.util.Optional;
-import java.util.function.Consumer;
+import java.util.Set;
 
 import bulwark.check.Concern;
-import bulwark.check.Finding;
 import bulwark.check.Severity;
 import bulwark.check.compile.Settings;
 import bulwark.engine.dc.OperatingPoint;
@@ -17,7 +16,7 @@ import bulwark.lang.design.PartKind;
  * allow about 0.3 V beyond either rail [common practice, sources.md]; that is assumed when the design
  * gives no 'rated input_margin'.
  */
-public final class ComparatorInputRule implements Rule {
+public final class ComparatorInputRule extends PartLimitRule {
 	public static final String ID = "comparator-input";
 	/** Assumed margin beyond the rails [common practice, sources.md: 0.3 V, some parts 0.5 V]. */
 	static final double ASSUMED_MARGIN = 0.3;
@@ -30,26 +29,19 @@ public final class ComparatorInputRule implements Rule {
 	}
 
 	@Override
-	public void check(CheckContext context, Consumer<Finding> findings) {
-		for (Part part : context.design().parts().values()) {
-			if (part.getKind() != PartKind.COMPARATOR) {
-				continue;
-			}
-			Optional<Double> given = Settings.rating(part, "input_margin");
-			double margin = given.orElse(ASSUMED_MARGIN);
-			Optional<WorstCase> worst = WorstCase.of(context, part.getName(), ComparatorInputRule::beyondRails);
-			if (worst.isPresent() && worst.get().value() > margin) {
-				double v = worst.get().value();
-				findings.accept(OverLimit.of(INFO, part, worst.get(), margin, "V", String.format(Locale.ROOT,
-						"an input of %s is %s beyond its supply rail in case '%s', over %s margin of %s",
-						part.getName(), Figures.engineering(v, "V"), worst.get().caseName(),
-						given.isPresent() ? "its rated" : "the assumed CMOS", Figures.engineering(margin, "V"))));
-			}
-		}
+	Set<PartKind> kinds() {
+		return Set.of(PartKind.COMPARATOR);
+	}
+
+	@Override
+	Optional<Limit> limit(Part part) {
+		return Optional.of(Settings.rating(part, "input_margin").map(Limit::rated)
+				.orElse(new Limit(ASSUMED_MARGIN, "the assumed CMOS")));
 	}
 
 	/** How far the farther input is outside the rails (negative when both are inside). */
-	static double beyondRails(OperatingPoint p) {
+	@Override
+	double stress(OperatingPoint p) {
 		double high = p.pinVoltage("supply_plus"), low = p.pinVoltage("supply_minus");
 		double worst = Double.NEGATIVE_INFINITY;
 		for (String pin : new String[] { "in_plus", "in_minus" }) {
@@ -57,5 +49,17 @@ public final class ComparatorInputRule implements Rule {
 			worst = Math.max(worst, Math.max(v - high, low - v));
 		}
 		return worst;
+	}
+
+	@Override
+	String unit() {
+		return "V";
+	}
+
+	@Override
+	String message(Part part, WorstCase worst, Limit limit) {
+		return String.format(Locale.ROOT, "an input of %s is %s beyond its supply rail in case '%s', over %s margin of %s",
+				part.getName(), Figures.engineering(worst.value(), "V"), worst.caseName(), limit.basis(),
+				Figures.engineering(limit.value(), "V"));
 	}
 }

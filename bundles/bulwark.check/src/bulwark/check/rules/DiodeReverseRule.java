@@ -2,12 +2,12 @@ package bulwark.check.rules;
 
 import java.util.Locale;
 import java.util.Optional;
-import java.util.function.Consumer;
+import java.util.Set;
 
 import bulwark.check.Concern;
-import bulwark.check.Finding;
 import bulwark.check.Severity;
 import bulwark.check.compile.Settings;
+import bulwark.engine.dc.OperatingPoint;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
 
@@ -15,7 +15,7 @@ import bulwark.lang.design.PartKind;
  * A diode or LED has more reverse voltage across it than its rated reverse voltage (zeners work in
  * reverse by design and are left out). LEDs are the usual victims: their reverse rating is a few volts.
  */
-public final class DiodeReverseRule implements Rule {
+public final class DiodeReverseRule extends PartLimitRule {
 	public static final String ID = "diode-reverse";
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.REVERSE_VOLTAGE, Severity.ERROR,
 			"a diode or LED has more reverse voltage than it is rated for");
@@ -26,23 +26,29 @@ public final class DiodeReverseRule implements Rule {
 	}
 
 	@Override
-	public void check(CheckContext context, Consumer<Finding> findings) {
-		for (Part part : context.design().parts().values()) {
-			if (part.getKind() != PartKind.DIODE && part.getKind() != PartKind.LED) {
-				continue;
-			}
-			Optional<Double> rated = Settings.rating(part, "reverse");
-			if (rated.isEmpty()) {
-				continue;
-			}
-			Optional<WorstCase> worst = WorstCase.of(context, part.getName(), p -> p.reverseVoltage("junction"));
-			if (worst.isPresent() && worst.get().value() > rated.get()) {
-				double v = worst.get().value();
-				findings.accept(OverLimit.of(INFO, part, worst.get(), rated.get(), "V",
-						String.format(Locale.ROOT, "%s is reverse-biased by %s in case '%s', over its rated %s (%.0f %%)",
-								part.getName(), Figures.engineering(v, "V"), worst.get().caseName(),
-								Figures.engineering(rated.get(), "V"), 100 * v / rated.get())));
-			}
-		}
+	Set<PartKind> kinds() {
+		return Set.of(PartKind.DIODE, PartKind.LED);
+	}
+
+	@Override
+	Optional<Limit> limit(Part part) {
+		return Settings.rating(part, "reverse").map(Limit::rated);
+	}
+
+	@Override
+	double stress(OperatingPoint point) {
+		return point.reverseVoltage("junction");
+	}
+
+	@Override
+	String unit() {
+		return "V";
+	}
+
+	@Override
+	String message(Part part, WorstCase worst, Limit limit) {
+		return String.format(Locale.ROOT, "%s is reverse-biased by %s in case '%s', over its rated %s (%.0f %%)",
+				part.getName(), Figures.engineering(worst.value(), "V"), worst.caseName(),
+				Figures.engineering(limit.value(), "V"), 100 * worst.value() / limit.value());
 	}
 }

@@ -57,12 +57,8 @@ public final class Bjt extends MultiTerminal {
 			double nfvt = model.forwardEmission() * vt;
 			double nrvt = model.reverseEmission() * vt;
 			double limitedBe = Junction.limit(vbe, state[0], nfvt, Junction.criticalVoltage(model.saturationCurrent(), nfvt));
-			if (Double.isFinite(model.emitterBaseBreakdown())
-					&& limitedBe < -model.emitterBaseBreakdown() + 10 * vt) {
-				double bv = model.emitterBaseBreakdown();
-				limitedBe = -(Junction.limit(-(limitedBe + bv), -(state[0] + bv), vt,
-						Junction.criticalVoltage(model.breakdownCurrent(), vt)) + bv);
-			}
+			limitedBe = Junction.limitBreakdown(limitedBe, state[0], model.emitterBaseBreakdown(), vt,
+					model.breakdownCurrent());
 			double limitedBc = Junction.limit(vbc, state[1], nrvt, Junction.criticalVoltage(model.saturationCurrent(), nrvt));
 			if (limitedBe != vbe || limitedBc != vbc) {
 				s.notConverged();

@@ -104,21 +104,9 @@ public final class Comparator extends MultiTerminal {
 		state[9] = 1;
 	}
 
-	/** One clamp junction from pin a (anode) to pin k (cathode), stamped like a diode with limiting. */
+	/** One clamp junction from pin a (anode) to pin k (cathode). */
 	private void clamp(Stamp s, double[] state, int which, int a, int k) {
-		double v = s.voltage(pins[a]) - s.voltage(pins[k]);
-		if (state[2 * which + 1] != 0) {
-			double limited = model.clamp().limit(v, state[2 * which]);
-			if (limited != v) {
-				s.notConverged();
-				v = limited;
-			}
-		}
-		state[2 * which] = v;
-		state[2 * which + 1] = 1;
-		double g = model.clamp().conductance(v);
-		s.conductance(pins[a], pins[k], g);
-		s.current(pins[a], pins[k], model.clamp().current(v) - g * v);
+		JunctionStamp.stamp(s, model.clamp(), pins[a], pins[k], state, 2 * which);
 	}
 
 	/** Currents into out, supply_plus and supply_minus from the output stage and the quiescent current. */

@@ -70,21 +70,7 @@ public final class Diode implements Device {
 		if (junction != anode) {
 			s.conductance(anode, junction, 1 / model.seriesOhms());
 		}
-		double v = s.voltage(junction) - s.voltage(cathode);
-		double[] state = s.state();
-		if (state[1] != 0) {
-			double limited = model.limit(v, state[0]);
-			if (limited != v) {
-				s.notConverged();
-				v = limited;
-			}
-		}
-		state[0] = v;
-		state[1] = 1;
-		double g = model.conductance(v);
-		double i = model.current(v);
-		s.conductance(junction, cathode, g);
-		s.current(junction, cathode, i - g * v);
+		JunctionStamp.stamp(s, model, junction, cathode, s.state(), 0);
 	}
 
 	@Override

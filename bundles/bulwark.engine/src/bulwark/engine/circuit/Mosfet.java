@@ -77,20 +77,7 @@ public final class Mosfet extends MultiTerminal {
 		// body diode: anode at the source for an n-channel part, at the drain for a p-channel one
 		int anode = channel == Channel.N ? pins[S] : pins[D];
 		int cathode = channel == Channel.N ? pins[D] : pins[S];
-		double vj = s.voltage(anode) - s.voltage(cathode);
-		double[] state = s.state();
-		if (state[1] != 0) {
-			double limited = model.bodyDiode().limit(vj, state[0]);
-			if (limited != vj) {
-				s.notConverged();
-				vj = limited;
-			}
-		}
-		state[0] = vj;
-		state[1] = 1;
-		double gj = model.bodyDiode().conductance(vj);
-		s.conductance(anode, cathode, gj);
-		s.current(anode, cathode, model.bodyDiode().current(vj) - gj * vj);
+		JunctionStamp.stamp(s, model.bodyDiode(), anode, cathode, s.state(), 0);
 	}
 
 	/** Channel current into the drain pin (negative when it flows out), either channel, either direction. */

@@ -65,7 +65,7 @@ final class Assembly implements Stamp, SolutionView {
 	/** Forgets the devices' memory of earlier iterates, before a fresh Newton run. */
 	void resetStates() {
 		for (double[] s : states) {
-			java.util.Arrays.fill(s, 0);
+			Arrays.fill(s, 0);
 		}
 	}
 

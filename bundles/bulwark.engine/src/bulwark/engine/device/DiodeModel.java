@@ -89,12 +89,6 @@ public record DiodeModel(double saturationCurrent, double emission, double serie
 	public double limit(double vNew, double vOld) {
 		double nvt = emission * thermalVoltage();
 		double v = Junction.limit(vNew, vOld, nvt, Junction.criticalVoltage(saturationCurrent, nvt));
-		if (Double.isFinite(breakdownVolts) && v < -breakdownVolts + 10 * breakdownEmission * thermalVoltage()) {
-			double bvt = breakdownEmission * thermalVoltage();
-			double mirrored = Junction.limit(-(v + breakdownVolts), -(vOld + breakdownVolts), bvt,
-					Junction.criticalVoltage(breakdownCurrent, bvt));
-			v = -(mirrored + breakdownVolts);
-		}
-		return v;
+		return Junction.limitBreakdown(v, vOld, breakdownVolts, breakdownEmission * thermalVoltage(), breakdownCurrent);
 	}
 }

@@ -46,4 +46,18 @@ public final class Junction {
 		}
 		return vNew;
 	}
+
+	/**
+	 * Limits a step into reverse breakdown the same way, mirrored about −BV: the breakdown current
+	 * Ibv·exp(−(v + BV)/(nbv·Vt)) is an exponential like the forward one. Applies only near or past −BV.
+	 */
+	public static double limitBreakdown(double vNew, double vOld, double breakdownVolts, double bvt,
+			double breakdownCurrent) {
+		if (!Double.isFinite(breakdownVolts) || vNew >= -breakdownVolts + 10 * bvt) {
+			return vNew;
+		}
+		double mirrored = limit(-(vNew + breakdownVolts), -(vOld + breakdownVolts), bvt,
+				criticalVoltage(breakdownCurrent, bvt));
+		return -(mirrored + breakdownVolts);
+	}
 }

@@ -74,14 +74,6 @@ public final class CscMatrix {
 		}
 	}
 
-	public double maxAbs() {
-		double m = 0;
-		for (double v : values) {
-			m = Math.max(m, Math.abs(v));
-		}
-		return m;
-	}
-
 	/** The same pattern with its own values, for a copy that a solver may keep. */
 	public CscMatrix copy() {
 		CscMatrix c = new CscMatrix(n, colStart, rowIndex);
