@@ -18,6 +18,9 @@ import bulwark.check.compile.DesignCompiler;
 import bulwark.check.compile.FaultCase;
 import bulwark.check.load.DesignLoader;
 import bulwark.check.load.LoadedDesign;
+import bulwark.check.policy.DefaultPolicy;
+import bulwark.check.policy.PolicyFiles;
+import bulwark.check.policy.ReviewPolicy;
 import bulwark.check.rules.CheckContext;
 import bulwark.check.rules.Rule;
 import bulwark.check.rules.RuleRegistry;
@@ -35,9 +38,26 @@ import bulwark.lang.design.Member;
  */
 public final class DesignChecker {
 	private final DesignLoader loader;
+	private final ReviewPolicy forcedPolicy;
+	private final PolicyFiles policies;
 
 	public DesignChecker(DesignLoader loader) {
+		this(loader, null);
+	}
+
+	/**
+	 * @param policy the review policy every design is checked under, whatever policy a design names; null to
+	 *               use the one a design names, else the built-in policy
+	 */
+	public DesignChecker(DesignLoader loader, ReviewPolicy policy) {
 		this.loader = loader;
+		this.forcedPolicy = policy;
+		this.policies = new PolicyFiles(loader);
+	}
+
+	/** The policy files this checker has read; the command line shares it to read --policy. */
+	public PolicyFiles policies() {
+		return policies;
 	}
 
 	public DesignResult check(Path file) {
@@ -76,33 +96,90 @@ public final class DesignChecker {
 		if (languageErrors || design == null) {
 			return new DesignResult(loaded.file(), title, Status.ERROR, findings, List.of());
 		}
+		PolicyChoice choice = policyFor(design, loaded.file());
+		if (choice.policy() == null) {
+			findings.addAll(choice.problems());
+			return new DesignResult(loaded.file(), title, Status.ERROR, findings, List.of());
+		}
+		ReviewPolicy policy = choice.policy();
 		CompiledDesign compiled = DesignCompiler.compile(design);
 		List<SolvedCase> solved = new ArrayList<>();
 		List<CaseResult> caseResults = new ArrayList<>();
 		boolean solverFailed = false;
-		for (CaseOutcome outcome : CaseRunner.run(compiled)) {
+		for (CaseOutcome outcome : CaseRunner.run(compiled, policy)) {
 			FaultCase c = outcome.faultCase();
 			DcResult result = outcome.result();
 			if (result instanceof DcSolution solution) {
 				solved.add(new SolvedCase(c, solution));
-				caseResults.add(new CaseResult(c.name(), c.kind(), true, Stresses.of(compiled, solution)));
+				caseResults.add(new CaseResult(c.name(), c.kind(), true, Stresses.of(compiled, c, solution, policy)));
 			} else {
 				solverFailed = true;
 				caseResults.add(new CaseResult(c.name(), c.kind(), false, List.of()));
 				findings.add(solverFinding(compiled, c, (SolveFailure) result));
 			}
 		}
-		CheckContext context = new CheckContext(compiled, solved);
+		CheckContext context = CheckContext.of(compiled, solved, policy);
 		for (Rule rule : RuleRegistry.all()) {
-			rule.check(context, findings::add);
+			Severity severity = policy.severity(rule.info().id(), rule.info().severity());
+			rule.check(context, f -> findings.add(f.severity() == severity ? f : f.withSeverity(severity)));
 		}
-		findings = new ArrayList<>(Waivers.apply(design, findings));
-		findings.sort(Comparator.comparingInt((Finding f) -> f.location().line())
+		List<Finding> all = new ArrayList<>(Waivers.apply(design, findings, policy));
+		all.sort(Comparator.comparingInt((Finding f) -> f.location().line())
 				.thenComparingInt(f -> f.location().column()));
 		Status status = solverFailed ? Status.ERROR
-				: findings.stream().anyMatch(f -> f.severity() == Severity.ERROR && !f.waived()) ? Status.FAIL
+				: all.stream().anyMatch(f -> f.severity() == Severity.ERROR && !f.waived()) ? Status.FAIL
 						: Status.PASS;
-		return new DesignResult(loaded.file(), title, status, findings, caseResults);
+		return new DesignResult(loaded.file(), title, status, all, caseResults, policy.title(),
+				WorstStresses.of(compiled, solved, policy));
+	}
+
+	private record PolicyChoice(ReviewPolicy policy, List<Finding> problems) {
+	}
+
+	/**
+	 * The policy given to this checker, else the one the design names (a file beside the design or below
+	 * its folder, never outside it), else the built-in one.
+	 */
+	private PolicyChoice policyFor(Design design, String file) {
+		if (forcedPolicy != null) {
+			return new PolicyChoice(forcedPolicy, List.of());
+		}
+		if (design.getPolicy() == null) {
+			return new PolicyChoice(DefaultPolicy.POLICY, List.of());
+		}
+		SourceLocation where = Locations.of(design, DesignPackage.Literals.DESIGN__POLICY);
+		Path folder = Path.of(file).toAbsolutePath().getParent();
+		Path named;
+		try {
+			named = folder.resolve(design.getPolicy()).normalize();
+		} catch (RuntimeException e) {
+			return refused(where, "'" + design.getPolicy() + "' is not a file name");
+		}
+		if (Path.of(design.getPolicy()).isAbsolute() || !named.startsWith(folder)) {
+			return refused(where, "the review policy must be in the design's folder or below it, not '"
+					+ design.getPolicy() + "'");
+		}
+		try {
+			if (Files.exists(named) && !named.toRealPath().startsWith(folder.toRealPath())) {
+				return refused(where, "the review policy '" + design.getPolicy() + "' links outside the design's folder");
+			}
+		} catch (java.io.IOException e) {
+			return refused(where, "cannot read the review policy '" + design.getPolicy() + "': " + e.getMessage());
+		}
+		PolicyFiles.Resolution r = policies.read(named);
+		if (r.policy().isPresent()) {
+			return new PolicyChoice(r.policy().get(), List.of());
+		}
+		List<Finding> problems = new ArrayList<>();
+		for (Finding f : r.problems()) {
+			problems.add(Finding.plain(f.rule(), f.concern(), f.severity(), f.message(), null, where));
+		}
+		return new PolicyChoice(null, problems);
+	}
+
+	private static PolicyChoice refused(SourceLocation where, String message) {
+		return new PolicyChoice(null,
+				List.of(Finding.plain("policy", Concern.STRUCTURE, Severity.ERROR, message, null, where)));
 	}
 
 	/** A design refused before it was read: one finding saying why, status error. */

@@ -2,11 +2,21 @@ package bulwark.check;
 
 import java.util.List;
 
-/** Everything the check found about one design file. */
-public record DesignResult(String file, String title, Status status, List<Finding> findings, List<CaseResult> cases) {
+/**
+ * Everything the check found about one design file: its findings, each case's figures, the review policy
+ * it was checked under (null when it was not checked) and each part's worst stress per rating.
+ */
+public record DesignResult(String file, String title, Status status, List<Finding> findings, List<CaseResult> cases,
+		String policy, List<WorstStress> stresses) {
 	public DesignResult {
 		findings = List.copyOf(findings);
 		cases = List.copyOf(cases);
+		stresses = List.copyOf(stresses);
+	}
+
+	/** A result with no stresses: a design that was not checked. */
+	public DesignResult(String file, String title, Status status, List<Finding> findings, List<CaseResult> cases) {
+		this(file, title, status, findings, cases, null, List.of());
 	}
 
 	public long errorCount() {

@@ -7,6 +7,11 @@ package bulwark.check;
 public record Finding(String rule, Concern concern, Severity severity, String message, String part,
 		String caseName, SourceLocation location, Double value, Double limit, String unit, boolean waived) {
 
+	/** The same finding at another severity, as a review policy may set it. */
+	public Finding withSeverity(Severity other) {
+		return new Finding(rule, concern, other, message, part, caseName, location, value, limit, unit, waived);
+	}
+
 	/** A finding with no figures, for example a language error. */
 	public static Finding plain(String rule, Concern concern, Severity severity, String message, String part,
 			SourceLocation location) {

@@ -5,13 +5,15 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
 
+import bulwark.check.policy.ReviewPolicy;
 import bulwark.check.rules.Rule;
 import bulwark.check.rules.RuleRegistry;
 import bulwark.lang.design.Design;
 import bulwark.lang.design.Waiver;
 
 /**
- * Applies a design's waivers: a finding of the waived rule on the waived part stays in every report,
+ * Applies a design's waivers (those the review policy accepts: a reason and a name unless it says
+ * otherwise): a finding of the waived rule on the waived part stays in every report,
  * marked waived, and no longer fails the design. A waiver that matches nothing, or names a rule Bulwark
  * does not have, is itself reported, so that stale waivers do not pile up unseen.
  */
@@ -21,11 +23,30 @@ final class Waivers {
 	private Waivers() {
 	}
 
-	static List<Finding> apply(Design design, List<Finding> findings) {
+	static List<Finding> apply(Design design, List<Finding> findings, ReviewPolicy policy) {
 		List<Finding> result = new ArrayList<>(findings.size());
 		Set<Waiver> used = new HashSet<>();
+		Set<Waiver> refused = new HashSet<>();
+		for (Waiver w : design.getWaivers()) {
+			List<String> lacking = new ArrayList<>();
+			if (policy.waiverNeedsJustification() && blank(w.getJustification())) {
+				lacking.add("a justification");
+			}
+			if (policy.waiverNeedsName() && blank(w.getWho())) {
+				lacking.add("the name of who accepted it");
+			}
+			if (!lacking.isEmpty()) {
+				refused.add(w);
+				result.add(Finding.plain(RULE, Concern.STRUCTURE, Severity.ERROR, "the waiver of " + w.getRule()
+						+ " is not applied: the review policy '" + policy.title() + "' needs " + String.join(" and ", lacking),
+						null, Locations.of(w)));
+			}
+		}
 		for (Finding f : findings) {
 			Waiver w = match(design, f);
+			if (w != null && refused.contains(w)) {
+				w = null;
+			}
 			if (w != null) {
 				used.add(w);
 				result.add(new Finding(f.rule(), f.concern(), f.severity(), f.message() + " [waived by " + w.getWho()
@@ -43,13 +64,17 @@ final class Waivers {
 			if (!known.contains(w.getRule())) {
 				result.add(Finding.plain(RULE, Concern.STRUCTURE, Severity.WARNING, "the waiver names no rule Bulwark has: '"
 						+ w.getRule() + "' (rules: " + String.join(", ", known) + ")", null, Locations.of(w)));
-			} else if (!used.contains(w)) {
+			} else if (!used.contains(w) && !refused.contains(w)) {
 				result.add(Finding.plain(RULE, Concern.STRUCTURE, Severity.WARNING, "the waiver of " + w.getRule() + " on "
 						+ w.getPart().getName() + " matches no finding; remove it if the design no longer needs it",
 						w.getPart().getName(), Locations.of(w)));
 			}
 		}
 		return result;
+	}
+
+	private static boolean blank(String s) {
+		return s == null || s.isBlank();
 	}
 
 	private static Waiver match(Design design, Finding f) {

@@ -30,6 +30,10 @@ public final class CheckOptions {
 			description = "Report format: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
 	Format format;
 
+	@Option(names = "--policy", paramLabel = "FILE",
+			description = "Check under this review policy (a *.bulwark-policy file), whatever policy the designs name.")
+	Path policy;
+
 	@Option(names = "--out", paramLabel = "FILE", description = "Write the report to FILE (atomically) instead of standard output.")
 	Path out;
 }

@@ -21,6 +21,7 @@ import bulwark.check.DesignChecker;
 import bulwark.check.DesignResult;
 import bulwark.check.Severity;
 import bulwark.check.Status;
+import bulwark.check.policy.PolicyFiles;
 import bulwark.check.report.HtmlReport;
 import bulwark.check.report.JUnitReport;
 import bulwark.check.report.JsonReport;
@@ -50,7 +51,17 @@ final class Checks {
 			err.println("bulwark: no design files (*" + DesignFiles.EXTENSION + ") found in " + paths);
 			return ExitCodes.USAGE;
 		}
-		List<DesignResult> results = checkAll(files, options.jobs, progress(files.size(), err));
+		DesignChecker checker = Language.checker();
+		if (options.policy != null) {
+			PolicyFiles.Resolution policy = checker.policies().read(options.policy);
+			if (policy.policy().isEmpty()) {
+				policy.problems().forEach(f -> err.println("bulwark: " + f.message()));
+				err.flush();
+				return ExitCodes.NOT_CHECKED;
+			}
+			checker = Language.checker(policy.policy().get());
+		}
+		List<DesignResult> results = checkAll(checker, files, options.jobs, progress(files.size(), err));
 		StringWriter report = new StringWriter();
 		write(results, options, report);
 		if (options.out == null) {
@@ -120,8 +131,8 @@ final class Checks {
 	}
 
 	/** Checks the files on a pool of threads (each load has its own resource set); results in file order. */
-	private static List<DesignResult> checkAll(List<Path> files, int jobs, Runnable progress) throws IOException {
-		DesignChecker base = Language.checker();
+	private static List<DesignResult> checkAll(DesignChecker base, List<Path> files, int jobs, Runnable progress)
+			throws IOException {
 		java.util.function.Function<Path, DesignResult> checker = f -> {
 			DesignResult r = base.check(f);
 			progress.run();

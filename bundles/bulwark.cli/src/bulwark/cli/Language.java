@@ -4,6 +4,7 @@ import com.google.inject.Injector;
 
 import bulwark.check.DesignChecker;
 import bulwark.check.load.DesignLoader;
+import bulwark.check.policy.ReviewPolicy;
 import bulwark.lang.BulwarkStandaloneSetup;
 
 /** The language runtime, set up once per run (building the injector is most of the start-up time). */
@@ -22,5 +23,10 @@ final class Language {
 
 	static DesignChecker checker() {
 		return new DesignChecker(loader());
+	}
+
+	/** A checker that applies the given review policy to every design. */
+	static DesignChecker checker(ReviewPolicy policy) {
+		return new DesignChecker(loader(), policy);
 	}
 }

@@ -18,6 +18,7 @@ import bulwark.check.compile.CaseOutcome;
 import bulwark.check.compile.CaseRunner;
 import bulwark.check.compile.CompiledDesign;
 import bulwark.check.compile.DesignCompiler;
+import bulwark.check.policy.DefaultPolicy;
 import bulwark.check.load.LoadedDesign;
 import bulwark.check.report.TextReport;
 import bulwark.check.rules.Figures;
@@ -68,7 +69,7 @@ final class SolveCommand implements Callable<Integer> {
 			return ExitCodes.NOT_CHECKED;
 		}
 		CompiledDesign compiled = DesignCompiler.compile(loaded.design());
-		List<CaseOutcome> outcomes = CaseRunner.run(compiled);
+		List<CaseOutcome> outcomes = CaseRunner.run(compiled, DefaultPolicy.POLICY);
 		CaseOutcome chosen = caseName == null ? outcomes.get(0)
 				: outcomes.stream().filter(o -> o.faultCase().name().equals(caseName)).findFirst().orElse(null);
 		if (chosen == null) {

@@ -2,6 +2,8 @@ package bulwark.check.tests;
 
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import java.util.TreeSet;
 import java.util.regex.Matcher;
@@ -13,6 +15,9 @@ import bulwark.check.DesignChecker;
 import bulwark.check.DesignResult;
 import bulwark.check.Finding;
 import bulwark.check.load.DesignLoader;
+import bulwark.check.policy.DefaultPolicy;
+import bulwark.check.policy.PolicyFiles;
+import bulwark.check.policy.ReviewPolicy;
 import bulwark.lang.BulwarkStandaloneSetup;
 
 /**
@@ -21,21 +26,60 @@ import bulwark.lang.BulwarkStandaloneSetup;
  */
 final class Fixtures {
 	private static final Pattern MARK = Pattern.compile("#!\\s*([a-z-]+)");
-	private static DesignChecker checker;
+	/**
+	 * The design as written: its own cases only (no mains or levels generated), ratings not derated, the
+	 * built-in minimum hysteresis — so that a rule's test can compare with a hand calculation of its own case.
+	 */
+	static final ReviewPolicy AS_WRITTEN = new ReviewPolicy("as written", List.of(), List.of(), List.of(), Map.of(),
+			DefaultPolicy.POLICY.minimumHysteresisVolts(), Optional.empty(), Map.of(), true, true);
+	private static DesignLoader loader;
+	private static DesignChecker asWritten;
+	private static DesignChecker underDefault;
 
 	private Fixtures() {
 	}
 
-	static synchronized DesignChecker checker() {
-		if (checker == null) {
-			checker = new DesignChecker(
-					new DesignLoader(new BulwarkStandaloneSetup().createInjectorAndDoEMFRegistration()));
+	static synchronized DesignLoader loader() {
+		if (loader == null) {
+			loader = new DesignLoader(new BulwarkStandaloneSetup().createInjectorAndDoEMFRegistration());
 		}
-		return checker;
+		return loader;
 	}
 
+	static synchronized DesignChecker checker() {
+		if (asWritten == null) {
+			asWritten = new DesignChecker(loader(), AS_WRITTEN);
+		}
+		return asWritten;
+	}
+
+	/** The checker a user gets: the built-in policy, or the one the design names. */
+	static synchronized DesignChecker defaultChecker() {
+		if (underDefault == null) {
+			underDefault = new DesignChecker(loader());
+		}
+		return underDefault;
+	}
+
+	/** Checks the design as written (see {@link #AS_WRITTEN}). */
 	static DesignResult check(String text) {
 		return checker().check(text, "fixture.bulwark", CancelIndicator.NullImpl);
+	}
+
+	/** Checks the design under the built-in review policy: generated abuse cases, derated ratings. */
+	static DesignResult checkUnderDefault(String text) {
+		return defaultChecker().check(text, "fixture.bulwark", CancelIndicator.NullImpl);
+	}
+
+	/** A review policy from its text; fails the test when the text has errors. */
+	static ReviewPolicy policy(String text) {
+		PolicyFiles.Resolution r = new PolicyFiles(loader()).parse(text, "fixture.bulwark-policy");
+		return r.policy().orElseThrow(() -> new AssertionError("policy has errors: " + r.problems()));
+	}
+
+	/** Checks the design under the given policy. */
+	static DesignResult check(String text, ReviewPolicy policy) {
+		return new DesignChecker(loader(), policy).check(text, "fixture.bulwark", CancelIndicator.NullImpl);
 	}
 
 	/** "line:rule" for each mark of the given rule in the text. */

@@ -1,6 +1,7 @@
 package bulwark.check.tests;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 
@@ -17,8 +18,8 @@ class RatingMissingRuleTest {
 			reference net gnd
 			net a
 			source V1 (plus: a, minus: gnd) { voltage 5 V }
-			resistor R1 (a: a, b: gnd) { value 1 kΩ } #! rating-missing
-			resistor R2 (a: a, b: gnd) { value 1 kΩ rated power 250 mW }
+			resistor R1 (a: a, b: gnd) { value 1 kΩ package 0805 } #! rating-missing
+			resistor R2 (a: a, b: gnd) { value 1 kΩ package 0805 rated power 250 mW }
 			""";
 
 	@Test
@@ -26,12 +27,32 @@ class RatingMissingRuleTest {
 		DesignResult r = Fixtures.check(MISSING);
 		assertEquals(Fixtures.expected(MISSING, ID), Fixtures.actual(r, ID));
 		assertEquals(Severity.WARNING, Fixtures.only(r, ID).severity());
+		// the warning names the rule that cannot check, never a silent pass
+		assertTrue(Fixtures.only(r, ID).message().contains("power (resistor-power)"), Fixtures.only(r, ID).message());
 		assertEquals(Status.PASS, r.status()); // a warning does not fail the design
 	}
 
 	@Test
+	void namesEveryMissingRatingOfADiode() {
+		String text = """
+				design "unrated diode"
+				reference net gnd
+				net a
+				source V1 (plus: a, minus: gnd) { voltage 5 V }
+				resistor R1 (a: a, b: k) { value 1 kΩ package 0805 rated power 250 mW }
+				net k
+				diode D1 (anode: k, cathode: gnd) { rated power 500 mW } #! rating-missing
+				""";
+		DesignResult r = Fixtures.check(text);
+		assertEquals(Fixtures.expected(text, ID), Fixtures.actual(r, ID));
+		String m = Fixtures.only(r, ID).message();
+		assertTrue(m.contains("reverse (diode-reverse)") && m.contains("forward (forward-current)")
+				&& !m.contains("device-power"), m);
+	}
+
+	@Test
 	void silentWhenRated() {
-		String rated = MISSING.replace("{ value 1 kΩ } #! rating-missing", "{ value 1 kΩ rated power 100 mW }");
+		String rated = MISSING.replace("{ value 1 kΩ package 0805 } #! rating-missing", "{ value 1 kΩ package 0805 rated power 100 mW }");
 		DesignResult r = Fixtures.check(rated);
 		assertEquals(Fixtures.expected(rated, ID), Fixtures.actual(r, ID));
 		assertEquals(0, Fixtures.actual(r, ID).size());

@@ -2,7 +2,11 @@ package bulwark.check.compile;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
+import java.util.Map;
 
+import bulwark.check.policy.ReviewPolicy;
+import bulwark.check.rules.Figures;
 import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Device;
 import bulwark.engine.circuit.Resistor;
@@ -12,36 +16,121 @@ import bulwark.lang.design.Apply;
 import bulwark.lang.design.Case;
 import bulwark.lang.design.Connect;
 import bulwark.lang.design.Member;
+import bulwark.lang.design.Part;
+import bulwark.lang.design.PartKind;
 import bulwark.lang.design.Terminal;
 import bulwark.lang.units.Quantities;
 
 /**
- * The cases a design is checked under: the normal condition with its terminals open, then each case the
- * designer wrote, in order. (The abuse cases generated from the review policy join them later.)
+ * The cases a design is checked under: the normal condition (terminals open, then each terminal shorted to
+ * the common one), the designer's own cases, and the abuse the review policy names — across every pair of
+ * terminals, each mains system at its highest peak and each DC level, in both polarities — and every
+ * battery put in backwards. Mains is applied as DC at its peak from an ideal source: the steady worst
+ * instant of the sine, with nothing of the supply's impedance to help.
  */
 public final class CaseGenerator {
 	private CaseGenerator() {
 	}
 
-	public static List<FaultCase> cases(CompiledDesign design) {
+	public static List<FaultCase> cases(CompiledDesign design, ReviewPolicy policy) {
 		List<FaultCase> cases = new ArrayList<>();
 		cases.add(FaultCase.normalOpen());
+		List<Terminal> terminals = usableTerminals(design);
+		Terminal common = terminals.stream().filter(Terminal::isCommon).findFirst().orElse(null);
+		if (common != null) {
+			for (Terminal t : terminals) {
+				if (t != common && t.getNet() != common.getNet()) {
+					cases.add(new FaultCase("normal, " + t.getName() + " shorted to " + common.getName(), FaultCase.NORMAL,
+							List.of(VoltageSource.ideal(pairSource(t, common), net(design, t), net(design, common), 0))));
+				}
+			}
+		}
 		for (Member m : design.design().getMembers()) {
 			if (m instanceof Case c) {
-				cases.add(new FaultCase(c.getName(), "designer", devices(design.circuit(), c)));
+				cases.add(new FaultCase(c.getName(), FaultCase.DESIGNER, devices(design.circuit(), c)));
+			}
+		}
+		for (int i = 0; i < terminals.size(); i++) {
+			for (int j = i + 1; j < terminals.size(); j++) {
+				Terminal a = terminals.get(i), b = terminals.get(j);
+				if (a.getNet() == b.getNet()) {
+					continue;
+				}
+				for (ReviewPolicy.MainsSystem mains : policy.mains()) {
+					String what = String.format(Locale.ROOT, "%s mains peak (%s)",
+							Figures.engineering(mains.nominalVolts(), "V"), Figures.engineering(mains.peakVolts(), "V"));
+					cases.add(abuse(design, what, a, b, mains.peakVolts()));
+					cases.add(abuse(design, what, b, a, mains.peakVolts()));
+				}
+				for (double level : policy.levels()) {
+					String what = Figures.engineering(level, "V") + " DC";
+					cases.add(abuse(design, what, a, b, level));
+					cases.add(abuse(design, what, b, a, level));
+				}
+			}
+		}
+		for (Part part : design.parts().values()) {
+			if (part.getKind() == PartKind.BATTERY) {
+				VoltageSource fitted = (VoltageSource) design.circuit().devices()
+						.get(design.circuit().deviceIndex(part.getName()));
+				// the same pins, the EMF turned round: what a cell put in backwards does
+				VoltageSource reversed = new VoltageSource(part.getName(), fitted.pins()[0], fitted.pins()[1],
+						-fitted.volts(), fitted.seriesOhms());
+				cases.add(new FaultCase("battery " + part.getName() + " reversed", FaultCase.ABUSE, List.of(),
+						Map.of(part.getName(), reversed), null, null));
 			}
 		}
 		return cases;
 	}
 
-	/** The devices a case adds at the terminals; their names contain spaces, so no part can share them. */
+	/**
+	 * Terminals whose net some pin uses: a terminal that leads nowhere cannot be driven (the language
+	 * warns about it).
+	 */
+	private static List<Terminal> usableTerminals(CompiledDesign design) {
+		List<Terminal> terminals = new ArrayList<>();
+		for (Member m : design.design().getMembers()) {
+			if (m instanceof Terminal t && t.getNet() != null && design.usedNets().contains(t.getNet().getName())) {
+				terminals.add(t);
+			}
+		}
+		return terminals;
+	}
+
+	/**
+	 * One polarity of one abuse across one pair. The source always sits on the same two nets in the same
+	 * order, so that both polarities and every level share one prepared circuit; the sign carries the polarity.
+	 */
+	private static FaultCase abuse(CompiledDesign design, String what, Terminal plus, Terminal minus, double volts) {
+		Terminal first = order(plus, minus) ? plus : minus, second = first == plus ? minus : plus;
+		double signed = first == plus ? volts : -volts;
+		return new FaultCase(what + ", " + plus.getName() + " + to " + minus.getName() + " −", FaultCase.ABUSE,
+				List.of(VoltageSource.ideal(pairSource(first, second), net(design, first), net(design, second), signed)),
+				Map.of(), plus.getName(), minus.getName());
+	}
+
+	private static boolean order(Terminal a, Terminal b) {
+		return a.getName().compareTo(b.getName()) < 0;
+	}
+
+	/** Names contain spaces, so no part can share them. */
+	private static String pairSource(Terminal a, Terminal b) {
+		Terminal first = order(a, b) ? a : b, second = first == a ? b : a;
+		return "at " + first.getName() + " " + second.getName();
+	}
+
+	private static int net(CompiledDesign design, Terminal t) {
+		return design.circuit().netIndex(t.getNet().getName());
+	}
+
+	/** The devices a designer's case adds at the terminals. */
 	private static List<Device> devices(Circuit circuit, Case c) {
 		List<Device> added = new ArrayList<>();
 		int k = 0;
 		for (Action action : c.getActions()) {
 			String name = "case " + c.getName() + " #" + ++k;
-			int from = circuit.netIndex(terminalNet(action.getFrom()));
-			int to = circuit.netIndex(terminalNet(action.getTo()));
+			int from = circuit.netIndex(action.getFrom().getNet().getName());
+			int to = circuit.netIndex(action.getTo().getNet().getName());
 			if (action instanceof Apply a) {
 				double ohms = a.getResistance() == null ? 0 : Quantities.si(a.getResistance()).orElseThrow();
 				added.add(new VoltageSource(name, from, to, Quantities.si(a.getValue()).orElseThrow(), ohms));
@@ -52,9 +141,5 @@ public final class CaseGenerator {
 			}
 		}
 		return added;
-	}
-
-	private static String terminalNet(Terminal t) {
-		return t.getNet().getName();
 	}
 }

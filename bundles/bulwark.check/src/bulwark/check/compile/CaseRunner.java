@@ -1,21 +1,101 @@
 package bulwark.check.compile;
 
 import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 
+import bulwark.check.policy.ReviewPolicy;
+import bulwark.engine.circuit.Circuit;
+import bulwark.engine.circuit.Device;
+import bulwark.engine.circuit.Fuse;
+import bulwark.engine.dc.DcResult;
+import bulwark.engine.dc.DcSolution;
 import bulwark.engine.dc.DcSolver;
+import bulwark.engine.dc.PreparedCircuit;
 
-/** Solves a compiled design in each of its cases; the compiled circuit is shared, each case adds its devices. */
+/**
+ * Solves a compiled design in each of its cases. Cases that add the same devices on the same nets (both
+ * polarities and every level across one pair of terminals) share one prepared circuit, so the symbolic work
+ * is done once per pair. A fuse carrying more than its rated current opens: the case is solved again with
+ * it open, which is what the rest of the circuit has to survive.
+ */
 public final class CaseRunner {
+	/** An open fuse: a gap that still lets the solver see both of its nets [closed form: 1 nA at 1 V]. */
+	static final double OPEN_FUSE_OHMS = 1e9;
+	/**
+	 * A tripped resettable fuse, as a resistance [memory: a tripped polymer fuse holds itself hot at about a
+	 * watt, which at a mains peak is of the order of 100 kΩ].
+	 */
+	static final double TRIPPED_RESETTABLE_OHMS = 1e5;
+
 	private CaseRunner() {
 	}
 
-	public static List<CaseOutcome> run(CompiledDesign design) {
+	public static List<CaseOutcome> run(CompiledDesign design, ReviewPolicy policy) {
 		DcSolver solver = new DcSolver();
+		Map<String, PreparedCircuit> prepared = new HashMap<>();
 		List<CaseOutcome> outcomes = new ArrayList<>();
-		for (FaultCase c : CaseGenerator.cases(design)) {
-			outcomes.add(new CaseOutcome(c, solver.solve(design.circuit().plus(c.added()))));
+		for (FaultCase c : CaseGenerator.cases(design, policy)) {
+			PreparedCircuit circuit = prepared.computeIfAbsent(shape(c), k -> DcSolver.prepare(apply(design.circuit(), c)));
+			for (Device d : c.added()) {
+				circuit = circuit.with(d.name(), d);
+			}
+			for (Map.Entry<String, Device> r : c.replaced().entrySet()) {
+				circuit = circuit.with(r.getKey(), r.getValue());
+			}
+			outcomes.add(openFuses(solver, c, circuit, solver.solve(circuit)));
 		}
 		return outcomes;
+	}
+
+	/** What decides the matrix pattern: the added devices' kinds, names and nets, and what is replaced. */
+	private static String shape(FaultCase c) {
+		StringBuilder s = new StringBuilder();
+		for (Device d : c.added()) {
+			s.append(d.getClass().getSimpleName()).append(' ').append(d.name()).append(' ')
+					.append(java.util.Arrays.toString(d.pins())).append(';');
+		}
+		s.append('|').append(c.replaced().keySet());
+		return s.toString();
+	}
+
+	private static Circuit apply(Circuit base, FaultCase c) {
+		Circuit circuit = base.plus(c.added());
+		for (Map.Entry<String, Device> r : c.replaced().entrySet()) {
+			circuit = circuit.withDevice(circuit.deviceIndex(r.getKey()), r.getValue());
+		}
+		return circuit;
+	}
+
+	/** Opens every fuse over its rating, one round at a time, until none is; names them in the case. */
+	private static CaseOutcome openFuses(DcSolver solver, FaultCase c, PreparedCircuit circuit, DcResult result) {
+		Map<String, Device> opened = new LinkedHashMap<>();
+		while (result instanceof DcSolution s) {
+			boolean more = false;
+			for (Device d : circuit.circuit().devices()) {
+				if (d instanceof Fuse f && !opened.containsKey(f.name())
+						&& Math.abs(s.device(f.name()).current()) > f.ratedAmps()) {
+					Fuse open = new Fuse(f.name(), f.pins()[0], f.pins()[1],
+							f.resettable() ? TRIPPED_RESETTABLE_OHMS : OPEN_FUSE_OHMS, f.ratedAmps(), f.resettable());
+					opened.put(f.name(), open);
+					circuit = circuit.with(f.name(), open);
+					more = true;
+				}
+			}
+			if (!more) {
+				break;
+			}
+			result = solver.solve(circuit);
+		}
+		if (opened.isEmpty()) {
+			return new CaseOutcome(c, result);
+		}
+		Map<String, Device> replaced = new LinkedHashMap<>(c.replaced());
+		replaced.putAll(opened);
+		FaultCase after = new FaultCase(c.name() + ", " + String.join(", ", opened.keySet()) + " open", c.kind(),
+				c.added(), replaced, c.from(), c.to());
+		return new CaseOutcome(after, result);
 	}
 }

@@ -1,6 +1,8 @@
 package bulwark.check.compile;
 
+import java.util.HashSet;
 import java.util.LinkedHashMap;
+import java.util.Set;
 import java.util.Map;
 import java.util.Optional;
 
@@ -118,6 +120,11 @@ public final class DesignCompiler {
 				throw new IllegalArgumentException("no engine model for " + part.getKind());
 			}
 		}
+		Set<String> usedNets = new HashSet<>();
+		Circuit pinsOnly = builder.build();
+		for (int i = 0; i < pinsOnly.netCount(); i++) {
+			usedNets.add(pinsOnly.netName(i));
+		}
 		// nets of the terminals the designer's cases act on, even where no pin does (a net nothing uses
 		// stays out: in the normal case it would float)
 		for (Member m : design.getMembers()) {
@@ -129,7 +136,7 @@ public final class DesignCompiler {
 				}
 			}
 		}
-		return new CompiledDesign(design, builder.build(), parts);
+		return new CompiledDesign(design, builder.build(), parts, Set.copyOf(usedNets));
 	}
 
 	private static int pin(Circuit.Builder builder, Part part, String pin) {

@@ -1,15 +1,35 @@
 package bulwark.check.compile;
 
 import java.util.List;
+import java.util.Map;
 
 import bulwark.engine.circuit.Device;
 
 /**
- * A condition the design is solved under: the design as written plus the devices the case adds at the
- * terminals (none for the normal condition with the terminals open).
+ * A condition the design is solved under: the design as written, plus the devices the case adds at the
+ * terminals, with some of its own devices replaced (a battery put in backwards). {@code from} and
+ * {@code to} name the terminals a generated abuse case drives, positive at {@code from} (null otherwise).
  */
-public record FaultCase(String name, String kind, List<Device> added) {
+public record FaultCase(String name, String kind, List<Device> added, Map<String, Device> replaced, String from,
+		String to) {
+	public static final String NORMAL = "normal";
+	public static final String DESIGNER = "designer";
+	public static final String ABUSE = "abuse";
+
+	public FaultCase {
+		added = List.copyOf(added);
+		replaced = Map.copyOf(replaced);
+	}
+
+	public FaultCase(String name, String kind, List<Device> added) {
+		this(name, kind, added, Map.of(), null, null);
+	}
+
 	public static FaultCase normalOpen() {
-		return new FaultCase("normal, terminals open", "normal", List.of());
+		return new FaultCase("normal, terminals open", NORMAL, List.of());
+	}
+
+	public boolean isAbuse() {
+		return ABUSE.equals(kind);
 	}
 }

@@ -27,10 +27,10 @@ public final class ResistorRatings {
 	public static Optional<VoltageRating> limitingElementVoltage(Part part) {
 		Optional<Double> rated = Settings.rating(part, "voltage");
 		if (rated.isPresent()) {
-			return Optional.of(new VoltageRating(rated.get(), "its rated voltage"));
+			return Optional.of(new VoltageRating(rated.get(), "its rated"));
 		}
 		return Settings.wordOrNumber(part, "package").filter(PACKAGE_VOLTS::containsKey)
 				.map(pkg -> new VoltageRating(PACKAGE_VOLTS.get(pkg),
-						"the limiting element voltage of a " + pkg.replace('_', ' ') + " part"));
+						"the " + pkg.replace('_', ' ') + " package's limiting element voltage of"));
 	}
 }

@@ -18,9 +18,11 @@ import org.eclipse.xtext.validation.Issue;
 import com.google.inject.Injector;
 
 import bulwark.lang.design.Design;
+import bulwark.lang.design.Document;
+import bulwark.lang.design.Policy;
 
 /**
- * Parses and validates a design text with the language runtime. Each call uses a fresh resource set, so
+ * Parses and validates a design or a review policy with the language runtime. Each call uses a fresh resource set, so
  * calls from several threads do not interfere.
  */
 public final class DesignLoader {
@@ -31,8 +33,41 @@ public final class DesignLoader {
 	}
 
 	public LoadedDesign load(String text, String file, CancelIndicator cancel) {
+		Parsed parsed = parse(text, file, ".bulwark", cancel);
+		Design design = parsed.root() instanceof Design d ? d : null;
+		List<Issue> issues = parsed.issues();
+		if (parsed.root() instanceof Policy) {
+			issues = List.of(notA(file, "a review policy", "design"));
+		}
+		return new LoadedDesign(file, text, design, issues);
+	}
+
+	/** Parses and validates a review policy; the root is null when the text holds no policy. */
+	public LoadedPolicy loadPolicy(String text, String file) {
+		Parsed parsed = parse(text, file, ".bulwark-policy", CancelIndicator.NullImpl);
+		if (parsed.root() instanceof Design) {
+			return new LoadedPolicy(file, null, List.of(notA(file, "a design", "review policy")));
+		}
+		return new LoadedPolicy(file, parsed.root() instanceof Policy p ? p : null, parsed.issues());
+	}
+
+	private static Issue notA(String file, String is, String wanted) {
+		Issue.IssueImpl issue = new Issue.IssueImpl();
+		issue.setSeverity(org.eclipse.xtext.diagnostics.Severity.ERROR);
+		issue.setMessage(file + " holds " + is + ", not a " + wanted);
+		issue.setLineNumber(1);
+		issue.setColumn(1);
+		issue.setOffset(0);
+		issue.setLength(0);
+		return issue;
+	}
+
+	private record Parsed(Document root, List<Issue> issues) {
+	}
+
+	private Parsed parse(String text, String file, String extension, CancelIndicator cancel) {
 		XtextResourceSet resourceSet = injector.getInstance(XtextResourceSet.class);
-		URI uri = URI.createFileURI(file.endsWith(".bulwark") ? file : file + ".bulwark");
+		URI uri = URI.createFileURI(file.endsWith(extension) ? file : file + extension);
 		XtextResource resource = (XtextResource) injector.getInstance(IResourceFactory.class).createResource(uri);
 		resourceSet.getResources().add(resource);
 		try {
@@ -45,7 +80,7 @@ public final class DesignLoader {
 		IResourceValidator validator = resource.getResourceServiceProvider().getResourceValidator();
 		List<Issue> issues = validator.validate(resource, CheckMode.ALL,
 				cancel == null ? CancelIndicator.NullImpl : cancel);
-		Design design = resource.getContents().isEmpty() ? null : (Design) resource.getContents().get(0);
-		return new LoadedDesign(file, text, design, issues);
+		Document root = resource.getContents().isEmpty() ? null : (Document) resource.getContents().get(0);
+		return new Parsed(root, issues);
 	}
 }

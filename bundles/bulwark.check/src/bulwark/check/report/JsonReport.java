@@ -10,6 +10,7 @@ import bulwark.check.CaseResult;
 import bulwark.check.DesignResult;
 import bulwark.check.Finding;
 import bulwark.check.PartStress;
+import bulwark.check.WorstStress;
 
 /**
  * The machine-readable result. Its field names are a contract for every later consumer: fields may be added,
@@ -42,6 +43,7 @@ public final class JsonReport {
 		w.name("file").value(r.file());
 		w.name("title").value(r.title());
 		w.name("status").value(r.status().id());
+		w.name("policy").value(r.policy());
 		w.name("findings").beginArray();
 		for (Finding f : r.findings()) {
 			w.beginObject();
@@ -78,6 +80,22 @@ public final class JsonReport {
 				w.endObject();
 			}
 			w.endArray();
+			w.endObject();
+		}
+		w.endArray();
+		w.name("stresses").beginArray();
+		for (WorstStress s : r.stresses()) {
+			w.beginObject();
+			w.name("part").value(s.part());
+			w.name("rating").value(s.rating());
+			w.name("stress").value(s.what());
+			number(w.name("value"), s.value());
+			w.name("unit").value(s.unit());
+			w.name("case").value(s.caseName());
+			number(w.name("rated"), s.rated());
+			number(w.name("derating"), s.factor());
+			number(w.name("limit"), s.limit());
+			number(w.name("utilisation"), s.utilisation());
 			w.endObject();
 		}
 		w.endArray();

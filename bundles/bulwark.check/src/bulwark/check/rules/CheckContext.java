@@ -1,12 +1,30 @@
 package bulwark.check.rules;
 
+import java.util.HashSet;
 import java.util.List;
+import java.util.Set;
 
 import bulwark.check.compile.CompiledDesign;
+import bulwark.check.policy.ReviewPolicy;
+import bulwark.check.topology.SeriesStrings;
+import bulwark.check.topology.SeriesStrings.SeriesString;
 
-/** What a rule may look at: the design, its circuit, and every case that solved. */
-public record CheckContext(CompiledDesign design, List<SolvedCase> cases) {
+/**
+ * What a rule may look at: the design, its circuit, every case that solved, the review policy, and the
+ * series strings of resistors (found once, used by several rules).
+ */
+public record CheckContext(CompiledDesign design, List<SolvedCase> cases, ReviewPolicy policy,
+		List<SeriesString> seriesStrings, Set<String> inSeriesString) {
 	public CheckContext {
 		cases = List.copyOf(cases);
+		seriesStrings = List.copyOf(seriesStrings);
+		inSeriesString = Set.copyOf(inSeriesString);
+	}
+
+	public static CheckContext of(CompiledDesign design, List<SolvedCase> cases, ReviewPolicy policy) {
+		List<SeriesString> strings = SeriesStrings.of(design);
+		Set<String> members = new HashSet<>();
+		strings.forEach(s -> s.resistors().forEach(p -> members.add(p.getName())));
+		return new CheckContext(design, cases, policy, strings, members);
 	}
 }

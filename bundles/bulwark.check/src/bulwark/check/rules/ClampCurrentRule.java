@@ -1,14 +1,9 @@
 package bulwark.check.rules;
 
-import java.util.Locale;
-import java.util.Optional;
 import java.util.Set;
 
 import bulwark.check.Concern;
 import bulwark.check.Severity;
-import bulwark.check.compile.Settings;
-import bulwark.engine.dc.OperatingPoint;
-import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
 
 /**
@@ -18,8 +13,6 @@ import bulwark.lang.design.PartKind;
  */
 public final class ClampCurrentRule extends PartLimitRule {
 	public static final String ID = "clamp-current";
-	/** Assumed clamp current rating [common practice, sources.md]. */
-	static final double ASSUMED_CLAMP = 10e-3;
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.CLAMP_CURRENT, Severity.ERROR,
 			"a comparator input's clamp current is over its rating");
 
@@ -34,26 +27,7 @@ public final class ClampCurrentRule extends PartLimitRule {
 	}
 
 	@Override
-	Optional<Limit> limit(Part part) {
-		return Optional.of(Settings.rating(part, "clamp").map(Limit::rated)
-				.orElse(new Limit(ASSUMED_CLAMP, "the assumed")));
-	}
-
-	/** The larger input current: the inputs draw nothing but their clamps' current. */
-	@Override
-	double stress(OperatingPoint p) {
-		return Math.max(Math.abs(p.pinCurrent("in_plus")), Math.abs(p.pinCurrent("in_minus")));
-	}
-
-	@Override
-	String unit() {
-		return "A";
-	}
-
-	@Override
-	String message(Part part, WorstCase worst, Limit limit) {
-		return String.format(Locale.ROOT, "an input of %s carries %s of clamp current in case '%s', over %s %s (%.0f %%)",
-				part.getName(), Figures.engineering(worst.value(), "A"), worst.caseName(), limit.basis(),
-				Figures.engineering(limit.value(), "A"), 100 * worst.value() / limit.value());
+	String rating(PartKind kind) {
+		return "clamp";
 	}
 }

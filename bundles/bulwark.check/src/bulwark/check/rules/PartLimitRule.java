@@ -1,61 +1,65 @@
 package bulwark.check.rules;
 
+import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
 import java.util.function.Consumer;
 
 import bulwark.check.Finding;
 import bulwark.check.Locations;
-import bulwark.engine.dc.OperatingPoint;
+import bulwark.check.stress.Limit;
+import bulwark.check.stress.Limits;
+import bulwark.check.stress.Measure;
+import bulwark.check.stress.StressCatalog;
 import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
 
 /**
- * What every rating rule does: for each part of its kinds that has a limit, take one stress at its worst
- * over all cases and, when it exceeds the limit, report it on the part's designator with the figures.
- * A rule says only which parts, which stress, which limit and in which words.
+ * What every rating rule does: for each part of its kinds, take one stress (named after the rating it is
+ * compared with, see StressCatalog) at its worst over all cases and, when it exceeds the part's limit —
+ * the rating, written or assumed, times the policy's derating — report it on the designator with the
+ * figures. A rule says only which parts and which rating.
  */
 abstract class PartLimitRule implements Rule {
 
-	/** A part's limit, and the words that say where it comes from ("its rated", "the assumed CMOS"…). */
-	record Limit(double value, String basis) {
-		static Limit rated(double value) {
-			return new Limit(value, "its rated");
-		}
-	}
-
 	abstract Set<PartKind> kinds();
 
-	/** The limit for this part, or empty when the rule does not check it. */
-	abstract Optional<Limit> limit(Part part);
+	/** The rating (and the stress of the same name) this rule compares, for a part of the given kind. */
+	abstract String rating(PartKind kind);
 
-	/** The stress compared with the limit, at one solved case. */
-	abstract double stress(OperatingPoint point);
-
-	/** SI unit of the stress and the limit, for the result. */
-	abstract String unit();
-
-	abstract String message(Part part, WorstCase worst, Limit limit);
+	/** Whether the rule checks this part at all (for example, not a resistor a series string covers). */
+	boolean applies(Part part, CheckContext context) {
+		return true;
+	}
 
 	@Override
 	public final void check(CheckContext context, Consumer<Finding> findings) {
 		for (Part part : context.design().parts().values()) {
-			if (!kinds().contains(part.getKind())) {
+			if (!kinds().contains(part.getKind()) || !applies(part, context)) {
 				continue;
 			}
-			Optional<Limit> limit = limit(part);
+			Measure measure = StressCatalog.of(part.getKind(), rating(part.getKind())).orElseThrow(() -> new IllegalStateException(
+					info().id() + ": no stress '" + rating(part.getKind()) + "' for " + part.getKind()));
+			Optional<Limit> limit = Limits.of(part, measure, context.policy());
 			if (limit.isEmpty()) {
 				continue;
 			}
-			Optional<WorstCase> worst = WorstCase.of(context, part.getName(), this::stress);
+			Optional<WorstCase> worst = WorstCase.of(context, part.getName(), measure);
 			if (worst.isPresent() && worst.get().value() > limit.get().value()) {
 				RuleInfo info = info();
 				findings.accept(new Finding(info.id(), info.concern(), info.severity(),
-						message(part, worst.get(), limit.get()), part.getName(), worst.get().caseName(),
+						message(part, measure, worst.get(), limit.get()), part.getName(), worst.get().caseName(),
 						Locations.of(part, DesignPackage.Literals.MEMBER__NAME), worst.get().value(),
-						limit.get().value(), unit(), false));
+						limit.get().value(), measure.unit(), false));
 			}
 		}
+	}
+
+	/** "R2: power 346 mW in case 'x', over its rated 250 mW derated to 60 % (150 mW), 231 % of the limit". */
+	static String message(Part part, Measure measure, WorstCase worst, Limit limit) {
+		return String.format(Locale.ROOT, "%s: %s %s in case '%s', over %s, %.0f %% of the limit", part.getName(),
+				measure.what(), Figures.engineering(worst.value(), measure.unit()), worst.caseName(), limit.describe(),
+				100 * worst.value() / limit.value());
 	}
 }

@@ -5,8 +5,10 @@ import java.util.List;
 /** Every rule Bulwark runs, listed explicitly (no class-path scanning), in report order. */
 public final class RuleRegistry {
 	private static final List<Rule> ALL = List.of(new ResistorPowerRule(), new ResistorVoltageRule(),
-			new DiodeReverseRule(), new BaseEmitterRule(), new ComparatorInputRule(), new ClampCurrentRule(),
-			new RatingMissingRule());
+			new SeriesStringRule(), new DevicePowerRule(), new DiodeReverseRule(), new ForwardCurrentRule(),
+			new BaseEmitterRule(), new TransistorVoltageRule(), new TransistorCurrentRule(), new CapacitorVoltageRule(),
+			new ProtectorBlockingRule(), new FuseVoltageRule(), new BatteryChargeRule(), new ComparatorInputRule(),
+			new ClampCurrentRule(), new ReversePathRule(), new HysteresisRule(), new RatingMissingRule());
 
 	private RuleRegistry() {
 	}

@@ -33,16 +33,73 @@ class CheckCommandTest {
 		assertEquals(1, run.exitCode(), run.err());
 		List<String> lines = run.out().lines().toList();
 		assertEquals(1, lines.size(), run.out());
-		// 12 V over 150 Ω + 100 Ω: 48 mA, 0.3456 W in R_DROP [closed form, Joule's law]
-		assertEquals(CliRun.example(LAB) + ":20:10: error resistor-power R_DROP dissipates 346 mW in case "
-				+ "'normal, terminals open', over its rated 125 mW (276 % of rating)", lines.get(0));
+		// with the indicator output shorted, 12 V across 150 Ω: 12²/150 = 0.96 W [closed form, Joule's law],
+		// against 125 mW derated to 60 % (NASA EEE-INST-002): 75 mW, 1280 %
+		assertEquals(CliRun.example(LAB) + ":22:10: error resistor-power R_DROP: power 960 mW in case "
+				+ "'normal, LAMP_OUT shorted to LAMP_RET', over its rated 125 mW derated to 60 % (75 mW), 1280 % of the limit",
+				lines.get(0));
 	}
 
 	@Test
-	void warningAloneExitsZero() {
-		CliRun run = CliRun.of("check", CliRun.example(LOOM));
+	void warningAloneExitsZero(@TempDir Path dir) throws Exception {
+		Path unrated = dir.resolve("unrated.bulwark");
+		Files.writeString(unrated, "design \"unrated\"\nreference net gnd\nnet a\n"
+				+ "source V1 (plus: a, minus: gnd) { voltage 5 V }\nresistor R1 (a: a, b: gnd) { value 1 kΩ package 0805 }\n");
+		CliRun run = CliRun.of("check", unrated.toString());
 		assertEquals(0, run.exitCode(), run.err());
-		assertTrue(run.out().contains(": warning rating-missing R_READ has no power rating"), run.out());
+		assertTrue(run.out().contains(":5:10: warning rating-missing R1 has no rating for power (resistor-power)"), run.out());
+	}
+
+	@Test
+	void mainsOnTheLoomCheckerIsFoundWithItsPath() {
+		CliRun run = CliRun.of("check", "--format", "json", CliRun.example(LOOM));
+		assertEquals(1, run.exitCode(), run.err());
+		JsonObject loom = JsonParser.parseString(run.out()).getAsJsonObject().getAsJsonArray("designs").get(0)
+				.getAsJsonObject();
+		assertEquals("built-in policy", loom.get("policy").getAsString());
+		JsonObject power = null, path = null;
+		for (var e : loom.getAsJsonArray("findings")) {
+			JsonObject f = e.getAsJsonObject();
+			if ("R_LIMIT".equals(f.get("part").getAsString()) && f.get("rule").getAsString().equals("resistor-power")) {
+				power = f;
+			}
+			if ("R_LIMIT".equals(f.get("part").getAsString()) && f.get("rule").getAsString().equals("reverse-path")) {
+				path = f;
+			}
+		}
+		// SCREEN at +357.8 V (253 V·√2, IEC 60038 + 10 %) adds to the 9 V cell through its 1.7 Ω and R_LIMIT:
+		// I = (357.8 + 9)/(680 + 1.7), P = I²·680 ≈ 197 W [closed form]
+		double i = (253 * Math.sqrt(2) + 9) / 681.7;
+		assertEquals(i * i * 680, power.get("value").getAsDouble(), 1e-9);
+		assertEquals(0.25 * 0.6, power.get("limit").getAsDouble(), 1e-12);
+		assertEquals("W", power.get("unit").getAsString());
+		assertEquals("230 V mains peak (358 V), SCREEN + to CORE −", power.get("case").getAsString());
+		assertEquals("reverse-path", path.get("concern").getAsString());
+		assertTrue(path.get("message").getAsString().contains("SCREEN → B1 → net bat → R_LIMIT → CORE"),
+				path.get("message").getAsString());
+		// every part's worst stress per rating, with its limit
+		JsonObject worst = null;
+		for (var e : loom.getAsJsonArray("stresses")) {
+			JsonObject s = e.getAsJsonObject();
+			if (s.get("part").getAsString().equals("R_LIMIT") && s.get("rating").getAsString().equals("power")) {
+				worst = s;
+			}
+		}
+		assertEquals(i * i * 680 / 0.15, worst.get("utilisation").getAsDouble(), 1e-9);
+		assertEquals(0.6, worst.get("derating").getAsDouble(), 0);
+	}
+
+	@Test
+	void policyOptionAppliesToEveryDesign(@TempDir Path dir) throws Exception {
+		// the teaching lab's policy applies no mains: the loom checker is then only short of ratings
+		CliRun lab = CliRun.of("check", "--policy", CliRun.root().resolve("examples/teaching-lab.bulwark-policy").toString(),
+				CliRun.example(LOOM));
+		assertEquals(0, lab.exitCode(), lab.err() + lab.out());
+		Path bad = dir.resolve("bad.bulwark-policy");
+		Files.writeString(bad, "policy \"bad\"\n  derate resistor power to 0 %\n");
+		CliRun refused = CliRun.of("check", "--policy", bad.toString(), CliRun.example(LOOM));
+		assertEquals(2, refused.exitCode());
+		assertTrue(refused.err().contains(bad + ":2:"), refused.err());
 	}
 
 	@Test
@@ -61,14 +118,16 @@ class CheckCommandTest {
 			assertTrue(finding.has(key), "finding lacks " + key);
 		}
 		assertEquals("power", finding.get("concern").getAsString());
-		assertEquals(0.048 * 0.048 * 150, finding.get("value").getAsDouble(), 1e-12);
-		assertEquals(0.125, finding.get("limit").getAsDouble(), 0);
+		assertEquals(12.0 * 12.0 / 150, finding.get("value").getAsDouble(), 1e-12);
+		assertEquals(0.125 * 0.6, finding.get("limit").getAsDouble(), 1e-15);
+		assertEquals("Teaching lab, bench supply only", lab.get("policy").getAsString());
 		JsonObject normal = lab.getAsJsonArray("cases").get(0).getAsJsonObject();
 		assertEquals("normal", normal.get("kind").getAsString());
 		assertTrue(normal.get("converged").getAsBoolean());
 		JsonObject drop = normal.getAsJsonArray("parts").get(1).getAsJsonObject();
 		assertEquals("R_DROP", drop.get("part").getAsString());
-		assertEquals(0.3456 / 0.125, drop.get("utilisation").getAsDouble(), 1e-12);
+		// open: 12 V over 150 Ω + 100 Ω, 48 mA, 0.3456 W [closed form], against 75 mW
+		assertEquals(0.3456 / 0.075, drop.get("utilisation").getAsDouble(), 1e-12);
 		assertEquals("power", drop.get("limiting").getAsString());
 		assertTrue(lab.has("function"));
 		assertEquals("pass", designs.get(1).getAsJsonObject().get("status").getAsString());
@@ -112,7 +171,7 @@ class CheckCommandTest {
 	void folderIsSearchedAndHelpMentionsSafety() {
 		CliRun run = CliRun.of("check", CliRun.root().resolve("examples").toString());
 		assertEquals(1, run.exitCode(), run.err());
-		assertTrue(run.err().contains("4 design(s) checked: 3 pass, 1 fail, 0 not checked"), run.err());
+		assertTrue(run.err().contains("4 design(s) checked: 1 pass, 3 fail, 0 not checked"), run.err());
 		CliRun help = CliRun.of("--help");
 		assertEquals(0, help.exitCode());
 		assertTrue(help.out().contains("IEC 61010-1"), help.out());

@@ -16,16 +16,17 @@ class CompareCommandTest {
 	void fixedFindingAndBetterUtilisation(@TempDir Path dir) throws Exception {
 		Path old = CliRun.root().resolve("examples/lab-indicator-seeded.bulwark");
 		Path fixed = dir.resolve("fixed.bulwark");
-		Files.writeString(fixed, Files.readString(old).replace("rated power 125 mW", "rated power 500 mW"));
+		Files.copy(old.resolveSibling("teaching-lab.bulwark-policy"), dir.resolve("teaching-lab.bulwark-policy"));
+		Files.writeString(fixed, Files.readString(old).replace("rated power 125 mW", "rated power 2 W"));
 		CliRun run = CliRun.of("compare", old.toString(), fixed.toString());
 		assertEquals(0, run.exitCode(), run.err());
-		assertTrue(run.out().contains("fixed    error resistor-power R_DROP dissipates 346 mW"), run.out());
-		// 0.3456 W against 125 mW, then against 500 mW [closed form]: 276 % → 69 %
-		assertTrue(run.out().contains("better   R_DROP worst utilisation 276 % → 69 %"), run.out());
+		assertTrue(run.out().contains("fixed    error resistor-power R_DROP: power 960 mW"), run.out());
+		// 0.96 W against 125 mW, then 2 W, each derated to 60 % [closed form]: 1280 % → 80 %
+		assertTrue(run.out().contains("better   R_DROP worst utilisation 1280 % → 80 %"), run.out());
 
 		CliRun back = CliRun.of("compare", fixed.toString(), old.toString());
 		assertEquals(1, back.exitCode(), "a new error fails the comparison");
 		assertTrue(back.out().contains("new      error resistor-power"), back.out());
-		assertTrue(back.out().contains("worse    R_DROP worst utilisation 69 % → 276 %"), back.out());
+		assertTrue(back.out().contains("worse    R_DROP worst utilisation 80 % → 1280 %"), back.out());
 	}
 }

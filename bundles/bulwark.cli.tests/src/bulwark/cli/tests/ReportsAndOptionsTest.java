@@ -22,7 +22,8 @@ class ReportsAndOptionsTest {
 	void explainRendersTheRulePage() {
 		CliRun run = CliRun.of("explain", "resistor-power");
 		assertEquals(0, run.exitCode(), run.err());
-		assertTrue(run.out().startsWith("RESISTOR-POWER — A RESISTOR DISSIPATES MORE THAN ITS RATED POWER\n"), run.out());
+		assertTrue(run.out().startsWith("RESISTOR-POWER — A RESISTOR DISSIPATES MORE THAN ITS DERATED POWER RATING\n"),
+				run.out());
 		assertTrue(run.out().contains("\nHow it is computed\n------------------\n"), run.out());
 		CliRun unknown = CliRun.of("explain", "no-such-rule");
 		assertEquals(3, unknown.exitCode());
@@ -31,8 +32,9 @@ class ReportsAndOptionsTest {
 
 	@Test
 	void failOnDecidesWhatFails() {
-		assertEquals(0, CliRun.of("check", CliRun.example(LOOM)).exitCode()); // a warning only
-		assertEquals(1, CliRun.of("check", "--fail-on", "warning", CliRun.example(LOOM)).exitCode());
+		String lab = CliRun.root().resolve("examples/teaching-lab.bulwark-policy").toString();
+		assertEquals(0, CliRun.of("check", "--policy", lab, CliRun.example(LOOM)).exitCode()); // warnings only
+		assertEquals(1, CliRun.of("check", "--policy", lab, "--fail-on", "warning", CliRun.example(LOOM)).exitCode());
 		assertEquals(0, CliRun.of("check", "--fail-on", "never", CliRun.example(LAB)).exitCode());
 	}
 
@@ -63,6 +65,8 @@ class ReportsAndOptionsTest {
 	@Test
 	void htmlReportIsSelfContainedAndEscaped(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir) throws Exception {
 		java.nio.file.Path hostile = dir.resolve("hostile.bulwark");
+		java.nio.file.Files.copy(CliRun.root().resolve("examples/teaching-lab.bulwark-policy"),
+				dir.resolve("teaching-lab.bulwark-policy"));
 		java.nio.file.Files.writeString(hostile, java.nio.file.Files.readString(CliRun.root().resolve("examples").resolve(LAB))
 				.replace("design \"Lab:", "design \"<script>alert(1)</script> Lab:"));
 		CliRun run = CliRun.of("check", "--format", "html", hostile.toString());
@@ -73,7 +77,7 @@ class ReportsAndOptionsTest {
 		assertTrue(!html.contains("<script"), "nothing from the design runs");
 		assertTrue(html.contains("IEC 61010-1"), "the safety caution");
 		assertTrue(html.contains("<svg") && html.contains(">R_DROP</text>"), "a utilisation bar for R_DROP");
-		assertTrue(html.contains("276 % (power, normal, terminals open)"), html);
+		assertTrue(html.contains("1280 % (power, normal, LAMP_OUT shorted to LAMP_RET)"), html);
 		assertTrue(!html.contains("http"), "nothing fetched from anywhere");
 	}
 

@@ -27,8 +27,10 @@ public final class KindCatalog {
 	private static final KindSpec BATTERY = new KindSpec("battery", List.of("plus", "minus"),
 			List.of(new SettingSpec("emf", Unit.VOLT, true, "open-circuit voltage"),
 					new SettingSpec("resistance", Unit.OHM, false, "internal resistance (0 Ω when omitted)"),
-					new SettingSpec("capacity", Unit.AMPERE_HOUR, false, "rated capacity")),
-			List.of());
+					new SettingSpec("capacity", Unit.AMPERE_HOUR, false, "rated capacity"),
+					SettingSpec.word("type", "primary (must not be charged) or rechargeable; primary when omitted",
+							List.of("primary", "rechargeable"))),
+			List.of(new SettingSpec("charge", Unit.AMPERE, false, "largest current it may be charged with")));
 
 	// Diode parameters are those of the engine's junction model (bulwark.engine.device.DiodeModel).
 	private static final List<SettingSpec> JUNCTION = List.of(

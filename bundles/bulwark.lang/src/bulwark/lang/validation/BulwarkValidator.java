@@ -9,6 +9,7 @@ import java.util.Set;
 import java.util.stream.Collectors;
 
 import org.eclipse.xtext.validation.Check;
+import org.eclipse.xtext.validation.ComposedChecks;
 
 import bulwark.lang.design.Apply;
 import bulwark.lang.design.Connect;
@@ -38,6 +39,7 @@ import bulwark.lang.units.UnitParser;
  * its kind, known parameters and ratings with units of the right quantity. Electrical findings come from
  * the check (bulwark.check), not from here.
  */
+@ComposedChecks(validators = PolicyValidator.class)
 public class BulwarkValidator extends AbstractBulwarkValidator {
 
 	@Check
@@ -61,7 +63,7 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 				.filter(Net::isReference).collect(Collectors.toList());
 		if (refs.isEmpty()) {
 			error("The design has no reference net: mark the 0 V net, for example 'reference net gnd'", design,
-					DesignPackage.Literals.DESIGN__TITLE, IssueCodes.NO_REFERENCE_NET);
+					DesignPackage.Literals.DOCUMENT__TITLE, IssueCodes.NO_REFERENCE_NET);
 		}
 		for (int i = 1; i < refs.size(); i++) {
 			error("Only one net can be the reference; '" + refs.get(0).getName() + "' already is", refs.get(i),
@@ -200,17 +202,12 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 		}
 	}
 
-	/** A waiver is a record for review: it needs a reason, a name and a real date (ISO 8601, yyyy-mm-dd). */
+	/**
+	 * A waiver is a record for review: it needs a real date (ISO 8601, yyyy-mm-dd). Whether an empty reason
+	 * or name is acceptable is the review policy's call, so the check reports those, not the language.
+	 */
 	@Check
 	public void waiverIsComplete(Waiver waiver) {
-		if (waiver.getJustification() == null || waiver.getJustification().isBlank()) {
-			error("A waiver needs its reason", waiver, DesignPackage.Literals.WAIVER__JUSTIFICATION,
-					IssueCodes.WAIVER_INCOMPLETE);
-		}
-		if (waiver.getWho() == null || waiver.getWho().isBlank()) {
-			error("A waiver needs the name of who accepted it", waiver, DesignPackage.Literals.WAIVER__WHO,
-					IssueCodes.WAIVER_INCOMPLETE);
-		}
 		try {
 			java.time.LocalDate.parse(waiver.getDate());
 		} catch (RuntimeException e) {

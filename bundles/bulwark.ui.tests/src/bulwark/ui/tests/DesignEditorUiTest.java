@@ -74,7 +74,7 @@ class DesignEditorUiTest {
 		assertTrue(waitUntil(() -> powerAnnotation(editor).isPresent()), "no power finding marked in the editor");
 		FindingAnnotation marker = powerAnnotation(editor).orElseThrow();
 		assertEquals(FindingAnnotation.ERROR, marker.getType());
-		assertEquals(19, editor.lineOf(marker), "marker on R_DROP's declaration (line 20)");
+		assertEquals(21, editor.lineOf(marker), "marker on R_DROP's declaration (line 22)");
 		assertTrue(waitUntil(() -> view.shownFindings().stream().map(Finding::rule).anyMatch("resistor-power"::equals)),
 				"findings view does not list the power finding");
 		screenshot("editor-power-finding.png");
@@ -90,9 +90,10 @@ class DesignEditorUiTest {
 		DesignEditor editor = Application.openFile(page(), LAB);
 		assertTrue(waitUntil(() -> editor.lastResult() != null), "no check result");
 		String hover = editor.hoverText("R_DROP");
-		// 0.3456 W against 125 mW [closed form]: 276 %
-		assertTrue(hover.startsWith("R_DROP: worst 276 % of its power rating, in case 'normal, terminals open'"), hover);
-		assertTrue(hover.contains("\nerror resistor-power: R_DROP dissipates 346 mW"), hover);
+		// the output shorted: 12²/150 = 0.96 W against 125 mW derated to 60 % [closed form]: 1280 %
+		assertTrue(hover.startsWith("R_DROP: worst 1280 % of its power rating, in case 'normal, LAMP_OUT shorted to LAMP_RET'"),
+				hover);
+		assertTrue(hover.contains("\nerror resistor-power: R_DROP: power 960 mW"), hover);
 		assertEquals(null, editor.hoverText("nothing_here"));
 	}
 
@@ -104,7 +105,7 @@ class DesignEditorUiTest {
 		assertTrue(waitUntil(() -> powerAnnotation(editor).isPresent()), "no power finding marked in the editor");
 		IDocument doc = editor.getDocumentProvider().getDocument(editor.getEditorInput());
 		int at = doc.get().indexOf("rated power 125 mW");
-		doc.replace(at, "rated power 125 mW".length(), "rated power 500 mW");
+		doc.replace(at, "rated power 125 mW".length(), "rated power 2 W");
 		assertTrue(waitUntil(() -> powerAnnotation(editor).isEmpty()), "power finding still shown after the fix");
 		assertTrue(waitUntil(() -> view.shownFindings().stream().noneMatch(f -> f.rule().equals("resistor-power"))),
 				"findings view still lists the power finding after the fix");

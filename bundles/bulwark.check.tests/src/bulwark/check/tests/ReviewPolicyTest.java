@@ -1,0 +1,182 @@
+package bulwark.check.tests;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import bulwark.check.CaseResult;
+import bulwark.check.DesignResult;
+import bulwark.check.Finding;
+import bulwark.check.Severity;
+import bulwark.check.Status;
+import bulwark.check.policy.DefaultPolicy;
+import bulwark.check.policy.PolicyFiles;
+import bulwark.check.policy.ReviewPolicy;
+import bulwark.lang.design.PartKind;
+
+/** The review policy: its language, how it resolves over the built-in one, and what it changes in a check. */
+class ReviewPolicyTest {
+	private static final String POLICY = """
+			policy "field instruments"
+			  mains 230 V ± 10 %
+			  level 48 V
+			  derate resistor power to 50 %
+			  minimum hysteresis 20 mV
+			  severity "rating-missing" error
+			  waivers need name
+			""";
+
+	/** One resistor across two terminals, rated 2 W (0805, 150 V limiting element voltage). */
+	private static final String ACROSS = """
+			design "one resistor across"
+			reference net gnd
+			net tip
+			terminal TIP at tip
+			terminal COM at gnd common
+			resistor R1 (a: tip, b: gnd) { value 100 kΩ package 0805 rated power 2 W }
+			""";
+
+	@Test
+	void policyResolvesOverTheBuiltInOne() {
+		ReviewPolicy p = Fixtures.policy(POLICY);
+		assertEquals("field instruments", p.title());
+		assertEquals(1, p.mains().size());
+		// IEC 60038: 230 V + 10 % = 253 V RMS, peak 253·√2 = 357.80 V [published + closed form, sources.md]
+		assertEquals(357.80, p.mains().get(0).peakVolts(), 0.005);
+		assertEquals(List.of(48.0), p.levels());
+		assertEquals(0.5, p.derating(PartKind.RESISTOR, "power").factor(), 0);
+		// not named in the file: the built-in NASA EEE-INST-002 figure stays
+		assertEquals(0.8, p.derating(PartKind.RESISTOR, "voltage").factor(), 0);
+		assertEquals(0.02, p.minimumHysteresisVolts().orElseThrow(), 1e-15);
+		assertEquals(Severity.ERROR, p.severity("rating-missing", Severity.WARNING));
+		assertTrue(p.waiverNeedsName());
+		assertFalse(p.waiverNeedsJustification());
+	}
+
+	@Test
+	void builtInMainsAreTheIec60038PeaksWithTolerance() {
+		// 230 V and 120 V, +10 %: 357.8 V and 186.7 V peak [published + closed form, sources.md]
+		assertEquals(253 * Math.sqrt(2), DefaultPolicy.MAINS.get(0).peakVolts(), 1e-9);
+		assertEquals(132 * Math.sqrt(2), DefaultPolicy.MAINS.get(1).peakVolts(), 1e-9);
+		assertEquals(186.68, DefaultPolicy.MAINS.get(1).peakVolts(), 0.005);
+	}
+
+	@Test
+	void aSeverityForAnUnknownRuleIsALocatedError() {
+		PolicyFiles.Resolution r = new PolicyFiles(Fixtures.loader()).parse("""
+				policy "typo"
+				  severity "resistor-powr" info
+				""", "team.bulwark-policy");
+		assertTrue(r.policy().isEmpty());
+		assertTrue(r.problems().get(0).message().startsWith("review policy team.bulwark-policy:2:12: "),
+				r.problems().toString());
+	}
+
+	@Test
+	void policyLanguageErrorsAreLocated() {
+		PolicyFiles.Resolution r = new PolicyFiles(Fixtures.loader()).parse("""
+				policy "wrong"
+				  derate resistor reverse to 150 %
+				  severity "hysteresis" off
+				  mains 230 A
+				""", "bad.bulwark-policy");
+		String all = r.problems().toString();
+		assertTrue(r.policy().isEmpty());
+		assertTrue(all.contains("bad.bulwark-policy:2:") && all.contains("has no rating 'reverse'"), all);
+		assertTrue(all.contains("at most 100 %"), all);
+		assertTrue(all.contains("bad.bulwark-policy:3:") && all.contains("never switched off"), all);
+		assertTrue(all.contains("bad.bulwark-policy:4:") && all.contains("takes a voltage"), all);
+	}
+
+	@Test
+	void everyPairOfTerminalsGetsEveryMainsSystemBothWays() {
+		DesignResult r = Fixtures.checkUnderDefault(ACROSS);
+		List<String> names = r.cases().stream().map(CaseResult::name).toList();
+		assertEquals(List.of("normal, terminals open", "normal, TIP shorted to COM",
+				"230 V mains peak (358 V), TIP + to COM −", "230 V mains peak (358 V), COM + to TIP −",
+				"120 V mains peak (187 V), TIP + to COM −", "120 V mains peak (187 V), COM + to TIP −"), names);
+		// the resistor is straight across the terminals: it sees ±357.8 V and ±186.7 V [closed form]
+		assertEquals(253 * Math.sqrt(2), voltage(r, 2), 1e-6);
+		assertEquals(-253 * Math.sqrt(2), voltage(r, 3), 1e-6);
+		assertEquals(-132 * Math.sqrt(2), voltage(r, 5), 1e-6);
+		// 357.8² / 100 kΩ = 1.28 W, within 2 W but over 2 W derated to 60 % = 1.2 W (NASA EEE-INST-002)
+		Finding power = Fixtures.only(r, "resistor-power");
+		assertEquals(253 * 253 * 2 / 100e3, power.value(), 1e-9);
+		assertEquals(1.2, power.limit(), 1e-12);
+		assertTrue(power.message().contains("its rated 2 W derated to 60 % (1.2 W)"), power.message());
+	}
+
+	@Test
+	void aReversedBatteryIsACase() {
+		String text = """
+				design "cell"
+				reference net gnd
+				net vbat
+				battery B1 (plus: vbat, minus: gnd) { emf 9 V type rechargeable rated charge 100 mA }
+				resistor R1 (a: vbat, b: gnd) { value 1 kΩ package 0805 rated power 250 mW }
+				""";
+		DesignResult r = Fixtures.checkUnderDefault(text);
+		CaseResult reversed = r.cases().stream().filter(c -> c.name().equals("battery B1 reversed")).findFirst()
+				.orElseThrow();
+		assertEquals(-9, reversed.parts().stream().filter(p -> p.part().equals("R1")).findFirst().orElseThrow().voltage(),
+				1e-12);
+	}
+
+	@Test
+	void severityChangesApply() {
+		String unrated = ACROSS.replace(" rated power 2 W", "");
+		DesignResult r = Fixtures.check(unrated, Fixtures.policy(POLICY));
+		assertEquals(Severity.ERROR, Fixtures.only(r, "rating-missing").severity());
+		assertEquals(Status.FAIL, r.status());
+	}
+
+	@Test
+	void waiversMissWhatThePolicyNeeds() {
+		String waived = ACROSS + "waive \"resistor-power\" on R1 because \"\" by \"J. Okafor\" on \"2026-11-30\"\n";
+		// the built-in policy needs a justification: the waiver is not applied and says why
+		DesignResult strict = Fixtures.checkUnderDefault(waived);
+		assertTrue(strict.findings().stream().anyMatch(f -> f.rule().equals("waiver") && f.severity() == Severity.ERROR
+				&& f.message().contains("needs a justification")), strict.findings().toString());
+		assertFalse(Fixtures.only(strict, "resistor-power").waived());
+		// a policy that needs only a name accepts it
+		DesignResult lenient = Fixtures.check(waived, Fixtures.policy(POLICY.replace("derate resistor power to 50 %", "")));
+		assertTrue(Fixtures.only(lenient, "resistor-power").waived(), lenient.findings().toString());
+	}
+
+	@Test
+	void aDesignUsesThePolicyItNames(@TempDir Path dir) throws IOException {
+		Files.writeString(dir.resolve("team.bulwark-policy"), "policy \"team\"\n  mains none\n  level 12 V\n");
+		Path design = dir.resolve("d.bulwark");
+		Files.writeString(design, ACROSS.replace("design \"one resistor across\"",
+				"design \"one resistor across\"\npolicy \"team.bulwark-policy\""));
+		DesignResult r = Fixtures.defaultChecker().check(design);
+		assertEquals("team", r.policy());
+		assertEquals(4, r.cases().size(), r.cases().toString()); // open, shorted, 12 V both ways
+	}
+
+	@Test
+	void aPolicyOutsideTheDesignFolderIsRefused(@TempDir Path dir) throws IOException {
+		Path sub = Files.createDirectories(dir.resolve("designs"));
+		Files.writeString(dir.resolve("x.bulwark-policy"), "policy \"outside\"\n");
+		Path design = sub.resolve("d.bulwark");
+		Files.writeString(design, ACROSS.replace("design \"one resistor across\"",
+				"design \"one resistor across\"\npolicy \"../x.bulwark-policy\""));
+		DesignResult r = Fixtures.defaultChecker().check(design);
+		assertEquals(Status.ERROR, r.status());
+		assertTrue(r.findings().get(0).message().contains("must be in the design's folder"), r.findings().toString());
+		assertEquals(2, r.findings().get(0).location().line());
+	}
+
+	private static double voltage(DesignResult r, int caseIndex) {
+		return r.cases().get(caseIndex).parts().stream().filter(p -> p.part().equals("R1")).findFirst().orElseThrow()
+				.voltage();
+	}
+}

@@ -1,0 +1,57 @@
+package bulwark.check.tests;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.junit.jupiter.api.Test;
+
+import bulwark.check.Concern;
+import bulwark.check.DesignResult;
+import bulwark.check.Finding;
+import bulwark.check.rules.SeriesStringRule;
+
+class SeriesStringRuleTest {
+	private static final String ID = SeriesStringRule.ID;
+
+	/**
+	 * 357.8 V (253 V + 10 % peak, sources.md) across a string of 1 MΩ, 1.2 MΩ and 100 kΩ 0805 resistors: one
+	 * current, so the shares follow the values [closed form, voltage divider]: R2 takes 357.8·1.2/2.3 = 186.7 V
+	 * and R1 155.6 V, both over the 150 V limiting element voltage of 0805 [common practice, sources.md];
+	 * the finding is on R2, the worst, and says the sharing is unequal.
+	 */
+	private static final String STRING = """
+			design "series string"
+			reference net gnd
+			net tip
+			net mid
+			net sense
+			terminal TIP at tip
+			terminal COM at gnd common
+			resistor R1 (a: tip, b: mid) { value 1 MΩ package 0805 rated power 125 mW }
+			resistor R2 (a: mid, b: sense) { value 1.2 MΩ package 0805 rated power 125 mW } #! series-string
+			resistor R3 (a: sense, b: gnd) { value 100 kΩ package 0805 rated power 125 mW }
+			case "mains peak" { apply 357.8 V from TIP to COM }
+			""";
+
+	@Test
+	void triggersOnTheWorstMemberOfTheString() {
+		DesignResult r = Fixtures.check(STRING);
+		assertEquals(Fixtures.expected(STRING, ID), Fixtures.actual(r, ID));
+		Finding f = Fixtures.only(r, ID);
+		assertEquals(357.8 * 1.2 / 2.3, f.value(), 1e-9);
+		assertEquals(150, f.limit(), 0);
+		assertEquals(Concern.SERIES_STRING, f.concern());
+		assertTrue(f.message().startsWith("series string R1–R2–R3 carries 358 V in case 'mains peak'; R2 takes 187 V"), f.message());
+		assertTrue(f.message().contains("unequal (R1 43 %, R2 52 %, R3 4 %)"), f.message());
+		// the members are the string's business: resistor-voltage stays silent about them
+		assertTrue(Fixtures.actual(r, "resistor-voltage").isEmpty(), r.findings().toString());
+	}
+
+	@Test
+	void silentWhenEveryShareIsWithinItsRating() {
+		String bigger = STRING.replace("package 0805", "package 1206").replace(" #! series-string", "");
+		DesignResult r = Fixtures.check(bigger);
+		assertEquals(Fixtures.expected(bigger, ID), Fixtures.actual(r, ID));
+		assertTrue(Fixtures.actual(r, ID).isEmpty());
+	}
+}

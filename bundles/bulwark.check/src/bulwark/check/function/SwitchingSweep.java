@@ -1,0 +1,117 @@
+package bulwark.check.function;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.function.Predicate;
+
+import bulwark.check.compile.CompiledDesign;
+import bulwark.engine.circuit.Resistor;
+import bulwark.engine.dc.DcResult;
+import bulwark.engine.dc.DcSolution;
+import bulwark.engine.dc.DcSolver;
+import bulwark.engine.dc.DcSweep;
+import bulwark.engine.dc.PreparedCircuit;
+import bulwark.lang.design.Member;
+import bulwark.lang.design.Part;
+import bulwark.lang.design.Terminal;
+
+/**
+ * Where a comparator switches as the resistance across a pair of terminals is swept: rising from a short
+ * and falling from an open circuit, each from the last solution (so each sweep stays on its branch and the
+ * two can differ by the hysteresis), bisected to {@link #RELATIVE} of the value. Also the step of the
+ * comparator's differential input when its output switches: the distance the input must travel back, which
+ * is the hysteresis at the input.
+ */
+public final class SwitchingSweep {
+	/** Sweep range of the resistance under test, Ω: a short to an open circuit for any probe input. */
+	static final double LOWEST = 1e-2, HIGHEST = 1e8;
+	/** Geometric steps over the range before bisection (ten per decade). */
+	static final int STEPS = 100;
+	/** Bisection ends at this relative width: 0.1 %. */
+	static final double RELATIVE = 1e-3;
+
+	/** The thresholds found across one terminal pair. */
+	public record Result(String from, String to, double risingOhms, double fallingOhms, double inputStepVolts) {
+		public double hysteresisOhms() {
+			return Math.abs(risingOhms - fallingOhms);
+		}
+	}
+
+	/** The outcome: thresholds, or nothing found (empty with no failure), or why the sweep could not run. */
+	public record Outcome(Optional<Result> result, String failure) {
+	}
+
+	private SwitchingSweep() {
+	}
+
+	/** Tries the measuring pairs (each terminal with the common one, else every pair) until one switches. */
+	public static Outcome of(CompiledDesign design, Part comparator) {
+		List<Terminal[]> pairs = pairs(design);
+		for (Terminal[] pair : pairs) {
+			Outcome o = across(design, comparator, pair[0], pair[1]);
+			if (o.result().isPresent() || o.failure() != null) {
+				return o;
+			}
+		}
+		return new Outcome(Optional.empty(), null);
+	}
+
+	static Outcome across(CompiledDesign design, Part comparator, Terminal a, Terminal b) {
+		String name = "resistance under test";
+		int na = design.circuit().netIndex(a.getNet().getName()), nb = design.circuit().netIndex(b.getNet().getName());
+		DcSolver solver = new DcSolver();
+		PreparedCircuit prepared = DcSolver.prepare(design.circuit().plus(List.of(new Resistor(name, na, nb, LOWEST))));
+		DcSweep sweep = new DcSweep(solver, prepared, name, r -> new Resistor(name, na, nb, r));
+		String c = comparator.getName();
+		Predicate<DcSolution> high = s -> {
+			var p = s.device(c);
+			return p.pinVoltage("out") > (p.pinVoltage("supply_plus") + p.pinVoltage("supply_minus")) / 2;
+		};
+		DcSweep.Threshold rising = sweep.threshold(LOWEST, HIGHEST, STEPS, high, RELATIVE);
+		if (rising.failure() != null) {
+			return new Outcome(Optional.empty(), rising.failure().message());
+		}
+		DcSweep.Threshold falling = sweep.threshold(HIGHEST, LOWEST, STEPS, high, RELATIVE);
+		if (falling.failure() != null) {
+			return new Outcome(Optional.empty(), falling.failure().message());
+		}
+		if (rising.value().isEmpty() || falling.value().isEmpty()) {
+			return new Outcome(Optional.empty(), null);
+		}
+		double r = rising.value().get();
+		// just before and just after the rising threshold, continuing from the short
+		List<DcSweep.Point> points = sweep.run(new double[] { LOWEST, r * (1 - 2 * RELATIVE), r * (1 + 2 * RELATIVE) });
+		DcResult before = points.get(1).result(), after = points.get(2).result();
+		if (!(before instanceof DcSolution sb) || !(after instanceof DcSolution sa)) {
+			return new Outcome(Optional.empty(), "no solution beside the threshold");
+		}
+		double step = Math.abs(differential(sa, c) - differential(sb, c));
+		return new Outcome(Optional.of(new Result(a.getName(), b.getName(), r, falling.value().get(), step)), null);
+	}
+
+	private static double differential(DcSolution s, String comparator) {
+		var p = s.device(comparator);
+		return p.pinVoltage("in_plus") - p.pinVoltage("in_minus");
+	}
+
+	private static List<Terminal[]> pairs(CompiledDesign design) {
+		List<Terminal> terminals = new ArrayList<>();
+		for (Member m : design.design().getMembers()) {
+			if (m instanceof Terminal t && t.getNet() != null && design.usedNets().contains(t.getNet().getName())) {
+				terminals.add(t);
+			}
+		}
+		Terminal common = terminals.stream().filter(Terminal::isCommon).findFirst().orElse(null);
+		List<Terminal[]> pairs = new ArrayList<>();
+		for (int i = 0; i < terminals.size(); i++) {
+			for (int j = i + 1; j < terminals.size(); j++) {
+				Terminal x = terminals.get(i), y = terminals.get(j);
+				if (x.getNet() != y.getNet() && (common == null || x == common || y == common)) {
+					pairs.add(new Terminal[] { x == common ? y : x, x == common ? x : y });
+				}
+			}
+		}
+		return pairs;
+	}
+}

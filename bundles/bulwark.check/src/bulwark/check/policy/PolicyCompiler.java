@@ -1,0 +1,94 @@
+package bulwark.check.policy;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import java.util.function.Consumer;
+import java.util.stream.Collectors;
+
+import bulwark.check.Concern;
+import bulwark.check.Finding;
+import bulwark.check.Locations;
+import bulwark.check.Severity;
+import bulwark.check.policy.ReviewPolicy.Derating;
+import bulwark.check.policy.ReviewPolicy.SurgeLevel;
+import bulwark.check.rules.Rule;
+import bulwark.check.rules.RuleRegistry;
+import bulwark.lang.design.DcLevel;
+import bulwark.lang.design.DesignPackage;
+import bulwark.lang.design.MainsSystem;
+import bulwark.lang.design.Minimum;
+import bulwark.lang.design.Policy;
+import bulwark.lang.design.PolicyEntry;
+import bulwark.lang.design.SeverityChange;
+import bulwark.lang.design.Surge;
+import bulwark.lang.design.WaiverDemand;
+import bulwark.lang.units.Quantities;
+import bulwark.lang.units.Unit;
+
+/**
+ * Resolves a validated policy file over the built-in policy: mains systems listed replace the built-in
+ * ones ("mains none" removes them), levels and surges add to none, deratings and severities override one by one, a minimum replaces
+ * the built-in minimum, a waiver demand replaces the built-in one. A severity for a rule Bulwark does not
+ * have is an error, so that a misspelt rule name cannot pass unseen.
+ */
+public final class PolicyCompiler {
+	private PolicyCompiler() {
+	}
+
+	public static ReviewPolicy compile(Policy policy, Consumer<Finding> problems) {
+		ReviewPolicy base = DefaultPolicy.POLICY;
+		List<ReviewPolicy.MainsSystem> mains = new ArrayList<>();
+		boolean noMains = false;
+		List<Double> levels = new ArrayList<>();
+		List<SurgeLevel> surges = new ArrayList<>();
+		Map<String, Derating> derating = new LinkedHashMap<>(base.derating());
+		Map<String, Severity> severities = new HashMap<>(base.severities());
+		Optional<Double> minVolts = base.minimumHysteresisVolts();
+		Optional<Double> minOhms = base.minimumHysteresisOhms();
+		boolean needsJustification = base.waiverNeedsJustification(), needsName = base.waiverNeedsName();
+		Set<String> rules = RuleRegistry.all().stream().map(Rule::info).map(i -> i.id()).collect(Collectors.toSet());
+		for (PolicyEntry e : policy.getEntries()) {
+			if (e instanceof MainsSystem m && m.isNone()) {
+				noMains = true;
+			} else if (e instanceof MainsSystem m) {
+				double tolerance = m.getTolerance() == null ? 0 : Double.parseDouble(m.getTolerance().getPercent());
+				mains.add(new ReviewPolicy.MainsSystem(si(m.getNominal()), tolerance));
+			} else if (e instanceof DcLevel l) {
+				levels.add(si(l.getValue()));
+			} else if (e instanceof Surge s) {
+				surges.add(new SurgeLevel(si(s.getPeak()), si(s.getResistance())));
+			} else if (e instanceof bulwark.lang.design.Derating d) {
+				derating.put(ReviewPolicy.key(d.getKind(), d.getRating()), new Derating(
+						Double.parseDouble(d.getPercent()) / 100, "review policy '" + policy.getTitle() + "'"));
+			} else if (e instanceof Minimum m) {
+				double value = si(m.getValue());
+				boolean ohms = Quantities.unit(m.getValue()).orElse(Unit.VOLT) == Unit.OHM;
+				minVolts = ohms ? Optional.empty() : Optional.of(value);
+				minOhms = ohms ? Optional.of(value) : Optional.empty();
+			} else if (e instanceof SeverityChange s) {
+				if (!rules.contains(s.getRule())) {
+					problems.accept(Finding.plain("policy", Concern.STRUCTURE, Severity.ERROR, "the policy sets the severity of '"
+							+ s.getRule() + "', which is no rule Bulwark has (rules: " + String.join(", ", rules.stream().sorted().toList())
+							+ ")", null, Locations.of(s, DesignPackage.Literals.SEVERITY_CHANGE__RULE)));
+				} else {
+					severities.put(s.getRule(), Severity.valueOf(s.getLevel().toUpperCase(Locale.ROOT)));
+				}
+			} else if (e instanceof WaiverDemand w) {
+				needsJustification = w.getNeeds().contains("justification");
+				needsName = w.getNeeds().contains("name");
+			}
+		}
+		return new ReviewPolicy(policy.getTitle(), noMains ? List.of() : mains.isEmpty() ? base.mains() : mains, levels, surges, derating,
+				minVolts, minOhms, severities, needsJustification, needsName);
+	}
+
+	private static double si(bulwark.lang.design.Quantity q) {
+		return Quantities.si(q).orElseThrow(() -> new IllegalArgumentException("policy quantity without a known unit"));
+	}
+}

@@ -1,0 +1,108 @@
+package bulwark.check.policy;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.attribute.FileTime;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.ConcurrentMap;
+
+import bulwark.check.Concern;
+import bulwark.check.Finding;
+import bulwark.check.InputLimits;
+import bulwark.check.LanguageFindings;
+import bulwark.check.Severity;
+import bulwark.check.SourceLocation;
+import bulwark.check.load.DesignLoader;
+import bulwark.check.load.LoadedPolicy;
+
+/**
+ * Reads review policy files, once per file version: a batch of a thousand designs naming one policy parses
+ * it once. A policy with errors yields no policy, only its located problems; a design is never checked
+ * under half a policy.
+ */
+public final class PolicyFiles {
+	/** A policy as read: the policy, or the problems that stop it from being used (each naming the file). */
+	public record Resolution(Optional<ReviewPolicy> policy, List<Finding> problems) {
+	}
+
+	private record Version(Path file, FileTime modified, long size) {
+	}
+
+	private final DesignLoader loader;
+	private final ConcurrentMap<Version, Resolution> cache = new ConcurrentHashMap<>();
+
+	public PolicyFiles(DesignLoader loader) {
+		this.loader = loader;
+	}
+
+	public Resolution read(Path file) {
+		Path real;
+		Version version;
+		try {
+			real = file.toRealPath();
+			version = new Version(real, Files.getLastModifiedTime(real), Files.size(real));
+		} catch (IOException e) {
+			return failed("cannot read the review policy " + file + ": " + e.getClass().getSimpleName() + ": "
+					+ e.getMessage());
+		}
+		return cache.computeIfAbsent(version, v -> load(v.file()));
+	}
+
+	/** Parses a policy text; {@code name} is how messages call the file. */
+	public Resolution parse(String text, String name) {
+		Optional<Finding> refused = InputLimits.check(text);
+		if (refused.isPresent()) {
+			return failed(name + ": " + refused.get().message());
+		}
+		LoadedPolicy loaded = loader.loadPolicy(text, name);
+		List<Finding> problems = new ArrayList<>();
+		boolean errors = false;
+		for (var issue : loaded.issues()) {
+			Finding f = LanguageFindings.of(issue);
+			if (f.severity() == Severity.ERROR) {
+				errors = true;
+				problems.add(inFile(f, name));
+			}
+		}
+		if (errors || loaded.policy() == null) {
+			if (problems.isEmpty()) {
+				problems.add(inFile(Finding.plain("policy", Concern.STRUCTURE, Severity.ERROR,
+						"holds no review policy", null, SourceLocation.NONE), name));
+			}
+			return new Resolution(Optional.empty(), problems);
+		}
+		ReviewPolicy policy = PolicyCompiler.compile(loaded.policy(), f -> problems.add(inFile(f, name)));
+		return problems.isEmpty() ? new Resolution(Optional.of(policy), List.of())
+				: new Resolution(Optional.empty(), problems);
+	}
+
+	private Resolution load(Path file) {
+		try {
+			if (Files.size(file) > 4L * InputLimits.MAX_CHARACTERS) {
+				return failed("the review policy " + file + " is too large to be one");
+			}
+			return parse(Files.readString(file, StandardCharsets.UTF_8), file.toString());
+		} catch (IOException | RuntimeException e) {
+			return failed("cannot read the review policy " + file + ": " + e.getClass().getSimpleName() + ": "
+					+ e.getMessage());
+		}
+	}
+
+	/** A problem of the policy file, its place in that file written into the message. */
+	private static Finding inFile(Finding f, String name) {
+		String where = f.location().line() > 0 ? name + ":" + f.location().line() + ":" + f.location().column()
+				: name;
+		return Finding.plain("policy", f.concern(), f.severity(), "review policy " + where + ": " + f.message(), null,
+				SourceLocation.NONE);
+	}
+
+	private static Resolution failed(String message) {
+		return new Resolution(Optional.empty(), List.of(Finding.plain("policy", Concern.STRUCTURE,
+				Severity.ERROR, message, null, SourceLocation.NONE)));
+	}
+}

@@ -1,0 +1,57 @@
+package bulwark.check.policy;
+
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+import bulwark.check.Severity;
+import bulwark.lang.design.PartKind;
+
+/**
+ * The team lead's review policy, resolved to SI values: which abuse to apply at the terminals, how much of
+ * each rating a part may use, how much hysteresis a comparator must have, which rules are raised or lowered,
+ * and what every waiver must carry. {@link DefaultPolicy} gives the values used when no policy is named.
+ */
+public record ReviewPolicy(String title, List<MainsSystem> mains, List<Double> levels, List<SurgeLevel> surges,
+		Map<String, Derating> derating, Optional<Double> minimumHysteresisVolts,
+		Optional<Double> minimumHysteresisOhms, Map<String, Severity> severities, boolean waiverNeedsJustification,
+		boolean waiverNeedsName) {
+
+	public ReviewPolicy {
+		mains = List.copyOf(mains);
+		levels = List.copyOf(levels);
+		surges = List.copyOf(surges);
+		derating = Map.copyOf(derating);
+		severities = Map.copyOf(severities);
+	}
+
+	/** A mains system applied as DC at its highest peak: nominal RMS × (1 + tolerance) × √2. */
+	public record MainsSystem(double nominalVolts, double tolerancePercent) {
+		public double peakVolts() {
+			return nominalVolts * (1 + tolerancePercent / 100) * Math.sqrt(2);
+		}
+	}
+
+	/** A combination-wave surge: open-circuit peak and the generator's source impedance. */
+	public record SurgeLevel(double peakVolts, double sourceOhms) {
+	}
+
+	/** The fraction of a rating a part may use, and where that fraction comes from. */
+	public record Derating(double factor, String source) {
+		public static final Derating NONE = new Derating(1.0, "no derating");
+	}
+
+	public static String key(PartKind kind, String rating) {
+		return kind.getLiteral() + " " + rating;
+	}
+
+	/** The derating of one rating of one kind; {@link Derating#NONE} when the policy sets none. */
+	public Derating derating(PartKind kind, String rating) {
+		return derating.getOrDefault(key(kind, rating), Derating.NONE);
+	}
+
+	/** The rule's severity under this policy. */
+	public Severity severity(String rule, Severity standard) {
+		return severities.getOrDefault(rule, standard);
+	}
+}

@@ -1,0 +1,34 @@
+package bulwark.check.rules;
+
+import java.util.Set;
+
+import bulwark.check.Concern;
+import bulwark.check.Severity;
+import bulwark.lang.design.PartKind;
+
+/**
+ * A fault drives current into a battery's positive pin, charging it. Primary cells must not be charged
+ * (they can vent or burst); when the design gives no 'rated charge', a primary cell is assumed to tolerate
+ * 10 µA [memory, see Limits], and a battery marked 'type rechargeable' is checked only against a written
+ * rating.
+ */
+public final class BatteryChargeRule extends PartLimitRule {
+	public static final String ID = "battery-charge";
+	private static final RuleInfo INFO = new RuleInfo(ID, Concern.BATTERY, Severity.ERROR,
+			"a fault pushes current into a battery that must not be charged");
+
+	@Override
+	public RuleInfo info() {
+		return INFO;
+	}
+
+	@Override
+	Set<PartKind> kinds() {
+		return Set.of(PartKind.BATTERY);
+	}
+
+	@Override
+	String rating(PartKind kind) {
+		return "charge";
+	}
+}

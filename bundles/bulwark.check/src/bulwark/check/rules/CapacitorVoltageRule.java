@@ -1,0 +1,32 @@
+package bulwark.check.rules;
+
+import java.util.Set;
+
+import bulwark.check.Concern;
+import bulwark.check.Severity;
+import bulwark.lang.design.PartKind;
+
+/**
+ * A capacitor has more voltage across it than its rated voltage, derated (NASA EEE-INST-002 derates
+ * ceramic capacitors to 60 % of their rating, DC plus peak ripple).
+ */
+public final class CapacitorVoltageRule extends PartLimitRule {
+	public static final String ID = "capacitor-voltage";
+	private static final RuleInfo INFO = new RuleInfo(ID, Concern.CAPACITOR_VOLTAGE, Severity.ERROR,
+			"a capacitor has more voltage across it than its derated rating");
+
+	@Override
+	public RuleInfo info() {
+		return INFO;
+	}
+
+	@Override
+	Set<PartKind> kinds() {
+		return Set.of(PartKind.CAPACITOR);
+	}
+
+	@Override
+	String rating(PartKind kind) {
+		return "voltage";
+	}
+}

@@ -1,0 +1,32 @@
+package bulwark.check.rules;
+
+import java.util.Set;
+
+import bulwark.check.Concern;
+import bulwark.check.Severity;
+import bulwark.lang.design.PartKind;
+
+/**
+ * A diode, LED or zener carries more forward current than it is rated for, derated: a clamp diode
+ * taking a fault, an LED driven from a terminal without enough series resistance.
+ */
+public final class ForwardCurrentRule extends PartLimitRule {
+	public static final String ID = "forward-current";
+	private static final RuleInfo INFO = new RuleInfo(ID, Concern.FORWARD_CURRENT, Severity.ERROR,
+			"a diode, LED or zener carries more forward current than its derated rating");
+
+	@Override
+	public RuleInfo info() {
+		return INFO;
+	}
+
+	@Override
+	Set<PartKind> kinds() {
+		return Set.of(PartKind.DIODE, PartKind.LED, PartKind.ZENER);
+	}
+
+	@Override
+	String rating(PartKind kind) {
+		return "forward";
+	}
+}

@@ -1,0 +1,32 @@
+package bulwark.check.rules;
+
+import java.util.Set;
+
+import bulwark.check.Concern;
+import bulwark.check.Severity;
+import bulwark.lang.design.PartKind;
+
+/**
+ * A fuse that opens in a case is left holding the whole fault across it; above its rated voltage it may
+ * not break the current (an arc keeps it going). Cases where a fuse opens are solved again with it open.
+ */
+public final class FuseVoltageRule extends PartLimitRule {
+	public static final String ID = "fuse-voltage";
+	private static final RuleInfo INFO = new RuleInfo(ID, Concern.FUSE, Severity.ERROR,
+			"an opened fuse has more voltage across it than it is rated to break");
+
+	@Override
+	public RuleInfo info() {
+		return INFO;
+	}
+
+	@Override
+	Set<PartKind> kinds() {
+		return Set.of(PartKind.FUSE, PartKind.RESETTABLE_FUSE);
+	}
+
+	@Override
+	String rating(PartKind kind) {
+		return "voltage";
+	}
+}

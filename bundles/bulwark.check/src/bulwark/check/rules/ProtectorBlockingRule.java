@@ -1,0 +1,32 @@
+package bulwark.check.rules;
+
+import java.util.Set;
+
+import bulwark.check.Concern;
+import bulwark.check.Severity;
+import bulwark.lang.design.PartKind;
+
+/**
+ * A protector (an electronic current limiter in series with a terminal) has more voltage across it than
+ * it is rated to block: once tripped it holds off the whole fault, and beyond its rating it breaks down.
+ */
+public final class ProtectorBlockingRule extends PartLimitRule {
+	public static final String ID = "protector-blocking";
+	private static final RuleInfo INFO = new RuleInfo(ID, Concern.PROTECTOR, Severity.ERROR,
+			"a protector blocks more voltage than its derated blocking rating");
+
+	@Override
+	public RuleInfo info() {
+		return INFO;
+	}
+
+	@Override
+	Set<PartKind> kinds() {
+		return Set.of(PartKind.PROTECTOR);
+	}
+
+	@Override
+	String rating(PartKind kind) {
+		return "blocking";
+	}
+}

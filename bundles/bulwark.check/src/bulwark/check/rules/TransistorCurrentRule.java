@@ -1,0 +1,31 @@
+package bulwark.check.rules;
+
+import java.util.Set;
+
+import bulwark.check.Concern;
+import bulwark.check.Severity;
+import bulwark.lang.design.PartKind;
+
+/**
+ * A transistor carries more collector (drain) current than it is rated for, derated.
+ */
+public final class TransistorCurrentRule extends PartLimitRule {
+	public static final String ID = "transistor-current";
+	private static final RuleInfo INFO = new RuleInfo(ID, Concern.TRANSISTOR, Severity.ERROR,
+			"a transistor carries more collector or drain current than its derated rating");
+
+	@Override
+	public RuleInfo info() {
+		return INFO;
+	}
+
+	@Override
+	Set<PartKind> kinds() {
+		return Set.of(PartKind.NPN, PartKind.PNP, PartKind.NMOS, PartKind.PMOS);
+	}
+
+	@Override
+	String rating(PartKind kind) {
+		return kind == PartKind.NMOS || kind == PartKind.PMOS ? "drain" : "collector";
+	}
+}

@@ -1,0 +1,32 @@
+package bulwark.check.rules;
+
+import java.util.Set;
+
+import bulwark.check.Concern;
+import bulwark.check.Severity;
+import bulwark.lang.design.PartKind;
+
+/**
+ * A transistor has more voltage between collector and emitter (drain and source) than it is rated for,
+ * derated: a switch in the input path that sees the fault across it.
+ */
+public final class TransistorVoltageRule extends PartLimitRule {
+	public static final String ID = "transistor-voltage";
+	private static final RuleInfo INFO = new RuleInfo(ID, Concern.TRANSISTOR, Severity.ERROR,
+			"a transistor has more collector-emitter or drain-source voltage than its derated rating");
+
+	@Override
+	public RuleInfo info() {
+		return INFO;
+	}
+
+	@Override
+	Set<PartKind> kinds() {
+		return Set.of(PartKind.NPN, PartKind.PNP, PartKind.NMOS, PartKind.PMOS);
+	}
+
+	@Override
+	String rating(PartKind kind) {
+		return kind == PartKind.NMOS || kind == PartKind.PMOS ? "drain_source" : "collector_emitter";
+	}
+}

@@ -1,0 +1,35 @@
+package bulwark.check.stress;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+import bulwark.check.compile.FaultCase;
+import bulwark.check.policy.ReviewPolicy;
+import bulwark.engine.dc.DcSolution;
+import bulwark.lang.design.Part;
+
+/** One stress of one part over its limit in one solved case. */
+public record Overstress(Part part, Measure measure, double value, Limit limit) {
+
+	public double utilisation() {
+		return value / limit.value();
+	}
+
+	/** Every stress over its limit in the solution, for the given parts. */
+	public static List<Overstress> in(Iterable<Part> parts, FaultCase c, DcSolution solution, ReviewPolicy policy) {
+		List<Overstress> over = new ArrayList<>();
+		for (Part part : parts) {
+			for (Measure m : StressCatalog.of(part.getKind())) {
+				Optional<Limit> limit = Limits.of(part, m, policy);
+				if (limit.isPresent() && m.appliesIn(c, part.getName())) {
+					double v = m.of(solution.device(part.getName()));
+					if (v > limit.get().value()) {
+						over.add(new Overstress(part, m, v, limit.get()));
+					}
+				}
+			}
+		}
+		return over;
+	}
+}
