@@ -11,6 +11,7 @@ import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Device;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.circuit.VoltageSource;
+import bulwark.engine.source.CombinationWave;
 import bulwark.lang.design.Action;
 import bulwark.lang.design.Apply;
 import bulwark.lang.design.Case;
@@ -25,7 +26,8 @@ import bulwark.lang.units.Quantities;
  * The cases a design is checked under: the normal condition (terminals open, then each terminal shorted to
  * the common one), the designer's own cases, and the abuse the review policy names — across every pair of
  * terminals, each mains system at its highest peak and each DC level, in both polarities — and every
- * battery put in backwards. Mains is applied as DC at its peak from an ideal source: the steady worst
+ * battery put in backwards, and each surge the policy names (IEC 61000-4-5 combination wave, both
+ * polarities, solved as a transient). Mains is applied as DC at its peak from an ideal source: the steady worst
  * instant of the sine, with nothing of the supply's impedance to help.
  */
 public final class CaseGenerator {
@@ -61,6 +63,12 @@ public final class CaseGenerator {
 							Figures.engineering(mains.nominalVolts(), "V"), Figures.engineering(mains.peakVolts(), "V"));
 					cases.add(abuse(design, what, a, b, mains.peakVolts()));
 					cases.add(abuse(design, what, b, a, mains.peakVolts()));
+				}
+				for (ReviewPolicy.SurgeLevel surge : policy.surges()) {
+					String what = "surge " + Figures.engineering(surge.peakVolts(), "V") + " behind "
+							+ Figures.engineering(surge.sourceOhms(), "Ω");
+					cases.add(surge(design, what, a, b, surge));
+					cases.add(surge(design, what, b, a, surge));
 				}
 				for (double level : policy.levels()) {
 					String what = Figures.engineering(level, "V") + " DC";
@@ -106,6 +114,17 @@ public final class CaseGenerator {
 		double signed = first == plus ? volts : -volts;
 		return new FaultCase(what + ", " + plus.getName() + " + to " + minus.getName() + " −", FaultCase.ABUSE,
 				List.of(VoltageSource.ideal(pairSource(first, second), net(design, first), net(design, second), signed)),
+				Map.of(), plus.getName(), minus.getName());
+	}
+
+	/** A 1.2/50 µs combination wave from its generator impedance, positive at {@code plus}. */
+	private static FaultCase surge(CompiledDesign design, String what, Terminal plus, Terminal minus,
+			ReviewPolicy.SurgeLevel surge) {
+		Terminal first = order(plus, minus) ? plus : minus, second = first == plus ? minus : plus;
+		double signed = first == plus ? surge.peakVolts() : -surge.peakVolts();
+		return new FaultCase(what + ", " + plus.getName() + " + to " + minus.getName() + " −", FaultCase.SURGE,
+				List.of(new VoltageSource("surge " + first.getName() + " " + second.getName(), net(design, first),
+						net(design, second), new CombinationWave(signed, 0), surge.sourceOhms())),
 				Map.of(), plus.getName(), minus.getName());
 	}
 

@@ -45,7 +45,11 @@ public final class CaseRunner {
 			for (Map.Entry<String, Device> r : c.replaced().entrySet()) {
 				circuit = circuit.with(r.getKey(), r.getValue());
 			}
-			outcomes.add(openFuses(solver, c, circuit, solver.solve(circuit)));
+			if (c.isSurge()) {
+				outcomes.addAll(SurgeRunner.run(design, c, circuit, solver));
+			} else {
+				outcomes.add(openFuses(solver, c, circuit, solver.solve(circuit)));
+			}
 		}
 		return outcomes;
 	}

@@ -15,6 +15,8 @@ public record FaultCase(String name, String kind, List<Device> added, Map<String
 	public static final String NORMAL = "normal";
 	public static final String DESIGNER = "designer";
 	public static final String ABUSE = "abuse";
+	/** A combination-wave surge, solved as a transient; its figures are taken at the instants of peak stress. */
+	public static final String SURGE = "surge";
 
 	public FaultCase {
 		added = List.copyOf(added);
@@ -29,7 +31,17 @@ public record FaultCase(String name, String kind, List<Device> added, Map<String
 		return new FaultCase("normal, terminals open", NORMAL, List.of());
 	}
 
+	/** Abuse at the terminals: a generated DC case, a reversed battery or a surge. */
 	public boolean isAbuse() {
-		return ABUSE.equals(kind);
+		return ABUSE.equals(kind) || SURGE.equals(kind);
+	}
+
+	public boolean isSurge() {
+		return SURGE.equals(kind);
+	}
+
+	/** The same case at one instant of its transient. */
+	public FaultCase at(String instant) {
+		return new FaultCase(name + ", at " + instant, kind, added, replaced, from, to);
 	}
 }

@@ -23,6 +23,9 @@ public record Measure(String rating, String what, String unit, ToDoubleFunction<
 
 	/** Whether the stress counts for the part in the case. */
 	public boolean appliesIn(FaultCase c, String part) {
+		if (c.isSurge() && rating.equals("power")) {
+			return false; // continuous ratings do not judge a 50 µs pulse; see SurgeRunner
+		}
 		return !(notWhenReplaced && c.replaced().containsKey(part));
 	}
 }
