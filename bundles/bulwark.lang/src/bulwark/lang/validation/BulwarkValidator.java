@@ -39,7 +39,7 @@ import bulwark.lang.units.UnitParser;
  * its kind, known parameters and ratings with units of the right quantity. Electrical findings come from
  * the check (bulwark.check), not from here.
  */
-@ComposedChecks(validators = PolicyValidator.class)
+@ComposedChecks(validators = { PolicyValidator.class, RequirementValidator.class })
 public class BulwarkValidator extends AbstractBulwarkValidator {
 
 	@Check
@@ -193,7 +193,7 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 		if (u.isEmpty()) {
 			error(what + " needs a value in " + unit.symbol() + ", for example 1 " + unit.symbol(), q,
 					DesignPackage.Literals.QUANTITY__MAGNITUDE, IssueCodes.MISSING_UNIT);
-		} else if (u.get().unit() != unit) {
+		} else if (!u.get().unit().sameQuantity(unit)) {
 			error(what + " takes a " + unit.quantity() + " (" + unit.symbol() + "), not a " + u.get().unit().quantity(),
 					q, DesignPackage.Literals.QUANTITY__UNIT, IssueCodes.WRONG_UNIT);
 		} else if (!mayBeNegative && !(Double.parseDouble(q.getMagnitude()) > 0)) {
@@ -255,7 +255,7 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 						+ spec.unit().symbol(), q, DesignPackage.Literals.QUANTITY__UNIT, IssueCodes.UNKNOWN_UNIT);
 				return;
 			}
-			if (unit.get().unit() != spec.unit()) {
+			if (!unit.get().unit().sameQuantity(spec.unit())) {
 				error(s.getName() + " is a " + spec.unit().quantity() + " (" + spec.unit().symbol() + "), not a "
 						+ unit.get().unit().quantity() + " (" + unit.get().unit().symbol() + ")", q,
 						DesignPackage.Literals.QUANTITY__UNIT, IssueCodes.WRONG_UNIT);

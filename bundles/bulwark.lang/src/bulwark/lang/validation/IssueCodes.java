@@ -25,6 +25,8 @@ public final class IssueCodes {
 	public static final String SAME_TERMINAL = PREFIX + "sameTerminal";
 	public static final String WAIVER_INCOMPLETE = PREFIX + "waiverIncomplete";
 	public static final String SINGLE_CONNECTION = PREFIX + "singleConnection";
+	public static final String UNKNOWN_REQUIREMENT = PREFIX + "unknownRequirement";
+	public static final String DUPLICATE_REQUIREMENT = PREFIX + "duplicateRequirement";
 
 	private IssueCodes() {
 	}

@@ -116,7 +116,7 @@ public class PolicyValidator extends AbstractDeclarativeValidator {
 		if (u.isEmpty()) {
 			error(what + " needs a value in " + expected.symbol() + ", for example 1 " + expected.symbol(), q.eContainer(),
 					feature, IssueCodes.MISSING_UNIT);
-		} else if (u.get().unit() != expected) {
+		} else if (!u.get().unit().sameQuantity(expected)) {
 			error(what + " takes a " + expected.quantity() + " (" + expected.symbol() + "), not a "
 					+ u.get().unit().quantity(), q.eContainer(), feature, IssueCodes.WRONG_UNIT);
 		} else if (!(Double.parseDouble(q.getMagnitude()) > 0)) {
