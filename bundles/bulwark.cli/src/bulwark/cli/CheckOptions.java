@@ -34,6 +34,10 @@ public final class CheckOptions {
 			description = "Check under this review policy (a *.bulwark-policy file), whatever policy the designs name.")
 	Path policy;
 
+	@Option(names = "--library", paramLabel = "FOLDER",
+			description = "A folder where 'use \"…\"' also looks for parts libraries (repeatable; the BULWARK_LIBRARY environment variable adds more).")
+	java.util.List<Path> library = new java.util.ArrayList<>();
+
 	@Option(names = "--out", paramLabel = "FILE", description = "Write the report to FILE (atomically) instead of standard output.")
 	Path out;
 }

@@ -51,6 +51,7 @@ final class Checks {
 			err.println("bulwark: no design files (*" + DesignFiles.EXTENSION + ") found in " + paths);
 			return ExitCodes.USAGE;
 		}
+		LibraryFolders.apply(options.library);
 		DesignChecker checker = Language.checker();
 		if (options.policy != null) {
 			PolicyFiles.Resolution policy = checker.policies().read(options.policy);

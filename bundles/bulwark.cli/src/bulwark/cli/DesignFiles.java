@@ -9,7 +9,10 @@ import java.util.List;
 import java.util.stream.Collectors;
 import java.util.stream.Stream;
 
-/** Expands the paths given on the command line: files as given, folders searched for design files. */
+/**
+ * Expands the paths given on the command line: files as given, folders searched for design files. A parts
+ * library in a folder (a file that begins with {@code library}) is used by designs, not checked on its own.
+ */
 final class DesignFiles {
 	static final String EXTENSION = ".bulwark";
 
@@ -24,7 +27,7 @@ final class DesignFiles {
 			if (Files.isDirectory(p)) {
 				try (Stream<Path> walk = Files.walk(p)) {
 					files.addAll(walk.filter(f -> f.getFileName().toString().endsWith(EXTENSION))
-							.filter(Files::isRegularFile).sorted().collect(Collectors.toList()));
+							.filter(Files::isRegularFile).filter(f -> !isLibrary(f)).sorted().collect(Collectors.toList()));
 				} catch (IOException e) {
 					throw new UncheckedIOException(e);
 				}
@@ -33,5 +36,15 @@ final class DesignFiles {
 			}
 		}
 		return files;
+	}
+
+	/** Whether the file's first word, after comments and blank lines, is "library". */
+	static boolean isLibrary(Path file) {
+		try (var lines = Files.lines(file)) {
+			return lines.map(String::strip).filter(l -> !l.isEmpty() && !l.startsWith("#")).findFirst()
+					.map(l -> l.startsWith("library ") || l.startsWith("library\"")).orElse(false);
+		} catch (IOException | UncheckedIOException e) {
+			return false; // unreadable: the check reports it
+		}
 	}
 }

@@ -1,7 +1,11 @@
 package bulwark.lang;
 
 import org.eclipse.xtext.parser.antlr.ISyntaxErrorMessageProvider;
+import org.eclipse.xtext.scoping.IGlobalScopeProvider;
+import org.eclipse.xtext.scoping.impl.ImportUriGlobalScopeProvider;
+import org.eclipse.xtext.scoping.impl.ImportUriResolver;
 
+import bulwark.lang.library.LibraryImportResolver;
 import bulwark.lang.parser.SyntaxErrorMessages;
 
 /** Guice bindings of the language runtime; the generated base binds everything the grammar needs. */
@@ -9,5 +13,16 @@ public class BulwarkRuntimeModule extends AbstractBulwarkRuntimeModule {
 
 	public Class<? extends ISyntaxErrorMessageProvider> bindISyntaxErrorMessageProvider() {
 		return SyntaxErrorMessages.class;
+	}
+
+	/** A design sees what its own file declares and the definitions of the libraries it uses, nothing else. */
+	@Override
+	public Class<? extends IGlobalScopeProvider> bindIGlobalScopeProvider() {
+		return ImportUriGlobalScopeProvider.class;
+	}
+
+	/** {@code use "…"} resolves inside the design's folder and the library path only. */
+	public Class<? extends ImportUriResolver> bindImportUriResolver() {
+		return LibraryImportResolver.class;
 	}
 }

@@ -1,5 +1,7 @@
 package bulwark.check.compile;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Optional;
 
 import bulwark.lang.design.Parameter;
@@ -8,13 +10,26 @@ import bulwark.lang.design.Rating;
 import bulwark.lang.design.Setting;
 import bulwark.lang.units.Quantities;
 
-/** Reads a part's parameters and ratings as SI values. */
+/**
+ * Reads a part's parameters and ratings as SI values: its own settings first, then those of the definition
+ * it is made from ({@code is CHIP_1206}), so that a part overrides what its definition says.
+ */
 public final class Settings {
 	private Settings() {
 	}
 
+	/** The part's own settings, then its definition's. */
+	public static List<Setting> all(Part part) {
+		if (part.getBase() == null || part.getBase().eIsProxy()) {
+			return part.getSettings();
+		}
+		List<Setting> all = new ArrayList<>(part.getSettings());
+		all.addAll(part.getBase().getSettings());
+		return all;
+	}
+
 	public static Optional<Double> parameter(Part part, String name) {
-		for (Setting s : part.getSettings()) {
+		for (Setting s : all(part)) {
 			if (s instanceof Parameter && name.equals(s.getName())) {
 				return Quantities.si(s.getValue());
 			}
@@ -24,7 +39,7 @@ public final class Settings {
 
 	/** A parameter given as a word (colour red) or as a listed number (package 1206), as written. */
 	public static Optional<String> wordOrNumber(Part part, String name) {
-		for (Setting s : part.getSettings()) {
+		for (Setting s : all(part)) {
 			if (s instanceof Parameter p && name.equals(s.getName())) {
 				return Optional.ofNullable(p.getWord() != null ? p.getWord()
 						: p.getValue() == null ? null : p.getValue().getMagnitude());
@@ -35,7 +50,7 @@ public final class Settings {
 
 	/** A parameter given as a word (colour red). */
 	public static Optional<String> word(Part part, String name) {
-		for (Setting s : part.getSettings()) {
+		for (Setting s : all(part)) {
 			if (s instanceof Parameter p && name.equals(s.getName()) && p.getWord() != null) {
 				return Optional.of(p.getWord());
 			}
@@ -48,7 +63,7 @@ public final class Settings {
 	}
 
 	public static Optional<Rating> ratingSetting(Part part, String name) {
-		for (Setting s : part.getSettings()) {
+		for (Setting s : all(part)) {
 			if (s instanceof Rating r && name.equals(s.getName())) {
 				return Optional.of(r);
 			}

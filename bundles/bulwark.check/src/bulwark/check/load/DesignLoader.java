@@ -19,6 +19,7 @@ import com.google.inject.Injector;
 
 import bulwark.lang.design.Design;
 import bulwark.lang.design.Document;
+import bulwark.lang.design.Library;
 import bulwark.lang.design.Policy;
 
 /**
@@ -38,6 +39,8 @@ public final class DesignLoader {
 		List<Issue> issues = parsed.issues();
 		if (parsed.root() instanceof Policy) {
 			issues = List.of(notA(file, "a review policy", "design"));
+		} else if (parsed.root() instanceof Library) {
+			issues = List.of(notA(file, "a parts library", "design"));
 		}
 		return new LoadedDesign(file, text, design, issues);
 	}

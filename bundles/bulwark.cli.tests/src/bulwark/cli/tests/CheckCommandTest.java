@@ -90,6 +90,23 @@ class CheckCommandTest {
 	}
 
 	@Test
+	void libraryOptionAddsAFolder(@TempDir Path dir) throws Exception {
+		Path shared = Files.createDirectories(dir.resolve("shared"));
+		Files.writeString(shared.resolve("parts.bulwark"), "library \"shared\"\ndefine resistor R_STD { package 0805 rated power 250 mW }\n");
+		Path design = Files.createDirectories(dir.resolve("designs")).resolve("d.bulwark");
+		Files.writeString(design, "design \"d\"\nuse \"parts.bulwark\"\nreference net gnd\nnet a\n"
+				+ "source V1 (plus: a, minus: gnd) { voltage 5 V }\nresistor R1 (a: a, b: gnd) is R_STD { value 1 kΩ }\n");
+		assertEquals(2, CliRun.of("check", design.toString()).exitCode(), "not found without the library path");
+		try {
+			CliRun run = CliRun.of("check", "--library", shared.toString(), design.toString());
+			assertEquals(0, run.exitCode(), run.out() + run.err());
+			assertEquals("", run.out());
+		} finally {
+			System.clearProperty("bulwark.library");
+		}
+	}
+
+	@Test
 	void policyOptionAppliesToEveryDesign(@TempDir Path dir) throws Exception {
 		// the teaching lab's policy applies no mains: the loom checker is then only short of ratings
 		CliRun lab = CliRun.of("check", "--policy", CliRun.root().resolve("examples/teaching-lab.bulwark-policy").toString(),

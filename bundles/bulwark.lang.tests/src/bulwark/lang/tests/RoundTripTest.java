@@ -19,14 +19,19 @@ import org.junit.jupiter.api.extension.ExtendWith;
 
 import com.google.inject.Inject;
 
-import bulwark.lang.design.Design;
+import bulwark.lang.design.Document;
 
-/** Every demo design survives parse → serialize → parse unchanged, so that fixes can edit the model. */
+/**
+ * Every demo design, policy and library survives parse → serialize → parse unchanged, so that fixes can edit
+ * the model. Each is read at its own place, so that its {@code use} lines find their libraries.
+ */
 @ExtendWith(InjectionExtension.class)
 @InjectWith(BulwarkInjectorProvider.class)
 class RoundTripTest {
 	@Inject
-	private ParseHelper<Design> parser;
+	private ParseHelper<Document> parser;
+	@Inject
+	private com.google.inject.Provider<org.eclipse.xtext.resource.XtextResourceSet> resourceSets;
 	@Inject
 	private ISerializer serializer;
 	@Inject
@@ -36,15 +41,18 @@ class RoundTripTest {
 	void examplesRoundTrip() throws Exception {
 		Path examples = Path.of(System.getProperty("bulwark.root", "../.."), "examples");
 		List<Path> files;
-		try (Stream<Path> s = Files.list(examples)) {
-			files = s.filter(p -> p.toString().endsWith(".bulwark")).sorted().collect(Collectors.toList());
+		try (Stream<Path> s = Files.walk(examples)) {
+			files = s.filter(p -> p.toString().endsWith(".bulwark") || p.toString().endsWith(".bulwark-policy")).sorted()
+					.collect(Collectors.toList());
 		}
-		assertTrue(files.size() >= 4, "demo designs not found in " + examples.toAbsolutePath());
+		assertTrue(files.size() >= 7, "demo designs, policies and library not found in " + examples.toAbsolutePath());
 		for (Path file : files) {
-			Design original = parser.parse(Files.readString(file));
+			org.eclipse.emf.common.util.URI uri = org.eclipse.emf.common.util.URI
+					.createFileURI(file.toAbsolutePath().toString());
+			Document original = parser.parse(Files.readString(file), uri, resourceSets.get());
 			validation.assertNoErrors(original);
 			String text = serializer.serialize(original);
-			Design again = parser.parse(text);
+			Document again = parser.parse(text, uri, resourceSets.get());
 			validation.assertNoErrors(again);
 			assertTrue(EcoreUtil.equals(original, again), file + " changed in the round trip:\n" + text);
 		}

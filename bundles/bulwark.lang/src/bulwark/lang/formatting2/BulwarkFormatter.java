@@ -1,6 +1,7 @@
 package bulwark.lang.formatting2;
 
 import java.util.HashMap;
+import java.util.List;
 
 import org.eclipse.xtext.formatting2.AbstractJavaFormatter;
 import org.eclipse.xtext.formatting2.FormatterPreferenceKeys;
@@ -14,8 +15,10 @@ import bulwark.lang.design.Action;
 import bulwark.lang.design.Apply;
 import bulwark.lang.design.Case;
 import bulwark.lang.design.Connect;
+import bulwark.lang.design.Definition;
 import bulwark.lang.design.Design;
 import bulwark.lang.design.DesignPackage;
+import bulwark.lang.design.Library;
 import bulwark.lang.design.Member;
 import bulwark.lang.design.Net;
 import bulwark.lang.design.Parameter;
@@ -26,6 +29,7 @@ import bulwark.lang.design.Rating;
 import bulwark.lang.design.Setting;
 import bulwark.lang.design.Terminal;
 import bulwark.lang.design.Tolerance;
+import bulwark.lang.design.Use;
 import bulwark.lang.design.Waiver;
 
 /**
@@ -58,9 +62,14 @@ public class BulwarkFormatter extends AbstractJavaFormatter {
 		doc.append(regions.keyword("purpose"), f -> f.oneSpace());
 		doc.prepend(regions.keyword("revision"), f -> f.newLine());
 		doc.append(regions.keyword("revision"), f -> f.oneSpace());
+		for (Use use : design.getUses()) {
+			doc.prepend(use, f -> f.setNewLines(1, 2, 2));
+			doc.append(regionFor(use).keyword("use"), f -> f.oneSpace());
+		}
 		Member previous = null;
 		for (Member member : design.getMembers()) {
 			boolean loose = previous == null || member instanceof Part || previous instanceof Part
+					|| member instanceof Definition || previous instanceof Definition
 					|| member.getClass() != previous.getClass();
 			doc.prepend(member, f -> f.setNewLines(loose ? 2 : 1, loose ? 2 : 1, 2));
 			doc.format(member);
@@ -112,20 +121,46 @@ public class BulwarkFormatter extends AbstractJavaFormatter {
 			doc.prepend(p.keyword(":"), f -> f.noSpace());
 			doc.append(p.keyword(":"), f -> f.oneSpace());
 		}
-		ISemanticRegion braceOpen = regions.keyword("{");
-		ISemanticRegion braceClose = regions.keyword("}");
-		if (braceOpen != null) {
-			doc.prepend(braceOpen, f -> f.oneSpace());
-			if (part.getSettings().isEmpty()) {
-				doc.append(braceOpen, f -> f.oneSpace());
-			} else {
-				doc.interior(braceOpen, braceClose, f -> f.indent());
-				for (Setting setting : part.getSettings()) {
-					doc.prepend(setting, f -> f.newLine());
-					doc.format(setting);
-				}
-				doc.prepend(braceClose, f -> f.newLine());
+		doc.surround(regions.keyword("is"), f -> f.oneSpace());
+		block(regions.keyword("{"), regions.keyword("}"), part.getSettings(), doc);
+	}
+
+	protected void format(Definition definition, IFormattableDocument doc) {
+		var regions = regionFor(definition);
+		doc.append(regions.keyword("define"), f -> f.oneSpace());
+		doc.prepend(regions.feature(DesignPackage.Literals.MEMBER__NAME), f -> f.oneSpace());
+		block(regions.keyword("{"), regions.keyword("}"), definition.getSettings(), doc);
+	}
+
+	protected void format(Library library, IFormattableDocument doc) {
+		doc.append(regionFor(library).keyword("library"), f -> f.oneSpace());
+		for (Use use : library.getUses()) {
+			doc.prepend(use, f -> f.setNewLines(1, 1, 2));
+			doc.append(regionFor(use).keyword("use"), f -> f.oneSpace());
+		}
+		for (Definition definition : library.getDefinitions()) {
+			doc.prepend(definition, f -> f.setNewLines(2, 2, 2));
+			doc.format(definition);
+		}
+		doc.append(library, f -> f.setNewLines(1, 1, 1));
+	}
+
+	/** Settings in braces: one per line, indented; empty braces on one line. */
+	private void block(ISemanticRegion braceOpen, ISemanticRegion braceClose, List<Setting> settings,
+			IFormattableDocument doc) {
+		if (braceOpen == null) {
+			return;
+		}
+		doc.prepend(braceOpen, f -> f.oneSpace());
+		if (settings.isEmpty()) {
+			doc.append(braceOpen, f -> f.oneSpace());
+		} else {
+			doc.interior(braceOpen, braceClose, f -> f.indent());
+			for (Setting setting : settings) {
+				doc.prepend(setting, f -> f.newLine());
+				doc.format(setting);
 			}
+			doc.prepend(braceClose, f -> f.newLine());
 		}
 	}
 

@@ -13,12 +13,14 @@ import org.eclipse.xtext.validation.ComposedChecks;
 
 import bulwark.lang.design.Apply;
 import bulwark.lang.design.Connect;
+import bulwark.lang.design.Definition;
 import bulwark.lang.design.Design;
 import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Member;
 import bulwark.lang.design.Net;
 import bulwark.lang.design.Parameter;
 import bulwark.lang.design.Part;
+import bulwark.lang.design.PartKind;
 import bulwark.lang.design.PinBinding;
 import bulwark.lang.design.Quantity;
 import bulwark.lang.design.Rating;
@@ -39,7 +41,7 @@ import bulwark.lang.units.UnitParser;
  * its kind, known parameters and ratings with units of the right quantity. Electrical findings come from
  * the check (bulwark.check), not from here.
  */
-@ComposedChecks(validators = { PolicyValidator.class, RequirementValidator.class })
+@ComposedChecks(validators = { PolicyValidator.class, RequirementValidator.class, LibraryValidator.class })
 public class BulwarkValidator extends AbstractBulwarkValidator {
 
 	@Check
@@ -128,10 +130,34 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 
 	@Check
 	public void settingsMatchKind(Part part) {
-		KindSpec spec = KindCatalog.of(part.getKind());
+		Set<String> parameters = knownSettings(part.getKind(), part.getSettings());
+		// a part made from a definition has the definition's settings too
+		if (part.getBase() != null && !part.getBase().eIsProxy()) {
+			for (Setting s : part.getBase().getSettings()) {
+				if (!(s instanceof Rating)) {
+					parameters.add(s.getName());
+				}
+			}
+		}
+		for (SettingSpec p : KindCatalog.of(part.getKind()).parameters()) {
+			if (p.required() && !parameters.contains(p.name())) {
+				error(part.getName() + " needs its " + p.name() + " (" + p.meaning() + ", in " + p.unit().symbol()
+						+ ")", part, DesignPackage.Literals.MEMBER__NAME, IssueCodes.MISSING_PARAMETER);
+			}
+		}
+	}
+
+	@Check
+	public void definitionSettingsMatchKind(Definition definition) {
+		knownSettings(definition.getKind(), definition.getSettings());
+	}
+
+	/** Checks each setting against the kind; returns the names of the parameters given. */
+	private Set<String> knownSettings(PartKind kind, List<Setting> settings) {
+		KindSpec spec = KindCatalog.of(kind);
 		Set<String> parameters = new HashSet<>();
 		Set<String> ratings = new HashSet<>();
-		for (Setting s : part.getSettings()) {
+		for (Setting s : settings) {
 			boolean isRating = s instanceof Rating;
 			Optional<SettingSpec> known = isRating ? spec.rating(s.getName()) : spec.parameter(s.getName());
 			if (known.isEmpty()) {
@@ -149,12 +175,7 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 			}
 			checkUnit(s, known.get());
 		}
-		for (SettingSpec p : spec.parameters()) {
-			if (p.required() && !parameters.contains(p.name())) {
-				error(part.getName() + " needs its " + p.name() + " (" + p.meaning() + ", in " + p.unit().symbol()
-						+ ")", part, DesignPackage.Literals.MEMBER__NAME, IssueCodes.MISSING_PARAMETER);
-			}
-		}
+		return parameters;
 	}
 
 	@Check

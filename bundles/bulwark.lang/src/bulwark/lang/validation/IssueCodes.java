@@ -27,6 +27,9 @@ public final class IssueCodes {
 	public static final String SINGLE_CONNECTION = PREFIX + "singleConnection";
 	public static final String UNKNOWN_REQUIREMENT = PREFIX + "unknownRequirement";
 	public static final String DUPLICATE_REQUIREMENT = PREFIX + "duplicateRequirement";
+	public static final String LIBRARY_NOT_FOUND = PREFIX + "libraryNotFound";
+	public static final String LIBRARY_OUTSIDE = PREFIX + "libraryOutside";
+	public static final String DEFINITION_KIND = PREFIX + "definitionKind";
 
 	private IssueCodes() {
 	}

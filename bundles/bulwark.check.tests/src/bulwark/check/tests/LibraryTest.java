@@ -1,0 +1,116 @@
+package bulwark.check.tests;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import bulwark.check.DesignResult;
+import bulwark.check.Finding;
+import bulwark.check.Status;
+import bulwark.lang.library.LibraryPath;
+
+/** Part definitions from library files: found beside the design or on the library path, never outside. */
+class LibraryTest {
+	private static final String LIBRARY = """
+			library "test parts"
+			define resistor CHIP_0805 { package 0805 rated power 125 mW }
+			""";
+
+	/** 12 V across 100 Ω + 200 Ω: R1 dissipates (40 mA)²·100 Ω = 160 mW [closed form], over the 125 mW it inherits. */
+	private static final String DESIGN = """
+			design "uses a library"
+			use "lib/parts.bulwark"
+			reference net gnd
+			net v
+			net m
+			source V1 (plus: v, minus: gnd) { voltage 12 V }
+			resistor R1 (a: v, b: m) is CHIP_0805 { value 100 Ω }
+			resistor R2 (a: m, b: gnd) is CHIP_0805 { value 200 Ω rated power 1 W }
+			""";
+
+	private static Path write(Path dir, String name, String text) throws IOException {
+		Path file = dir.resolve(name);
+		Files.createDirectories(file.getParent());
+		Files.writeString(file, text);
+		return file;
+	}
+
+	@Test
+	void aPartTakesItsDefinitionsSettingsAndOverridesThem(@TempDir Path dir) throws IOException {
+		write(dir, "lib/parts.bulwark", LIBRARY);
+		DesignResult r = Fixtures.checker().check(write(dir, "d.bulwark", DESIGN));
+		assertEquals(Status.FAIL, r.status(), r.findings().toString());
+		Finding f = Fixtures.only(r, "resistor-power");
+		assertEquals("R1", f.part());
+		assertEquals(0.04 * 0.04 * 100, f.value(), 1e-12);
+		assertEquals(0.125, f.limit(), 0); // from the definition, not derated under the as-written policy
+		// R2 overrides the power and keeps the package: nothing missing, nothing over
+		assertTrue(Fixtures.actual(r, "rating-missing").isEmpty(), r.findings().toString());
+	}
+
+	@Test
+	void aMissingLibraryIsALocatedError(@TempDir Path dir) throws IOException {
+		DesignResult r = Fixtures.checker().check(write(dir, "d.bulwark", DESIGN));
+		assertEquals(Status.ERROR, r.status());
+		Finding f = r.findings().stream().filter(x -> x.message().contains("no library file 'lib/parts.bulwark'"))
+				.findFirst().orElseThrow(() -> new AssertionError(r.findings().toString()));
+		assertEquals(2, f.location().line());
+		assertEquals(5, f.location().column());
+	}
+
+	@Test
+	void aLibraryOutsideTheFolderIsRefused(@TempDir Path dir) throws IOException {
+		write(dir, "parts.bulwark", LIBRARY);
+		Path design = write(dir, "designs/d.bulwark", DESIGN.replace("lib/parts.bulwark", "../parts.bulwark"));
+		DesignResult r = Fixtures.checker().check(design);
+		assertEquals(Status.ERROR, r.status());
+		assertTrue(r.findings().stream().anyMatch(x -> x.message().contains("leaves the design's folder")),
+				r.findings().toString());
+		DesignResult absolute = Fixtures.checker().check(write(dir, "designs/e.bulwark",
+				DESIGN.replace("lib/parts.bulwark", dir.resolve("parts.bulwark").toString())));
+		assertTrue(absolute.findings().stream().anyMatch(x -> x.message().contains("must be relative")),
+				absolute.findings().toString());
+	}
+
+	@Test
+	void aLinkOutOfTheFolderIsRefused(@TempDir Path dir) throws IOException {
+		Path outside = write(dir, "outside/parts.bulwark", LIBRARY);
+		Files.createDirectories(dir.resolve("designs/lib"));
+		Files.createSymbolicLink(dir.resolve("designs/lib/parts.bulwark"), outside);
+		DesignResult r = Fixtures.checker().check(write(dir, "designs/d.bulwark", DESIGN));
+		assertTrue(r.findings().stream().anyMatch(x -> x.message().contains("links to a file outside")),
+				r.findings().toString());
+	}
+
+	@Test
+	void theLibraryPathIsSearchedToo(@TempDir Path dir) throws IOException {
+		write(dir, "shared/lib/parts.bulwark", LIBRARY);
+		String before = System.getProperty(LibraryPath.PROPERTY);
+		System.setProperty(LibraryPath.PROPERTY, dir.resolve("shared").toString());
+		try {
+			DesignResult r = Fixtures.checker().check(write(dir, "designs/d.bulwark", DESIGN));
+			assertEquals(Status.FAIL, r.status(), r.findings().toString());
+		} finally {
+			if (before == null) {
+				System.clearProperty(LibraryPath.PROPERTY);
+			} else {
+				System.setProperty(LibraryPath.PROPERTY, before);
+			}
+		}
+	}
+
+	@Test
+	void aDefinitionOfAnotherKindIsAnError(@TempDir Path dir) throws IOException {
+		write(dir, "lib/parts.bulwark", LIBRARY);
+		DesignResult r = Fixtures.checker().check(write(dir, "d.bulwark",
+				DESIGN + "net k\ndiode D1 (anode: m, cathode: k) is CHIP_0805\n"));
+		assertTrue(r.findings().stream().anyMatch(x -> x.message().contains("D1 is a diode, but CHIP_0805 defines a resistor")),
+				r.findings().toString());
+	}
+}
