@@ -16,6 +16,8 @@ import bulwark.check.compile.CaseRunner;
 import bulwark.check.compile.CompiledDesign;
 import bulwark.check.compile.DesignCompiler;
 import bulwark.check.compile.FaultCase;
+import bulwark.check.function.FunctionAnalysis;
+import bulwark.check.function.FunctionFigures;
 import bulwark.check.load.DesignLoader;
 import bulwark.check.load.LoadedDesign;
 import bulwark.check.policy.DefaultPolicy;
@@ -118,10 +120,14 @@ public final class DesignChecker {
 				findings.add(solverFinding(compiled, c, (SolveFailure) result));
 			}
 		}
-		CheckContext context = CheckContext.of(compiled, solved, policy);
+		FunctionFigures function = solved.isEmpty() || !solved.get(0).faultCase().kind().equals(FaultCase.NORMAL)
+				? FunctionFigures.NONE
+				: FunctionAnalysis.of(compiled, solved.get(0).solution());
+		CheckContext context = CheckContext.of(compiled, solved, policy, function);
 		for (Rule rule : RuleRegistry.all()) {
-			Severity severity = policy.severity(rule.info().id(), rule.info().severity());
-			rule.check(context, f -> findings.add(f.severity() == severity ? f : f.withSeverity(severity)));
+			// a policy's severity replaces the rule's own; otherwise each finding keeps the one its rule gave it
+			Severity set = policy.severities().get(rule.info().id());
+			rule.check(context, f -> findings.add(set == null || f.severity() == set ? f : f.withSeverity(set)));
 		}
 		List<Finding> all = new ArrayList<>(Waivers.apply(design, findings, policy));
 		all.sort(Comparator.comparingInt((Finding f) -> f.location().line())
@@ -130,7 +136,7 @@ public final class DesignChecker {
 				: all.stream().anyMatch(f -> f.severity() == Severity.ERROR && !f.waived()) ? Status.FAIL
 						: Status.PASS;
 		return new DesignResult(loaded.file(), title, status, all, caseResults, policy.title(),
-				WorstStresses.of(compiled, solved, policy));
+				WorstStresses.of(compiled, solved, policy), function);
 	}
 
 	private record PolicyChoice(ReviewPolicy policy, List<Finding> problems) {

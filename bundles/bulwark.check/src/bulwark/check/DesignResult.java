@@ -2,12 +2,15 @@ package bulwark.check;
 
 import java.util.List;
 
+import bulwark.check.function.FunctionFigures;
+
 /**
  * Everything the check found about one design file: its findings, each case's figures, the review policy
- * it was checked under (null when it was not checked) and each part's worst stress per rating.
+ * it was checked under (null when it was not checked), each part's worst stress per rating, and the function
+ * figures at the terminals.
  */
 public record DesignResult(String file, String title, Status status, List<Finding> findings, List<CaseResult> cases,
-		String policy, List<WorstStress> stresses) {
+		String policy, List<WorstStress> stresses, FunctionFigures function) {
 	public DesignResult {
 		findings = List.copyOf(findings);
 		cases = List.copyOf(cases);
@@ -16,7 +19,7 @@ public record DesignResult(String file, String title, Status status, List<Findin
 
 	/** A result with no stresses: a design that was not checked. */
 	public DesignResult(String file, String title, Status status, List<Finding> findings, List<CaseResult> cases) {
-		this(file, title, status, findings, cases, null, List.of());
+		this(file, title, status, findings, cases, null, List.of(), FunctionFigures.NONE);
 	}
 
 	public long errorCount() {

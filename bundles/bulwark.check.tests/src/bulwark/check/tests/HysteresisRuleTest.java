@@ -20,7 +20,7 @@ class HysteresisRuleTest {
 	 * source resistance of the tip (the pull-up parallel to the resistance under test) [closed form, divider;
 	 * the non-inverting network of sources.md].
 	 */
-	private static final String SCHMITT = """
+	static final String SCHMITT = """
 			design "continuity input"
 			reference net gnd
 			net vbat

@@ -1,6 +1,5 @@
 package bulwark.check.function;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.function.Predicate;
@@ -12,7 +11,6 @@ import bulwark.engine.dc.DcSolution;
 import bulwark.engine.dc.DcSolver;
 import bulwark.engine.dc.DcSweep;
 import bulwark.engine.dc.PreparedCircuit;
-import bulwark.lang.design.Member;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.Terminal;
 
@@ -47,7 +45,7 @@ public final class SwitchingSweep {
 
 	/** Tries the measuring pairs (each terminal with the common one, else every pair) until one switches. */
 	public static Outcome of(CompiledDesign design, Part comparator) {
-		List<Terminal[]> pairs = pairs(design);
+		List<Terminal[]> pairs = MeasuringPairs.of(design);
 		for (Terminal[] pair : pairs) {
 			Outcome o = across(design, comparator, pair[0], pair[1]);
 			if (o.result().isPresent() || o.failure() != null) {
@@ -99,25 +97,5 @@ public final class SwitchingSweep {
 	private static double differential(DcSolution s, String comparator) {
 		var p = s.device(comparator);
 		return p.pinVoltage("in_plus") - p.pinVoltage("in_minus");
-	}
-
-	private static List<Terminal[]> pairs(CompiledDesign design) {
-		List<Terminal> terminals = new ArrayList<>();
-		for (Member m : design.design().getMembers()) {
-			if (m instanceof Terminal t && t.getNet() != null && design.usedNets().contains(t.getNet().getName())) {
-				terminals.add(t);
-			}
-		}
-		Terminal common = terminals.stream().filter(Terminal::isCommon).findFirst().orElse(null);
-		List<Terminal[]> pairs = new ArrayList<>();
-		for (int i = 0; i < terminals.size(); i++) {
-			for (int j = i + 1; j < terminals.size(); j++) {
-				Terminal x = terminals.get(i), y = terminals.get(j);
-				if (x.getNet() != y.getNet() && (common == null || x == common || y == common)) {
-					pairs.add(new Terminal[] { x == common ? y : x, x == common ? x : y });
-				}
-			}
-		}
-		return pairs;
 	}
 }

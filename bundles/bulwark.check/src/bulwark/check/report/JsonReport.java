@@ -11,6 +11,8 @@ import bulwark.check.DesignResult;
 import bulwark.check.Finding;
 import bulwark.check.PartStress;
 import bulwark.check.WorstStress;
+import bulwark.check.function.FunctionFigures;
+import bulwark.check.function.PairFigures;
 
 /**
  * The machine-readable result. Its field names are a contract for every later consumer: fields may be added,
@@ -99,7 +101,36 @@ public final class JsonReport {
 			w.endObject();
 		}
 		w.endArray();
-		w.name("function").beginObject().endObject();
+		function(w, r.function());
+		w.endObject();
+	}
+
+	private static void function(JsonWriter w, FunctionFigures f) throws IOException {
+		w.name("function").beginObject();
+		w.name("indicator").value(f.indicator());
+		number(w.name("standby_current"), f.standbyAmps());
+		number(w.name("battery_life_hours"), f.batteryLifeHours());
+		w.name("pairs").beginArray();
+		for (PairFigures p : f.pairs()) {
+			w.beginObject();
+			w.name("from").value(p.from());
+			w.name("to").value(p.to());
+			w.name("on_when_shorted").value(p.onWhenShorted());
+			number(w.name("threshold"), p.thresholdOhms());
+			number(w.name("switch_rising"), p.risingOhms());
+			number(w.name("switch_falling"), p.fallingOhms());
+			number(w.name("hysteresis"), p.hysteresisOhms());
+			number(w.name("test_current"), p.testCurrentAmps());
+			number(w.name("open_voltage"), p.openVolts());
+			number(w.name("shorted_battery_current"), p.shortedBatteryAmps());
+			w.endObject();
+		}
+		w.endArray();
+		w.name("problems").beginArray();
+		for (String problem : f.problems()) {
+			w.value(problem);
+		}
+		w.endArray();
 		w.endObject();
 	}
 

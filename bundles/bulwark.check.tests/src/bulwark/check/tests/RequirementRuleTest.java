@@ -1,0 +1,76 @@
+package bulwark.check.tests;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.junit.jupiter.api.Test;
+
+import bulwark.check.Concern;
+import bulwark.check.DesignResult;
+import bulwark.check.Finding;
+import bulwark.check.Severity;
+import bulwark.check.rules.RequirementRule;
+
+class RequirementRuleTest {
+	private static final String ID = RequirementRule.ID;
+
+	/**
+	 * A 9 V cell (1.7 Ω) behind 680 Ω to the core, read back through 100 kΩ over 47 kΩ. Open: 9/147 681.7 Ω =
+	 * 60.9 µA; 500 mAh (1800 C) lasts 1800/60.9 µA = 8205 h, short of a year (8766 h). Into a short:
+	 * 9/681.7 Ω = 13.2 mA [closed form, Ohm's law; capacity / current].
+	 */
+	private static final String CHECKER = """
+			design "loom checker"
+			reference net gnd
+			net bat
+			net probe
+			net readback
+			terminal CORE at probe
+			terminal SCREEN at gnd common
+			battery B1 (plus: bat, minus: gnd) { emf 9 V resistance 1.7 Ω capacity 500 mAh }
+			resistor R_LIMIT (a: bat, b: probe) { value 680 Ω package 1206 rated power 250 mW }
+			resistor R_READ (a: probe, b: readback) { value 100 kΩ package 0805 rated power 125 mW }
+			resistor R_LOAD (a: readback, b: gnd) { value 47 kΩ package 0805 rated power 125 mW }
+			require battery_life 8766 h #! requirement
+			require test_current 10 mA between CORE and SCREEN #! requirement
+			""";
+
+	@Test
+	void triggersOnEachMissedRequirement() {
+		DesignResult r = Fixtures.check(CHECKER);
+		assertEquals(Fixtures.expected(CHECKER, ID), Fixtures.actual(r, ID));
+		Finding life = r.findings().stream().filter(f -> f.rule().equals(ID) && f.message().startsWith("battery life"))
+				.findFirst().orElseThrow();
+		double standby = 9 / 147681.7;
+		assertEquals(1800 / standby, life.value(), 1e-3);
+		assertEquals(8766 * 3600, life.limit(), 1e-6);
+		assertEquals(Severity.ERROR, life.severity());
+		assertEquals(Concern.REQUIREMENT, life.concern());
+		assertTrue(life.message().contains("8205 h"), life.message());
+		Finding test = r.findings().stream().filter(f -> f.rule().equals(ID) && f.message().startsWith("test current"))
+				.findFirst().orElseThrow();
+		// the short is 1 mΩ, and the 147 kΩ read-back across it takes a few parts in 10⁹
+		assertEquals(9 / (681.7 + 1e-3), test.value(), 1e-10);
+		assertTrue(test.message().startsWith("test current between CORE and SCREEN is 13.2 mA, required at most 10 mA"),
+				test.message());
+	}
+
+	@Test
+	void silentWhenEveryRequirementIsMet() {
+		String met = CHECKER.replace("8766 h #! requirement", "8000 h").replace("10 mA between CORE and SCREEN #! requirement",
+				"15 mA between CORE and SCREEN");
+		DesignResult r = Fixtures.check(met);
+		assertEquals(Fixtures.expected(met, ID), Fixtures.actual(r, ID));
+		assertTrue(Fixtures.actual(r, ID).isEmpty(), r.findings().toString());
+	}
+
+	@Test
+	void aBatteryTesterWithoutRequirementsIsHeldToCommonPractice() {
+		String none = CHECKER.replaceAll("require .*\\n", "");
+		DesignResult r = Fixtures.check(none);
+		Finding life = Fixtures.only(r, ID);
+		assertEquals(Severity.WARNING, life.severity());
+		assertTrue(life.message().contains("common practice for a battery-powered tester at least 8766 h"), life.message());
+		assertEquals(1, life.location().line()); // on the design's title
+	}
+}

@@ -1,0 +1,24 @@
+package bulwark.check.function;
+
+/**
+ * What an input does across one pair of terminals, a resistance between them swept from a short to an open
+ * circuit: whether its indicator is on with the terminals shorted, where it switches as the resistance
+ * rises and as it falls (null when it does not switch), the current into a short, the open-circuit voltage,
+ * and the battery current with the terminals shorted (null without a battery).
+ */
+public record PairFigures(String from, String to, boolean onWhenShorted, Double risingOhms, Double fallingOhms,
+		double testCurrentAmps, double openVolts, Double shortedBatteryAmps) {
+
+	/**
+	 * The threshold resistance of a continuity input: where the indicator comes on as the resistance falls
+	 * (null when it is not on at a short, or never switches).
+	 */
+	public Double thresholdOhms() {
+		return onWhenShorted ? fallingOhms : null;
+	}
+
+	/** The hysteresis at the terminals, when the indicator switches both ways. */
+	public Double hysteresisOhms() {
+		return risingOhms == null || fallingOhms == null ? null : Math.abs(risingOhms - fallingOhms);
+	}
+}

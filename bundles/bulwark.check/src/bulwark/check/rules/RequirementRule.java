@@ -1,0 +1,165 @@
+package bulwark.check.rules;
+
+import java.util.HashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.Set;
+import java.util.function.Consumer;
+
+import bulwark.check.Concern;
+import bulwark.check.Finding;
+import bulwark.check.Locations;
+import bulwark.check.Severity;
+import bulwark.check.SourceLocation;
+import bulwark.check.function.FunctionAnalysis;
+import bulwark.check.function.FunctionFigures;
+import bulwark.check.function.PairFigures;
+import bulwark.check.function.SwitchingSweep;
+import bulwark.lang.design.Design;
+import bulwark.lang.design.DesignPackage;
+import bulwark.lang.design.Part;
+import bulwark.lang.design.PartKind;
+import bulwark.lang.design.Requirement;
+import bulwark.lang.units.Quantities;
+import bulwark.lang.units.Unit;
+
+/**
+ * The input does what its design requires at the terminals: each {@code require} is compared with the
+ * function figure it names (FunctionAnalysis), an error when missed. A battery-powered tester that states
+ * none of threshold, test current and battery life is held to the trade's rules of thumb instead — a
+ * threshold below about 5 Ω, at most about 20 mA into a short, a year on its battery [common practice,
+ * sources.md] — as warnings. A figure that cannot be computed is said so, never passed silently.
+ */
+public final class RequirementRule implements Rule {
+	public static final String ID = "requirement";
+	/** Common-practice defaults for battery-powered testers [common practice, sources.md]. */
+	static final double DEFAULT_THRESHOLD_OHMS = 5, DEFAULT_TEST_AMPS = 20e-3,
+			DEFAULT_LIFE_SECONDS = FunctionAnalysis.HOURS_PER_YEAR * 3600;
+	private static final RuleInfo INFO = new RuleInfo(ID, Concern.REQUIREMENT, Severity.ERROR,
+			"the input misses a requirement at its terminals");
+
+	@Override
+	public RuleInfo info() {
+		return INFO;
+	}
+
+	@Override
+	public void check(CheckContext context, Consumer<Finding> findings) {
+		FunctionFigures f = context.function();
+		Design design = context.design().design();
+		Set<String> stated = new HashSet<>();
+		for (Requirement r : design.getRequirements()) {
+			stated.add(r.getWhat());
+			double value = Quantities.si(r.getValue()).orElseThrow();
+			boolean ohms = Quantities.unit(r.getValue()).orElse(null) == Unit.OHM;
+			judge(context, f, r.getWhat(), value, ohms, r.getFrom() == null ? null : r.getFrom().getName(),
+					r.getTo() == null ? null : r.getTo().getName(), Severity.ERROR, "required",
+					Locations.of(r), findings);
+		}
+		boolean tester = context.design().parts().values().stream().anyMatch(p -> p.getKind() == PartKind.BATTERY);
+		if (!tester) {
+			return;
+		}
+		SourceLocation title = Locations.of(design, DesignPackage.Literals.DOCUMENT__TITLE);
+		String basis = "common practice for a battery-powered tester";
+		if (!stated.contains("threshold") && f.pairs().stream().anyMatch(p -> p.thresholdOhms() != null)) {
+			judge(context, f, "threshold", DEFAULT_THRESHOLD_OHMS, true, null, null, Severity.WARNING, basis, title, findings);
+		}
+		if (!stated.contains("test_current") && !f.pairs().isEmpty()) {
+			judge(context, f, "test_current", DEFAULT_TEST_AMPS, false, null, null, Severity.WARNING, basis, title, findings);
+		}
+		if (!stated.contains("battery_life") && f.batteryLifeHours() != null) {
+			judge(context, f, "battery_life", DEFAULT_LIFE_SECONDS, false, null, null, Severity.WARNING, basis, title,
+					findings);
+		}
+	}
+
+	private void judge(CheckContext context, FunctionFigures f, String what, double value, boolean ohms, String from,
+			String to, Severity severity, String basis, SourceLocation where, Consumer<Finding> findings) {
+		List<PairFigures> pairs = f.pairs().stream().filter(p -> from == null || p.from().equals(from) && p.to().equals(to)
+				|| p.from().equals(to) && p.to().equals(from)).toList();
+		String across = from == null ? "" : " between " + from + " and " + to;
+		Optional<Double> figure;
+		String unit;
+		boolean atMost;
+		switch (what) {
+		case "threshold":
+			figure = pairs.stream().map(PairFigures::thresholdOhms).filter(x -> x != null).findFirst();
+			unit = "Ω";
+			atMost = true;
+			break;
+		case "test_current":
+			figure = pairs.stream().map(PairFigures::testCurrentAmps).max(Double::compare);
+			unit = "A";
+			atMost = true;
+			break;
+		case "standby_current":
+			figure = Optional.ofNullable(f.standbyAmps());
+			unit = "A";
+			atMost = true;
+			break;
+		case "battery_life":
+			figure = Optional.ofNullable(f.batteryLifeHours()).map(h -> h * 3600);
+			unit = "s";
+			atMost = false;
+			break;
+		case "led_test":
+			figure = pairs.stream().map(p -> Math.abs(p.openVolts())).max(Double::compare);
+			unit = "V";
+			atMost = false;
+			break;
+		case "hysteresis":
+			if (ohms) {
+				figure = pairs.stream().map(PairFigures::hysteresisOhms).filter(x -> x != null).findFirst();
+				unit = "Ω";
+			} else {
+				figure = comparatorStep(context);
+				unit = "V";
+			}
+			atMost = false;
+			break;
+		default:
+			return; // the language reports unknown figures
+		}
+		String required = (atMost ? "at most " : "at least ") + show(value, unit);
+		if (figure.isEmpty()) {
+			findings.accept(new Finding(ID, INFO.concern(), Severity.WARNING, what + across + " (" + basis + ": "
+					+ required + ") cannot be checked: " + missing(what, f), null, null, where, null, value, unit, false));
+			return;
+		}
+		double x = figure.get();
+		boolean missed = atMost ? x > value : x < value;
+		if (missed) {
+			findings.accept(new Finding(ID, INFO.concern(), severity,
+					String.format(Locale.ROOT, "%s%s is %s, %s %s", what.replace('_', ' '), across, show(x, unit), basis,
+							required),
+					null, null, where, x, value, unit, false));
+		}
+	}
+
+	private static Optional<Double> comparatorStep(CheckContext context) {
+		for (Part p : context.design().parts().values()) {
+			if (p.getKind() == PartKind.COMPARATOR) {
+				return SwitchingSweep.of(context.design(), p).result().map(SwitchingSweep.Result::inputStepVolts);
+			}
+		}
+		return Optional.empty();
+	}
+
+	private static String show(double value, String unit) {
+		return unit.equals("s") ? String.format(Locale.ROOT, "%.0f h", value / 3600) : Figures.engineering(value, unit);
+	}
+
+	private static String missing(String what, FunctionFigures f) {
+		if (!f.problems().isEmpty()) {
+			return String.join("; ", f.problems());
+		}
+		return switch (what) {
+		case "threshold", "hysteresis" -> f.indicator() == null ? "nothing in the design indicates (no indicator, LED or comparator)"
+				: f.indicator() + " does not switch as the resistance across the terminals goes from a short to an open circuit";
+		case "standby_current", "battery_life" -> "the design has no battery (or no capacity for it)";
+		default -> "the design has no terminal pair to measure across";
+		};
+	}
+}
