@@ -111,10 +111,12 @@ class CheckCommandTest {
 
 	@Test
 	void policyOptionAppliesToEveryDesign(@TempDir Path dir) throws Exception {
-		// the teaching lab's policy applies no mains: the loom checker is then only short of ratings
+		// the teaching lab's policy applies no mains: the loom checker then only misses its battery life
 		CliRun lab = CliRun.of("check", "--policy", CliRun.root().resolve("examples/teaching-lab.bulwark-policy").toString(),
 				CliRun.example(LOOM));
-		assertEquals(0, lab.exitCode(), lab.err() + lab.out());
+		assertEquals(1, lab.exitCode(), lab.err() + lab.out());
+		assertTrue(lab.out().contains("error requirement battery life is 8205 h"), lab.out());
+		assertTrue(!lab.out().contains("mains"), lab.out());
 		Path bad = dir.resolve("bad.bulwark-policy");
 		Files.writeString(bad, "policy \"bad\"\n  derate resistor power to 0 %\n");
 		CliRun refused = CliRun.of("check", "--policy", bad.toString(), CliRun.example(LOOM));
