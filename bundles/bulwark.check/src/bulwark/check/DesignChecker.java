@@ -139,14 +139,15 @@ public final class DesignChecker {
 				WorstStresses.of(compiled, solved, policy), function);
 	}
 
-	private record PolicyChoice(ReviewPolicy policy, List<Finding> problems) {
+	/** The review policy a design is checked under, or (policy null) the problems that stop its use. */
+	public record PolicyChoice(ReviewPolicy policy, List<Finding> problems) {
 	}
 
 	/**
 	 * The policy given to this checker, else the one the design names (a file beside the design or below
 	 * its folder, never outside it), else the built-in one.
 	 */
-	private PolicyChoice policyFor(Design design, String file) {
+	public PolicyChoice policyFor(Design design, String file) {
 		if (forcedPolicy != null) {
 			return new PolicyChoice(forcedPolicy, List.of());
 		}

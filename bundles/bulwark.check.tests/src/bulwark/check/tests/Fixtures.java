@@ -31,7 +31,7 @@ final class Fixtures {
 	 * built-in minimum hysteresis — so that a rule's test can compare with a hand calculation of its own case.
 	 */
 	static final ReviewPolicy AS_WRITTEN = new ReviewPolicy("as written", List.of(), List.of(), List.of(), Map.of(),
-			DefaultPolicy.POLICY.minimumHysteresisVolts(), Optional.empty(), Map.of(), true, true);
+			DefaultPolicy.POLICY.minimumHysteresisVolts(), Optional.empty(), Map.of(), true, true, "uniform");
 	private static DesignLoader loader;
 	private static DesignChecker asWritten;
 	private static DesignChecker underDefault;

@@ -9,7 +9,8 @@ import bulwark.lang.design.Part;
 
 /**
  * A design together with the engine circuit made from it; {@code parts} maps device names back to the text,
- * {@code usedNets} names the nets some pin connects to.
+ * {@code usedNets} names the nets some pin connects to, {@code values} where its parameter values came from.
  */
-public record CompiledDesign(Design design, Circuit circuit, Map<String, Part> parts, Set<String> usedNets) {
+public record CompiledDesign(Design design, Circuit circuit, Map<String, Part> parts, Set<String> usedNets,
+		Values values) {
 }

@@ -40,6 +40,11 @@ public final class DesignCompiler {
 
 	/** Compiles the design; call only when the language reported no error, so every value is present. */
 	public static CompiledDesign compile(Design design) {
+		return compile(design, Values.WRITTEN);
+	}
+
+	/** Compiles the design with its parameters taken from {@code values} (a tolerance corner, a sample). */
+	public static CompiledDesign compile(Design design, Values values) {
 		Net reference = design.getMembers().stream().filter(Net.class::isInstance).map(Net.class::cast)
 				.filter(Net::isReference).findFirst()
 				.orElseThrow(() -> new IllegalArgumentException("design has no reference net"));
@@ -53,68 +58,68 @@ public final class DesignCompiler {
 			switch (part.getKind()) {
 			case RESISTOR:
 				builder.add(new Resistor(part.getName(), pin(builder, part, "a"), pin(builder, part, "b"),
-						required(part, "value")));
+						required(values, part, "value")));
 				break;
 			case SOURCE:
 				builder.add(new VoltageSource(part.getName(), pin(builder, part, "plus"), pin(builder, part, "minus"),
-						required(part, "voltage"), Settings.parameter(part, "resistance").orElse(0.0)));
+						required(values, part, "voltage"), values.parameter(part, "resistance").orElse(0.0)));
 				break;
 			case BATTERY:
 				builder.add(new VoltageSource(part.getName(), pin(builder, part, "plus"), pin(builder, part, "minus"),
-						required(part, "emf"), Settings.parameter(part, "resistance").orElse(0.0)));
+						required(values, part, "emf"), values.parameter(part, "resistance").orElse(0.0)));
 				break;
 			case DIODE:
 			case ZENER:
 			case LED:
 				builder.diode(part.getName(), pin(builder, part, "anode"), pin(builder, part, "cathode"),
-						DeviceModels.diode(part));
+						DeviceModels.diode(part, values));
 				break;
 			case NPN:
 			case PNP:
 				builder.add(new Bjt(part.getName(), pin(builder, part, "collector"), pin(builder, part, "base"),
 						pin(builder, part, "emitter"), part.getKind() == PartKind.NPN ? Polarity.NPN : Polarity.PNP,
-						DeviceModels.bjt(part)));
+						DeviceModels.bjt(part, values)));
 				break;
 			case NMOS:
 			case PMOS:
 				builder.add(new Mosfet(part.getName(), pin(builder, part, "drain"), pin(builder, part, "gate"),
 						pin(builder, part, "source"), part.getKind() == PartKind.NMOS ? Channel.N : Channel.P,
-						DeviceModels.mosfet(part)));
+						DeviceModels.mosfet(part, values)));
 				break;
 			case CAPACITOR:
 				builder.add(new Capacitor(part.getName(), pin(builder, part, "a"), pin(builder, part, "b"),
-						required(part, "value")));
+						required(values, part, "value")));
 				break;
 			case INDUCTOR:
 				builder.add(new Inductor(part.getName(), pin(builder, part, "a"), pin(builder, part, "b"),
-						required(part, "value")));
+						required(values, part, "value")));
 				break;
 			case POTENTIOMETER:
 				builder.add(new Potentiometer(part.getName(), pin(builder, part, "a"), pin(builder, part, "b"),
-						pin(builder, part, "wiper"), required(part, "value"),
-						Settings.parameter(part, "position").orElse(0.5)));
+						pin(builder, part, "wiper"), required(values, part, "value"),
+						values.parameter(part, "position").orElse(0.5)));
 				break;
 			case PROTECTOR:
 				builder.add(new Protector(part.getName(), pin(builder, part, "a"), pin(builder, part, "b"),
-						DeviceModels.protector(part)));
+						DeviceModels.protector(part, values)));
 				break;
 			case FUSE:
 			case RESETTABLE_FUSE:
 				boolean resettable = part.getKind() == PartKind.RESETTABLE_FUSE;
 				builder.add(new Fuse(part.getName(), pin(builder, part, "a"), pin(builder, part, "b"),
-						Settings.parameter(part, "resistance").orElse(DeviceModels.FUSE_COLD_OHMS),
+						values.parameter(part, "resistance").orElse(DeviceModels.FUSE_COLD_OHMS),
 						Settings.rating(part, resettable ? "hold" : "current").orElse(Double.POSITIVE_INFINITY),
 						resettable));
 				break;
 			case INDICATOR:
 				builder.add(new Indicator(part.getName(), pin(builder, part, "a"), pin(builder, part, "b"),
-						required(part, "resistance"),
-						Settings.parameter(part, "activation").orElse(DeviceModels.INDICATOR_ACTIVATION)));
+						required(values, part, "resistance"),
+						values.parameter(part, "activation").orElse(DeviceModels.INDICATOR_ACTIVATION)));
 				break;
 			case COMPARATOR:
 				builder.add(new Comparator(part.getName(), pin(builder, part, "in_plus"), pin(builder, part, "in_minus"),
 						pin(builder, part, "out"), pin(builder, part, "supply_plus"), pin(builder, part, "supply_minus"),
-						DeviceModels.comparator(part)));
+						DeviceModels.comparator(part, values)));
 				break;
 			default:
 				throw new IllegalArgumentException("no engine model for " + part.getKind());
@@ -136,7 +141,7 @@ public final class DesignCompiler {
 				}
 			}
 		}
-		return new CompiledDesign(design, builder.build(), parts, Set.copyOf(usedNets));
+		return new CompiledDesign(design, builder.build(), parts, Set.copyOf(usedNets), values);
 	}
 
 	private static int pin(Circuit.Builder builder, Part part, String pin) {
@@ -145,8 +150,8 @@ public final class DesignCompiler {
 				.getNet().getName());
 	}
 
-	private static double required(Part part, String name) {
-		return Settings.parameter(part, name)
+	private static double required(Values values, Part part, String name) {
+		return values.parameter(part, name)
 				.orElseThrow(() -> new IllegalArgumentException(part.getName() + " has no " + name));
 	}
 }

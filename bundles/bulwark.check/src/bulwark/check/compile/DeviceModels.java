@@ -27,51 +27,51 @@ final class DeviceModels {
 	private DeviceModels() {
 	}
 
-	static DiodeModel diode(Part part) {
+	static DiodeModel diode(Part part, Values values) {
 		DiodeModel base = DiodeModel.SILICON;
-		double emission = Settings.parameter(part, "emission")
+		double emission = values.parameter(part, "emission")
 				.orElse(part.getKind() == PartKind.LED ? LED_EMISSION : base.emission());
 		double saturation;
 		if (part.getKind() == PartKind.LED) {
 			// Is from the forward voltage at 20 mA, given or by colour (red when neither is)
-			double vf = Settings.parameter(part, "forward").orElseGet(() -> LedColour
+			double vf = values.parameter(part, "forward").orElseGet(() -> LedColour
 					.valueOf(Settings.word(part, "colour").orElse("red").toUpperCase(Locale.ROOT)).forwardVolts());
 			saturation = DiodeModel.led(vf, emission).saturationCurrent();
 		} else {
-			saturation = Settings.parameter(part, "saturation").orElse(base.saturationCurrent());
+			saturation = values.parameter(part, "saturation").orElse(base.saturationCurrent());
 		}
-		double breakdown = Settings.parameter(part, "breakdown").orElse(Double.POSITIVE_INFINITY);
-		double knee = Settings.parameter(part, "knee")
+		double breakdown = values.parameter(part, "breakdown").orElse(Double.POSITIVE_INFINITY);
+		double knee = values.parameter(part, "knee")
 				.orElse(part.getKind() == PartKind.ZENER ? ZENER_KNEE : base.breakdownCurrent());
-		return new DiodeModel(saturation, emission, Settings.parameter(part, "resistance").orElse(0.0), breakdown,
+		return new DiodeModel(saturation, emission, values.parameter(part, "resistance").orElse(0.0), breakdown,
 				knee, base.breakdownEmission(), base.kelvin());
 	}
 
-	static ComparatorModel comparator(Part part) {
+	static ComparatorModel comparator(Part part, Values values) {
 		ComparatorModel base = ComparatorModel.GENERIC;
-		return new ComparatorModel(Settings.parameter(part, "gain").orElse(base.gain()),
-				Settings.parameter(part, "resistance").orElse(base.outputOhms()),
-				Settings.parameter(part, "quiescent").orElse(base.quiescentAmps()), false, base.clamp());
+		return new ComparatorModel(values.parameter(part, "gain").orElse(base.gain()),
+				values.parameter(part, "resistance").orElse(base.outputOhms()),
+				values.parameter(part, "quiescent").orElse(base.quiescentAmps()), false, base.clamp());
 	}
 
-	static MosfetModel mosfet(Part part) {
+	static MosfetModel mosfet(Part part, Values values) {
 		MosfetModel base = MosfetModel.SMALL_SIGNAL;
-		double drive = Settings.parameter(part, "drive").orElse(base.beta() / 2); // Id at 1 V overdrive = β/2
-		return new MosfetModel(Settings.parameter(part, "threshold").orElse(base.threshold()), 2 * drive, base.lambda(),
+		double drive = values.parameter(part, "drive").orElse(base.beta() / 2); // Id at 1 V overdrive = β/2
+		return new MosfetModel(values.parameter(part, "threshold").orElse(base.threshold()), 2 * drive, base.lambda(),
 				base.bodyDiode());
 	}
 
-	static ProtectorModel protector(Part part) {
-		return new ProtectorModel(Settings.parameter(part, "resistance").orElseThrow(),
-				Settings.parameter(part, "trip").orElseThrow(), Settings.parameter(part, "delay").orElse(PROTECTOR_DELAY));
+	static ProtectorModel protector(Part part, Values values) {
+		return new ProtectorModel(values.parameter(part, "resistance").orElseThrow(),
+				values.parameter(part, "trip").orElseThrow(), values.parameter(part, "delay").orElse(PROTECTOR_DELAY));
 	}
 
-	static BjtModel bjt(Part part) {
+	static BjtModel bjt(Part part, Values values) {
 		BjtModel base = BjtModel.SMALL_SIGNAL;
-		return new BjtModel(Settings.parameter(part, "saturation").orElse(base.saturationCurrent()),
-				Settings.parameter(part, "beta").orElse(base.forwardBeta()),
-				Settings.parameter(part, "reverse_beta").orElse(base.reverseBeta()), base.forwardEmission(),
-				base.reverseEmission(), Settings.parameter(part, "breakdown").orElse(base.emitterBaseBreakdown()),
+		return new BjtModel(values.parameter(part, "saturation").orElse(base.saturationCurrent()),
+				values.parameter(part, "beta").orElse(base.forwardBeta()),
+				values.parameter(part, "reverse_beta").orElse(base.reverseBeta()), base.forwardEmission(),
+				base.reverseEmission(), values.parameter(part, "breakdown").orElse(base.emitterBaseBreakdown()),
 				base.breakdownCurrent(), base.kelvin());
 	}
 }

@@ -5,7 +5,6 @@ import java.util.List;
 import java.util.Optional;
 
 import bulwark.check.compile.CompiledDesign;
-import bulwark.check.compile.Settings;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.dc.DcResult;
 import bulwark.engine.dc.DcSolution;
@@ -79,7 +78,7 @@ public final class FunctionAnalysis {
 		Double standby = batteries.isEmpty() ? null : discharge(batteries, open);
 		Double life = null;
 		for (Part battery : batteries) {
-			Optional<Double> coulombs = Settings.parameter(battery, "capacity");
+			Optional<Double> coulombs = design.values().parameter(battery, "capacity");
 			double amps = Math.max(0, -open.device(battery.getName()).current());
 			if (coulombs.isPresent()) {
 				double hours = amps > 0 ? coulombs.get() / amps / 3600 : Double.POSITIVE_INFINITY;

@@ -26,7 +26,7 @@ public final class DefaultPolicy {
 	}
 
 	public static final ReviewPolicy POLICY = new ReviewPolicy("built-in policy", MAINS, List.of(), List.of(),
-			derating(), Optional.of(MINIMUM_HYSTERESIS_VOLTS), Optional.empty(), Map.of(), true, true);
+			derating(), Optional.of(MINIMUM_HYSTERESIS_VOLTS), Optional.empty(), Map.of(), true, true, "uniform");
 
 	static Map<String, Derating> derating() {
 		Map<String, Derating> d = new LinkedHashMap<>();

@@ -25,6 +25,7 @@ import bulwark.lang.design.MainsSystem;
 import bulwark.lang.design.Minimum;
 import bulwark.lang.design.Policy;
 import bulwark.lang.design.PolicyEntry;
+import bulwark.lang.design.SampleDistribution;
 import bulwark.lang.design.SeverityChange;
 import bulwark.lang.design.Surge;
 import bulwark.lang.design.WaiverDemand;
@@ -52,6 +53,7 @@ public final class PolicyCompiler {
 		Optional<Double> minVolts = base.minimumHysteresisVolts();
 		Optional<Double> minOhms = base.minimumHysteresisOhms();
 		boolean needsJustification = base.waiverNeedsJustification(), needsName = base.waiverNeedsName();
+		String distribution = base.distribution();
 		Set<String> rules = RuleRegistry.all().stream().map(Rule::info).map(i -> i.id()).collect(Collectors.toSet());
 		for (PolicyEntry e : policy.getEntries()) {
 			if (e instanceof MainsSystem m && m.isNone()) {
@@ -79,13 +81,15 @@ public final class PolicyCompiler {
 				} else {
 					severities.put(s.getRule(), Severity.valueOf(s.getLevel().toUpperCase(Locale.ROOT)));
 				}
+			} else if (e instanceof SampleDistribution d) {
+				distribution = d.getKind();
 			} else if (e instanceof WaiverDemand w) {
 				needsJustification = w.getNeeds().contains("justification");
 				needsName = w.getNeeds().contains("name");
 			}
 		}
 		return new ReviewPolicy(policy.getTitle(), noMains ? List.of() : mains.isEmpty() ? base.mains() : mains, levels, surges, derating,
-				minVolts, minOhms, severities, needsJustification, needsName);
+				minVolts, minOhms, severities, needsJustification, needsName, distribution);
 	}
 
 	private static double si(bulwark.lang.design.Quantity q) {

@@ -10,12 +10,12 @@ import bulwark.lang.design.PartKind;
 /**
  * The team lead's review policy, resolved to SI values: which abuse to apply at the terminals, how much of
  * each rating a part may use, how much hysteresis a comparator must have, which rules are raised or lowered,
- * and what every waiver must carry. {@link DefaultPolicy} gives the values used when no policy is named.
+ * what every waiver must carry, and how Monte Carlo draws toleranced values ("uniform" or "normal"). {@link DefaultPolicy} gives the values used when no policy is named.
  */
 public record ReviewPolicy(String title, List<MainsSystem> mains, List<Double> levels, List<SurgeLevel> surges,
 		Map<String, Derating> derating, Optional<Double> minimumHysteresisVolts,
 		Optional<Double> minimumHysteresisOhms, Map<String, Severity> severities, boolean waiverNeedsJustification,
-		boolean waiverNeedsName) {
+		boolean waiverNeedsName, String distribution) {
 
 	public ReviewPolicy {
 		mains = List.copyOf(mains);

@@ -15,6 +15,7 @@ import bulwark.lang.design.Derating;
 import bulwark.lang.design.MainsSystem;
 import bulwark.lang.design.Minimum;
 import bulwark.lang.design.Quantity;
+import bulwark.lang.design.SampleDistribution;
 import bulwark.lang.design.SeverityChange;
 import bulwark.lang.design.Surge;
 import bulwark.lang.design.WaiverDemand;
@@ -36,6 +37,8 @@ public class PolicyValidator extends AbstractDeclarativeValidator {
 	public static final List<String> WAIVER_NEEDS = List.of("justification", "name", "nothing");
 	/** The minimums a policy may set, each in one of the units listed with it. */
 	public static final List<String> MINIMUMS = List.of("hysteresis");
+	/** How Monte Carlo draws toleranced values. */
+	public static final List<String> DISTRIBUTIONS = List.of("uniform", "normal");
 
 	@Override
 	protected List<EPackage> getEPackages() {
@@ -105,6 +108,14 @@ public class PolicyValidator extends AbstractDeclarativeValidator {
 				error("Waivers can be made to need: " + String.join(", ", WAIVER_NEEDS), w,
 						DesignPackage.Literals.WAIVER_DEMAND__NEEDS, i, IssueCodes.UNKNOWN_WORD);
 			}
+		}
+	}
+
+	@Check
+	public void distribution(SampleDistribution d) {
+		if (!DISTRIBUTIONS.contains(d.getKind())) {
+			error("A distribution is one of: " + String.join(", ", DISTRIBUTIONS), d,
+					DesignPackage.Literals.SAMPLE_DISTRIBUTION__KIND, IssueCodes.UNKNOWN_WORD);
 		}
 	}
 

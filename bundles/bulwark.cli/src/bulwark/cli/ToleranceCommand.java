@@ -1,0 +1,140 @@
+package bulwark.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+
+import bulwark.check.DesignChecker;
+import bulwark.check.Finding;
+import bulwark.check.LanguageFindings;
+import bulwark.check.Severity;
+import bulwark.check.load.LoadedDesign;
+import bulwark.check.policy.PolicyFiles;
+import bulwark.check.policy.ReviewPolicy;
+import bulwark.check.report.TextReport;
+import bulwark.check.tolerance.MonteCarlo;
+import bulwark.check.tolerance.Progress;
+import bulwark.check.tolerance.ToleranceAnalysis;
+import bulwark.check.report.ToleranceReport;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+@Command(name = "tolerance", description = {
+		"Tolerance analysis: every toleranced part at its limits (corners), then Monte Carlo samples, for the "
+				+ "function figures and each part's worst utilisation; the yield against each requirement.",
+		"Exit code 1 when a requirement's yield, or the share of samples keeping every part within its derated "
+				+ "ratings, is below 100 %; 2 when the design cannot be analysed." })
+final class ToleranceCommand implements Callable<Integer> {
+	enum Format {
+		text, json, html
+	}
+
+	@Parameters(paramLabel = "FILE", description = "The design file.")
+	Path file;
+
+	@Option(names = "--samples", defaultValue = "1000", paramLabel = "N", description = "Monte Carlo samples (default: ${DEFAULT-VALUE}; 0 for corners only).")
+	int samples;
+
+	@Option(names = "--seed", defaultValue = "1", paramLabel = "S", description = "Seed of the samples; the same seed gives the same run (default: ${DEFAULT-VALUE}).")
+	long seed;
+
+	@Option(names = "--format", defaultValue = "text", description = "Report format: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
+	Format format;
+
+	@Option(names = "--policy", paramLabel = "FILE", description = "The review policy (default: the one the design names, else the built-in one).")
+	Path policy;
+
+	@Spec
+	CommandSpec spec;
+
+	@Override
+	public Integer call() throws IOException {
+		PrintWriter out = spec.commandLine().getOut();
+		PrintWriter err = spec.commandLine().getErr();
+		if (samples < 0) {
+			err.println("bulwark: --samples takes 0 or more");
+			return ExitCodes.USAGE;
+		}
+		String text;
+		try {
+			text = Files.readString(file, StandardCharsets.UTF_8);
+		} catch (IOException e) {
+			err.println("bulwark: cannot read " + file + ": " + e.getMessage());
+			return ExitCodes.NOT_CHECKED;
+		}
+		LoadedDesign loaded = Language.loader().load(text, file.toString(), null);
+		List<Finding> errors = loaded.issues().stream().map(LanguageFindings::of)
+				.filter(f -> f.severity() == Severity.ERROR).toList();
+		if (!errors.isEmpty() || loaded.design() == null) {
+			errors.forEach(f -> err.println(TextReport.line(file.toString(), f)));
+			return ExitCodes.NOT_CHECKED;
+		}
+		DesignChecker checker = Language.checker();
+		ReviewPolicy chosen;
+		if (policy != null) {
+			PolicyFiles.Resolution r = checker.policies().read(policy);
+			if (r.policy().isEmpty()) {
+				r.problems().forEach(f -> err.println("bulwark: " + f.message()));
+				return ExitCodes.NOT_CHECKED;
+			}
+			chosen = r.policy().get();
+		} else {
+			DesignChecker.PolicyChoice c = checker.policyFor(loaded.design(), file.toString());
+			if (c.policy() == null) {
+				c.problems().forEach(f -> err.println(TextReport.line(file.toString(), f)));
+				return ExitCodes.NOT_CHECKED;
+			}
+			chosen = c.policy();
+		}
+		MonteCarlo.Distribution distribution = MonteCarlo.Distribution
+				.valueOf(chosen.distribution().toUpperCase(Locale.ROOT));
+		ToleranceAnalysis.Result result = ToleranceAnalysis.run(loaded.design(), chosen, samples, seed, distribution,
+				progress(err));
+		StringWriter report = new StringWriter();
+		switch (format) {
+		case json -> ToleranceReport.json(result, file.toString(), Safety.CAUTION, report);
+		case html -> ToleranceReport.html(result, file.toString(), Safety.CAUTION, report);
+		default -> ToleranceReport.text(result, file.toString(), Safety.CAUTION, report);
+		}
+		out.print(report);
+		out.flush();
+		if (!result.corners().failures().isEmpty() && result.corners().ranges().isEmpty()) {
+			return ExitCodes.NOT_CHECKED;
+		}
+		return result.yields().stream().anyMatch(y -> y.of() > 0 && y.met() < y.of()) ? ExitCodes.FINDINGS
+				: ExitCodes.CLEAN;
+	}
+
+	/** A progress line on standard error when it is a terminal: "tolerance: 120 of 1021". */
+	private static Progress progress(PrintWriter err) {
+		boolean terminal = System.console() != null;
+		return new Progress() {
+			private int shown = -1;
+
+			@Override
+			public synchronized void done(int finished, int total) {
+				int percent = (int) (100L * finished / Math.max(1, total));
+				if (terminal && percent != shown) {
+					shown = percent;
+					err.print("\rbulwark: tolerance " + finished + " of " + total + " (" + percent + " %)"
+							+ (finished == total ? "\n" : ""));
+					err.flush();
+				}
+			}
+
+			@Override
+			public boolean cancelled() {
+				return Thread.currentThread().isInterrupted();
+			}
+		};
+	}
+}
