@@ -1,16 +1,21 @@
 package bulwark.check.function;
 
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.Map;
 import java.util.List;
 import java.util.Optional;
 
 import bulwark.check.compile.CompiledDesign;
+import bulwark.engine.circuit.Diode;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.dc.DcResult;
 import bulwark.engine.dc.DcSolution;
 import bulwark.engine.dc.DcSolver;
 import bulwark.engine.dc.DcSweep;
 import bulwark.engine.dc.PreparedCircuit;
+import bulwark.engine.device.DiodeModel;
+import bulwark.engine.device.LedColour;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
 import bulwark.lang.design.Terminal;
@@ -28,6 +33,10 @@ public final class FunctionAnalysis {
 	static final double OPEN = 1e9;
 	static final int STEPS = 24;
 	static final double RELATIVE = 1e-3;
+	/** An LED under test is seen lit from this current [common practice: about 1 mA for an indicator LED]. */
+	public static final double LED_LIT = 1e-3;
+	/** Emission coefficient of an LED under test [memory: typical of visible LEDs, as DeviceModels]. */
+	static final double LED_EMISSION = 2;
 	/** Hours in a year of 365.25 days [sources.md]. */
 	public static final double HOURS_PER_YEAR = 8766;
 
@@ -73,7 +82,7 @@ public final class FunctionAnalysis {
 				}
 			}
 			pairs.add(new PairFigures(pair[0].getName(), pair[1].getName(), onWhenShorted, risingOhms, fallingOhms,
-					testCurrent, openVolts, shortedBattery));
+					testCurrent, openVolts, shortedBattery, ledsLit(solver, design, a, b, openVolts)));
 		}
 		Double standby = batteries.isEmpty() ? null : discharge(batteries, open);
 		Double life = null;
@@ -85,7 +94,37 @@ public final class FunctionAnalysis {
 				life = life == null ? hours : Math.min(life, hours);
 			}
 		}
-		return new FunctionFigures(indicator.map(IndicatorState::part).orElse(null), pairs, standby, life, problems);
+		Map<String, SwitchingSweep.Outcome> comparators = new LinkedHashMap<>();
+		for (Part p : design.parts().values()) {
+			if (p.getKind() == PartKind.COMPARATOR) {
+				comparators.put(p.getName(), SwitchingSweep.of(design, p));
+			}
+		}
+		return new FunctionFigures(indicator.map(IndicatorState::part).orElse(null), pairs, standby, life, comparators,
+				problems);
+	}
+
+	/**
+	 * The colours of LED under test the terminals light: an LED of each colour, at the highest forward voltage
+	 * of its range (the hardest to light), across the pair the way the open-circuit voltage forward-biases it,
+	 * lit from {@link #LED_LIT}.
+	 */
+	private static List<String> ledsLit(DcSolver solver, CompiledDesign design, int a, int b, double openVolts) {
+		List<String> lit = new ArrayList<>();
+		if (Math.abs(openVolts) < 1e-3) {
+			return lit;
+		}
+		int anode = openVolts > 0 ? a : b, cathode = openVolts > 0 ? b : a;
+		String name = "LED under test";
+		PreparedCircuit prepared = null;
+		for (LedColour colour : LedColour.values()) {
+			Diode led = new Diode(name, anode, cathode, anode, DiodeModel.led(colour.highest(), LED_EMISSION));
+			prepared = prepared == null ? DcSolver.prepare(design.circuit().plus(List.of(led))) : prepared.with(name, led);
+			if (solver.solve(prepared) instanceof DcSolution s && s.device(name).current() >= LED_LIT) {
+				lit.add(colour.name().toLowerCase(java.util.Locale.ROOT));
+			}
+		}
+		return lit;
 	}
 
 	/** Current the batteries deliver (out of their positive pins). */

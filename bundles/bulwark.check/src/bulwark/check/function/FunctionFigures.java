@@ -1,6 +1,9 @@
 package bulwark.check.function;
 
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 
 /**
  * The input's function figures: per measuring pair (thresholds, test current, open-circuit voltage), the
@@ -9,11 +12,12 @@ import java.util.List;
  * computed, with the reason.
  */
 public record FunctionFigures(String indicator, List<PairFigures> pairs, Double standbyAmps, Double batteryLifeHours,
-		List<String> problems) {
+		Map<String, SwitchingSweep.Outcome> comparators, List<String> problems) {
 	public FunctionFigures {
 		pairs = List.copyOf(pairs);
+		comparators = Collections.unmodifiableMap(new LinkedHashMap<>(comparators));
 		problems = List.copyOf(problems);
 	}
 
-	public static final FunctionFigures NONE = new FunctionFigures(null, List.of(), null, null, List.of());
+	public static final FunctionFigures NONE = new FunctionFigures(null, List.of(), null, null, Map.of(), List.of());
 }

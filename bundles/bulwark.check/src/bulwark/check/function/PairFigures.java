@@ -1,13 +1,20 @@
 package bulwark.check.function;
 
+import java.util.List;
+
 /**
  * What an input does across one pair of terminals, a resistance between them swept from a short to an open
  * circuit: whether its indicator is on with the terminals shorted, where it switches as the resistance
  * rises and as it falls (null when it does not switch), the current into a short, the open-circuit voltage,
- * and the battery current with the terminals shorted (null without a battery).
+ * the battery current with the terminals shorted (null without a battery), and the colours of LED under test
+ * it lights (from {@link FunctionAnalysis#LED_LIT} with the highest forward voltage of each colour's range).
  */
 public record PairFigures(String from, String to, boolean onWhenShorted, Double risingOhms, Double fallingOhms,
-		double testCurrentAmps, double openVolts, Double shortedBatteryAmps) {
+		double testCurrentAmps, double openVolts, Double shortedBatteryAmps, List<String> lightsLeds) {
+
+	public PairFigures {
+		lightsLeds = List.copyOf(lightsLeds);
+	}
 
 	/**
 	 * The threshold resistance of a continuity input: where the indicator comes on as the resistance falls

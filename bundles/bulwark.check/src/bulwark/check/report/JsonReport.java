@@ -123,6 +123,21 @@ public final class JsonReport {
 			number(w.name("test_current"), p.testCurrentAmps());
 			number(w.name("open_voltage"), p.openVolts());
 			number(w.name("shorted_battery_current"), p.shortedBatteryAmps());
+			w.name("lights_leds").beginArray();
+			for (String colour : p.lightsLeds()) {
+				w.value(colour);
+			}
+			w.endArray();
+			w.endObject();
+		}
+		w.endArray();
+		w.name("comparators").beginArray();
+		for (var c : f.comparators().entrySet()) {
+			w.beginObject().name("part").value(c.getKey());
+			var result = c.getValue().result();
+			number(w.name("hysteresis_input"), result.map(x -> x.inputStepVolts()).orElse(null));
+			number(w.name("hysteresis_terminals"), result.map(x -> x.hysteresisOhms()).orElse(null));
+			w.name("between").value(result.map(x -> x.from() + "–" + x.to()).orElse(null));
 			w.endObject();
 		}
 		w.endArray();

@@ -51,7 +51,9 @@ public final class HysteresisRule implements Rule {
 						+ " a slow or noisy input crosses the threshold", null, null, null));
 				continue;
 			}
-			SwitchingSweep.Outcome o = SwitchingSweep.of(context.design(), part);
+			SwitchingSweep.Outcome o = context.function().comparators().containsKey(part.getName())
+					? context.function().comparators().get(part.getName())
+					: SwitchingSweep.of(context.design(), part);
 			if (o.failure() != null) {
 				findings.accept(finding(part, "the hysteresis of " + part.getName() + " could not be computed: "
 						+ o.failure(), null, null, null));

@@ -139,12 +139,8 @@ public final class RequirementRule implements Rule {
 	}
 
 	private static Optional<Double> comparatorStep(CheckContext context) {
-		for (Part p : context.design().parts().values()) {
-			if (p.getKind() == PartKind.COMPARATOR) {
-				return SwitchingSweep.of(context.design(), p).result().map(SwitchingSweep.Result::inputStepVolts);
-			}
-		}
-		return Optional.empty();
+		return context.function().comparators().values().stream().map(SwitchingSweep.Outcome::result)
+				.flatMap(Optional::stream).map(SwitchingSweep.Result::inputStepVolts).findFirst();
 	}
 
 	private static String show(double value, String unit) {
