@@ -7,7 +7,7 @@ import picocli.CommandLine.Option;
 /** Options shared by the commands that check designs. */
 public final class CheckOptions {
 	public enum Format {
-		text, json, junit, html
+		text, json, sarif, junit, html
 	}
 
 	public enum FailOn {

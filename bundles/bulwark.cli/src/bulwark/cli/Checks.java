@@ -25,6 +25,7 @@ import bulwark.check.policy.PolicyFiles;
 import bulwark.check.report.HtmlReport;
 import bulwark.check.report.JUnitReport;
 import bulwark.check.report.JsonReport;
+import bulwark.check.report.SarifReport;
 import bulwark.check.report.TextReport;
 
 /** Checks a list of design files and writes the report; shared by the check and demo commands. */
@@ -176,6 +177,9 @@ final class Checks {
 			break;
 		case html:
 			HtmlReport.write(results, Version.get(), Safety.CAUTION, w);
+			break;
+		case sarif:
+			SarifReport.write(results, Version.get(), Safety.CAUTION, ExplainCommand::page, w);
 			break;
 		case junit:
 			try {

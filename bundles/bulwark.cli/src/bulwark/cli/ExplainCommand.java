@@ -38,6 +38,16 @@ final class ExplainCommand implements Callable<Integer> {
 		return ExitCodes.CLEAN;
 	}
 
+	/** The explanation page of a rule (Markdown), or null when there is none. */
+	static String page(String rule) {
+		Path file = Path.of(System.getProperty("bulwark.home", "."), "docs", "rules", rule + ".md");
+		try {
+			return Files.isRegularFile(file) ? Files.readString(file, StandardCharsets.UTF_8) : null;
+		} catch (java.io.IOException e) {
+			return null;
+		}
+	}
+
 	/** Markdown for a terminal: headings underlined, code blocks indented, emphasis marks dropped. */
 	static String render(String markdown) {
 		StringBuilder text = new StringBuilder();

@@ -1,0 +1,163 @@
+package bulwark.check.report;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.nio.file.Path;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.function.Function;
+
+import com.google.gson.stream.JsonWriter;
+
+import bulwark.check.DesignResult;
+import bulwark.check.Finding;
+import bulwark.check.Severity;
+import bulwark.check.Status;
+import bulwark.check.rules.Rule;
+import bulwark.check.rules.RuleInfo;
+import bulwark.check.rules.RuleRegistry;
+
+/**
+ * Findings as a SARIF 2.1.0 log (OASIS Static Analysis Results Interchange Format): one run, the rules with
+ * their help text, one result per finding located at the part's declaration, waived findings as
+ * suppressions with their justification. Bulwark's own figures (concern, part, case, value, limit, unit)
+ * ride in each result's property bag. Strings are written by a JSON writer, so every value from a design is
+ * escaped.
+ */
+public final class SarifReport {
+	/** Findings the check itself makes besides the rules, described as rules too. */
+	private static final Map<String, String> OWN = Map.of("syntax", "the design text does not parse", "structure",
+			"the text parses but is not a valid design", "solver", "a case could not be solved", "file",
+			"the file could not be read or is refused", "policy", "the review policy cannot be used", "waiver",
+			"a waiver is stale, unknown or lacks what the policy needs");
+
+	private SarifReport() {
+	}
+
+	/**
+	 * @param help the explanation of a rule by its ID (the docs/rules page), or null when there is none
+	 */
+	public static void write(List<DesignResult> results, String version, String caution, Function<String, String> help,
+			Writer out) throws IOException {
+		JsonWriter w = new JsonWriter(out);
+		w.setIndent("  ");
+		w.beginObject();
+		w.name("version").value("2.1.0");
+		w.name("runs").beginArray().beginObject();
+		Map<String, Integer> index = tool(w, version, help);
+		w.name("invocations").beginArray().beginObject();
+		w.name("executionSuccessful").value(results.stream().noneMatch(r -> r.status() == Status.ERROR));
+		w.name("toolExecutionNotifications").beginArray();
+		w.beginObject().name("level").value("note").name("message").beginObject().name("text").value(caution).endObject()
+				.endObject();
+		w.endArray();
+		w.endObject().endArray();
+		w.name("results").beginArray();
+		for (DesignResult r : results) {
+			for (Finding f : r.findings()) {
+				result(w, r, f, index);
+			}
+		}
+		w.endArray();
+		w.endObject().endArray();
+		w.endObject();
+		w.flush();
+		out.write('\n');
+		out.flush();
+	}
+
+	private static Map<String, Integer> tool(JsonWriter w, String version, Function<String, String> help)
+			throws IOException {
+		Map<String, Integer> index = new HashMap<>();
+		w.name("tool").beginObject().name("driver").beginObject();
+		w.name("name").value("Bulwark");
+		w.name("version").value(version);
+		w.name("rules").beginArray();
+		for (Rule rule : RuleRegistry.all()) {
+			RuleInfo info = rule.info();
+			index.put(info.id(), index.size());
+			descriptor(w, info.id(), info.summary(), level(info.severity()), info.concern().id(), help.apply(info.id()));
+		}
+		for (Map.Entry<String, String> own : new java.util.TreeMap<>(OWN).entrySet()) {
+			index.put(own.getKey(), index.size());
+			descriptor(w, own.getKey(), own.getValue(), "error", null, null);
+		}
+		w.endArray();
+		w.endObject().endObject();
+		return index;
+	}
+
+	private static void descriptor(JsonWriter w, String id, String summary, String level, String concern, String help)
+			throws IOException {
+		w.beginObject();
+		w.name("id").value(id);
+		w.name("shortDescription").beginObject().name("text").value(summary).endObject();
+		if (help != null) {
+			w.name("help").beginObject().name("text").value(help).name("markdown").value(help).endObject();
+		}
+		w.name("defaultConfiguration").beginObject().name("level").value(level).endObject();
+		if (concern != null) {
+			w.name("properties").beginObject().name("concern").value(concern).endObject();
+		}
+		w.endObject();
+	}
+
+	private static void result(JsonWriter w, DesignResult r, Finding f, Map<String, Integer> index) throws IOException {
+		w.beginObject();
+		w.name("ruleId").value(f.rule());
+		Integer i = index.get(f.rule());
+		if (i != null) {
+			w.name("ruleIndex").value(i);
+		}
+		w.name("level").value(level(f.severity()));
+		w.name("message").beginObject().name("text").value(f.message()).endObject();
+		w.name("locations").beginArray().beginObject().name("physicalLocation").beginObject();
+		w.name("artifactLocation").beginObject().name("uri").value(uri(r.file())).endObject();
+		if (f.location().line() > 0) {
+			w.name("region").beginObject().name("startLine").value(f.location().line());
+			if (f.location().column() > 0) {
+				w.name("startColumn").value(f.location().column());
+			}
+			w.endObject();
+		}
+		w.endObject().endObject().endArray();
+		if (f.waived()) {
+			w.name("suppressions").beginArray().beginObject().name("kind").value("inSource").name("justification")
+					.value(f.message()).endObject().endArray();
+		}
+		w.name("properties").beginObject();
+		w.name("concern").value(f.concern().id());
+		if (f.part() != null) {
+			w.name("part").value(f.part());
+		}
+		if (f.caseName() != null) {
+			w.name("case").value(f.caseName());
+		}
+		if (f.value() != null && Double.isFinite(f.value())) {
+			w.name("value").value(f.value());
+		}
+		if (f.limit() != null && Double.isFinite(f.limit())) {
+			w.name("limit").value(f.limit());
+		}
+		if (f.unit() != null) {
+			w.name("unit").value(f.unit());
+		}
+		w.endObject();
+		w.endObject();
+	}
+
+	/** A relative path as written (forward slashes), as SARIF's artifact URIs are. */
+	static String uri(String file) {
+		Path p = Path.of(file);
+		return (p.isAbsolute() ? p.toUri().toString() : file.replace('\\', '/')).replace(" ", "%20");
+	}
+
+	private static String level(Severity s) {
+		return switch (s) {
+		case ERROR -> "error";
+		case WARNING -> "warning";
+		default -> "note";
+		};
+	}
+}

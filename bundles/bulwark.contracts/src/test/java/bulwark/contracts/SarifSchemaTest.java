@@ -1,0 +1,83 @@
+package bulwark.contracts;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.InputStream;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Set;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.networknt.schema.JsonSchema;
+import com.networknt.schema.JsonSchemaFactory;
+import com.networknt.schema.SpecVersion;
+import com.networknt.schema.ValidationMessage;
+
+import bulwark.cli.BulwarkCommand;
+
+/** `bulwark check --format sarif` writes logs that the published SARIF 2.1.0 schema (OASIS) accepts. */
+class SarifSchemaTest {
+	private static final Path ROOT = Path.of(System.getProperty("bulwark.root", "../..")).toAbsolutePath().normalize();
+	private static final ObjectMapper JSON = new ObjectMapper();
+
+	private static JsonSchema schema() throws Exception {
+		try (InputStream in = SarifSchemaTest.class.getResourceAsStream("/schema/sarif-schema-2.1.0.json")) {
+			return JsonSchemaFactory.getInstance(SpecVersion.VersionFlag.V7).getSchema(in);
+		}
+	}
+
+	private static String sarif(String... paths) {
+		System.setProperty("bulwark.home", ROOT.toString());
+		StringWriter out = new StringWriter(), err = new StringWriter();
+		String[] args = new String[paths.length + 3];
+		args[0] = "check";
+		args[1] = "--format";
+		args[2] = "sarif";
+		System.arraycopy(paths, 0, args, 3, paths.length);
+		BulwarkCommand.run(args, new PrintWriter(out), new PrintWriter(err));
+		return out.toString();
+	}
+
+	@Test
+	void theSchemaRefusesALogWithoutItsTool() throws Exception {
+		// the validator is live: a run must name its tool (SARIF 2.1.0 §3.14.6)
+		assertTrue(!schema().validate(JSON.readTree("{\"version\": \"2.1.0\", \"runs\": [{\"results\": []}]}")).isEmpty());
+	}
+
+	@Test
+	void theDemoDesignsGiveValidLogs() throws Exception {
+		String log = sarif(ROOT.resolve("examples").toString());
+		JsonNode node = JSON.readTree(log);
+		Set<ValidationMessage> problems = schema().validate(node);
+		assertTrue(problems.isEmpty(), problems.toString());
+		JsonNode run = node.get("runs").get(0);
+		assertEquals("Bulwark", run.get("tool").get("driver").get("name").asText());
+		JsonNode first = run.get("results").get(0);
+		assertTrue(first.get("locations").get(0).get("physicalLocation").get("region").get("startLine").asInt() > 0);
+		// every rule carries its explanation as help text
+		for (JsonNode rule : run.get("tool").get("driver").get("rules")) {
+			if (!Set.of("file", "policy", "solver", "structure", "syntax", "waiver").contains(rule.get("id").asText())) {
+				assertTrue(rule.get("help").get("markdown").asText().contains("## How it is computed"), rule.toString());
+			}
+		}
+	}
+
+	@Test
+	void hostileTextAndUnreadableFilesStillGiveValidLogs(@TempDir Path dir) throws Exception {
+		Path hostile = dir.resolve("hostile \"quote\".bulwark");
+		Files.writeString(hostile, "design \"</script>\\\"\\u0000\"\nreference net gnd\nresistor R1 (a: gnd, b: x) { }\n");
+		Path binary = dir.resolve("binary.bulwark");
+		Files.write(binary, new byte[] { 0, 1, 2, (byte) 0xff });
+		String log = sarif(hostile.toString(), binary.toString());
+		Set<ValidationMessage> problems = schema().validate(JSON.readTree(log));
+		assertTrue(problems.isEmpty(), problems + "\n" + log);
+		assertTrue(JSON.readTree(log).get("runs").get(0).get("invocations").get(0).get("executionSuccessful").asBoolean() == false);
+	}
+}
