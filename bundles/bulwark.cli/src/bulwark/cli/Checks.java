@@ -101,7 +101,7 @@ final class Checks {
 	 * A progress line on standard error for long runs at a terminal ("checked 12 of 300"); nothing when the
 	 * output goes to a file or a pipe, or for a handful of designs.
 	 */
-	private static Runnable progress(int total, PrintWriter err) {
+	static Runnable progress(int total, PrintWriter err) {
 		if (System.console() == null || total < 10) {
 			return () -> {
 			};
@@ -133,7 +133,7 @@ final class Checks {
 	}
 
 	/** Checks the files on a pool of threads (each load has its own resource set); results in file order. */
-	private static List<DesignResult> checkAll(DesignChecker base, List<Path> files, int jobs, Runnable progress)
+	static List<DesignResult> checkAll(DesignChecker base, List<Path> files, int jobs, Runnable progress)
 			throws IOException {
 		java.util.function.Function<Path, DesignResult> checker = f -> {
 			DesignResult r = base.check(f);
@@ -195,7 +195,7 @@ final class Checks {
 	}
 
 	/** Writes beside the target, then moves into place, so a reader never sees half a report. */
-	private static void writeAtomically(Path target, String content) throws IOException {
+	static void writeAtomically(Path target, String content) throws IOException {
 		Path abs = target.toAbsolutePath();
 		Path dir = abs.getParent();
 		Files.createDirectories(dir);

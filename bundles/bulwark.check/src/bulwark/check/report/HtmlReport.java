@@ -46,9 +46,9 @@ public final class HtmlReport {
 		if (r.findings().isEmpty()) {
 			w.write("<p>No findings.</p>\n");
 		} else {
-			w.write("<table><tr><th>line</th><th>severity</th><th>rule</th><th>part</th><th>case</th><th>message</th></tr>\n");
+			w.write("<table><tr><th>line:col</th><th>severity</th><th>rule</th><th>part</th><th>case</th><th>message</th></tr>\n");
 			for (Finding f : r.findings()) {
-				w.write("<tr" + (f.waived() ? " class=\"waived\"" : "") + "><td>" + f.location().line() + "</td><td>"
+				w.write("<tr" + (f.waived() ? " class=\"waived\"" : "") + "><td>" + f.location().line() + ":" + f.location().column() + "</td><td>"
 						+ f.severity().id() + (f.waived() ? " (waived)" : "") + "</td><td>" + escape(f.rule()) + "</td><td>"
 						+ escape(f.part() == null ? "" : f.part()) + "</td><td>" + escape(f.caseName() == null ? "" : f.caseName())
 						+ "</td><td>" + escape(f.message()) + "</td></tr>\n");

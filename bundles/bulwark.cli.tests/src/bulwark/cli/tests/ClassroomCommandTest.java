@@ -1,0 +1,70 @@
+package bulwark.cli.tests;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** `bulwark classroom DIR --policy FILE --out DIR`: a page per student, a summary, the class folder untouched. */
+class ClassroomCommandTest {
+	private static final String GOOD = """
+			design "=SUM(A1), \\"divider\\""
+			reference net gnd
+			net a
+			source V1 (plus: a, minus: gnd) { voltage 5 V }
+			resistor R1 (a: a, b: gnd) { value 1 kΩ package 0805 rated power 125 mW }
+			""";
+
+	private static Path classFolder(Path dir) throws Exception {
+		Path students = Files.createDirectories(dir.resolve("class/group-b"));
+		Files.writeString(dir.resolve("class/ana.bulwark"), GOOD);
+		Files.writeString(dir.resolve("class/ben.bulwark"), GOOD.replace("1 kΩ", "100 Ω")); // 250 mW in 125 mW
+		Files.writeString(dir.resolve("class/cho.bulwark"), "design \"cho\"\nreference net gnd\nresistor R1 (a gnd) { }\n");
+		Files.writeString(students.resolve("dev.bulwark"), GOOD);
+		Files.writeString(dir.resolve("exercise.bulwark-policy"), "policy \"exercise 3\"\n  mains none\n");
+		return dir.resolve("class");
+	}
+
+	@Test
+	void aPagePerDesignAndAClassSummary(@TempDir Path dir) throws Exception {
+		Path students = classFolder(dir);
+		Path out = dir.resolve("feedback");
+		CliRun run = CliRun.of("classroom", students.toString(), "--policy", dir.resolve("exercise.bulwark-policy").toString(),
+				"--out", out.toString());
+		assertEquals(0, run.exitCode(), run.err());
+		try (var pages = Files.list(out)) {
+			assertEquals(List.of("ana.html", "ben.html", "cho.html", "group-b__dev.html", "summary.csv", "summary.html"),
+					pages.map(p -> p.getFileName().toString()).sorted().toList());
+		}
+		// the submission that does not parse still gets its page, with the error located
+		String cho = Files.readString(out.resolve("cho.html"));
+		assertTrue(cho.contains("<td>3:16</td><td>error</td><td>syntax</td>"), cho);
+		List<String> csv = Files.readAllLines(out.resolve("summary.csv"));
+		assertEquals(5, csv.size());
+		assertTrue(csv.get(1).startsWith("ana.bulwark,\"'=SUM(A1), \"\"divider\"\"\",pass,0,"), csv.get(1));
+		assertTrue(csv.get(2).startsWith("ben.bulwark,") && csv.get(2).contains(",fail,1,"), csv.get(2));
+		assertTrue(csv.get(3).contains(",error,"), csv.get(3));
+		String summary = Files.readString(out.resolve("summary.html"));
+		assertTrue(summary.contains("<a href=\"group-b__dev.html\">") && summary.contains("exercise 3")
+				&& summary.contains("IEC 61010-1"), summary);
+		try (var left = Files.walk(students)) {
+			assertEquals(6, left.count(), "nothing written in the class's folder"); // 2 folders, 4 designs
+		}
+	}
+
+	@Test
+	void refusesToWriteInsideTheClassFolder(@TempDir Path dir) throws Exception {
+		Path students = classFolder(dir);
+		CliRun run = CliRun.of("classroom", students.toString(), "--policy", dir.resolve("exercise.bulwark-policy").toString(),
+				"--out", students.resolve("feedback").toString());
+		assertEquals(3, run.exitCode());
+		assertTrue(run.err().contains("outside the class's folder"), run.err());
+		assertFalse(Files.exists(students.resolve("feedback")));
+	}
+}

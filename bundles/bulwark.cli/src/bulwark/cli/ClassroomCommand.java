@@ -1,0 +1,116 @@
+package bulwark.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import java.util.concurrent.Callable;
+
+import bulwark.check.Concern;
+import bulwark.check.DesignChecker;
+import bulwark.check.DesignResult;
+import bulwark.check.Finding;
+import bulwark.check.Severity;
+import bulwark.check.policy.PolicyFiles;
+import bulwark.check.report.HtmlReport;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+@Command(name = "classroom", description = {
+		"Checks every design in a class's folder under one policy and writes one feedback page per design and a "
+				+ "class summary (summary.html, summary.csv) into the output folder.",
+		"A submission that does not parse gets its located errors on its page; the batch goes on. Nothing is "
+				+ "ever written inside the class's folder." })
+final class ClassroomCommand implements Callable<Integer> {
+	@Parameters(paramLabel = "DIR", description = "The folder of the students' designs.")
+	Path dir;
+
+	@Option(names = "--policy", required = true, paramLabel = "FILE", description = "The review policy of the exercise.")
+	Path policy;
+
+	@Option(names = "--out", required = true, paramLabel = "DIR", description = "Where the pages go (outside DIR).")
+	Path out;
+
+	@Option(names = "--jobs", defaultValue = "0", paramLabel = "N", description = "Designs checked at once (default: one per processor).")
+	int jobs;
+
+	@Spec
+	CommandSpec spec;
+
+	@Override
+	public Integer call() throws IOException {
+		PrintWriter err = spec.commandLine().getErr();
+		if (!Files.isDirectory(dir)) {
+			err.println("bulwark: " + dir + " is not a folder");
+			return ExitCodes.USAGE;
+		}
+		Path classFolder = dir.toRealPath();
+		Path target = out.toAbsolutePath().normalize();
+		Path existing = target;
+		while (existing != null && !Files.exists(existing)) {
+			existing = existing.getParent();
+		}
+		if (existing != null && (existing.toRealPath().startsWith(classFolder) || target.startsWith(classFolder))) {
+			err.println("bulwark: --out must be outside the class's folder " + classFolder + "; nothing is written there");
+			return ExitCodes.USAGE;
+		}
+		DesignChecker base = Language.checker();
+		PolicyFiles.Resolution r = base.policies().read(policy);
+		if (r.policy().isEmpty()) {
+			r.problems().forEach(f -> err.println("bulwark: " + f.message()));
+			return ExitCodes.NOT_CHECKED;
+		}
+		List<Path> files = DesignFiles.collect(List.of(dir));
+		if (files.isEmpty()) {
+			err.println("bulwark: no design files in " + dir);
+			return ExitCodes.USAGE;
+		}
+		List<DesignResult> results = Checks.checkAll(Language.checker(r.policy().get()), files, jobs,
+				Checks.progress(files.size(), err));
+		Files.createDirectories(target);
+		List<String> pages = new ArrayList<>();
+		for (int i = 0; i < files.size(); i++) {
+			String page = pageName(dir.relativize(files.get(i)));
+			pages.add(page);
+			StringWriter html = new StringWriter();
+			HtmlReport.write(List.of(results.get(i)), Version.get(), Safety.CAUTION, html);
+			Checks.writeAtomically(target.resolve(page), html.toString());
+		}
+		Checks.writeAtomically(target.resolve("summary.csv"), ClassSummary.csv(dir, files, results));
+		Checks.writeAtomically(target.resolve("summary.html"),
+				ClassSummary.html(dir, files, results, pages, r.policy().get().title()));
+		err.printf("bulwark: %d design(s); feedback in %s%n", files.size(), target.resolve("summary.html"));
+		err.flush();
+		return ExitCodes.CLEAN;
+	}
+
+	/** "group-a/kim.bulwark" → "group-a__kim.html": one flat folder of pages, one per design. */
+	static String pageName(Path relative) {
+		String name = relative.toString().replace('\\', '/').replaceAll("\\.bulwark$", "");
+		return name.replace("/", "__").replaceAll("[^A-Za-z0-9._-]", "_") + ".html";
+	}
+
+	/** Unwaived findings by concern and severity, for the summary. */
+	static Map<String, Integer> counts(DesignResult r) {
+		Map<String, Integer> counts = new TreeMap<>();
+		for (Finding f : r.findings()) {
+			if (!f.waived()) {
+				counts.merge(f.severity().id() + " " + f.concern().id(), 1, Integer::sum);
+			}
+		}
+		return counts;
+	}
+
+	static long missedRequirements(DesignResult r) {
+		return r.findings().stream()
+				.filter(f -> f.concern() == Concern.REQUIREMENT && f.severity() == Severity.ERROR && !f.waived()).count();
+	}
+}
