@@ -32,6 +32,8 @@ public final class FunctionAnalysis {
 	/** An open circuit across the terminals, Ω. */
 	static final double OPEN = 1e9;
 	static final int STEPS = 24;
+	/** Points per decade of the sweeps kept for plots. */
+	static final int CURVE_POINTS = 4;
 	static final double RELATIVE = 1e-3;
 	/** An LED under test is seen lit from this current [common practice: about 1 mA for an indicator LED]. */
 	public static final double LED_LIT = 1e-3;
@@ -65,6 +67,7 @@ public final class FunctionAnalysis {
 			double openVolts = open.voltage(a) - open.voltage(b);
 			Double shortedBattery = batteries.isEmpty() ? null : discharge(batteries, s);
 			Double risingOhms = null, fallingOhms = null;
+			List<SweepPoint> risingCurve = List.of(), fallingCurve = List.of();
 			boolean onWhenShorted = indicator.isPresent() && indicator.get().on(s);
 			if (indicator.isPresent()) {
 				DcResult opened = solver.solve(prepared);
@@ -78,11 +81,16 @@ public final class FunctionAnalysis {
 					} else {
 						risingOhms = rising.value().orElse(null);
 						fallingOhms = falling.value().orElse(null);
+						if (pairs.stream().allMatch(p -> p.rising().isEmpty())) {
+							risingCurve = curve(sweep, name, indicator.get(), true);
+							fallingCurve = curve(sweep, name, indicator.get(), false);
+						}
 					}
 				}
 			}
 			pairs.add(new PairFigures(pair[0].getName(), pair[1].getName(), onWhenShorted, risingOhms, fallingOhms,
-					testCurrent, openVolts, shortedBattery, ledsLit(solver, design, a, b, openVolts)));
+					testCurrent, openVolts, shortedBattery, ledsLit(solver, design, a, b, openVolts), risingCurve,
+					fallingCurve));
 		}
 		Double standby = batteries.isEmpty() ? null : discharge(batteries, open);
 		Double life = null;
@@ -102,6 +110,23 @@ public final class FunctionAnalysis {
 		}
 		return new FunctionFigures(indicator.map(IndicatorState::part).orElse(null), pairs, standby, life, comparators,
 				problems);
+	}
+
+	/** A plot's worth of the sweep in one direction: {@link #CURVE_POINTS} points per decade, continuing. */
+	private static List<SweepPoint> curve(DcSweep sweep, String name, IndicatorState indicator, boolean rising) {
+		int n = (int) Math.round(Math.log10(OPEN / SHORT) * CURVE_POINTS);
+		double[] values = new double[n + 1];
+		for (int i = 0; i <= n; i++) {
+			double x = Math.log10(SHORT) + (Math.log10(OPEN) - Math.log10(SHORT)) * i / n;
+			values[rising ? i : n - i] = Math.pow(10, x);
+		}
+		List<SweepPoint> points = new ArrayList<>();
+		for (DcSweep.Point p : sweep.run(values)) {
+			if (p.result() instanceof DcSolution s) {
+				points.add(new SweepPoint(p.value(), Math.abs(s.device(name).current()), indicator.on(s)));
+			}
+		}
+		return points;
 	}
 
 	/**

@@ -7,13 +7,17 @@ import java.util.List;
  * circuit: whether its indicator is on with the terminals shorted, where it switches as the resistance
  * rises and as it falls (null when it does not switch), the current into a short, the open-circuit voltage,
  * the battery current with the terminals shorted (null without a battery), and the colours of LED under test
- * it lights (from {@link FunctionAnalysis#LED_LIT} with the highest forward voltage of each colour's range).
+ * it lights (from {@link FunctionAnalysis#LED_LIT} with the highest forward voltage of each colour's range),
+ * and — for the first pair whose indicator switches — the sweeps themselves, for plots (empty otherwise).
  */
 public record PairFigures(String from, String to, boolean onWhenShorted, Double risingOhms, Double fallingOhms,
-		double testCurrentAmps, double openVolts, Double shortedBatteryAmps, List<String> lightsLeds) {
+		double testCurrentAmps, double openVolts, Double shortedBatteryAmps, List<String> lightsLeds,
+		List<SweepPoint> rising, List<SweepPoint> falling) {
 
 	public PairFigures {
 		lightsLeds = List.copyOf(lightsLeds);
+		rising = List.copyOf(rising);
+		falling = List.copyOf(falling);
 	}
 
 	/**

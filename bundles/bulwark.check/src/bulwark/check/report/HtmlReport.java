@@ -11,6 +11,8 @@ import bulwark.check.CaseResult;
 import bulwark.check.DesignResult;
 import bulwark.check.Finding;
 import bulwark.check.PartStress;
+import bulwark.check.function.FunctionFigures;
+import bulwark.check.function.PairFigures;
 
 /**
  * One self-contained HTML page per run (no script, no link, nothing fetched): per design its status, the
@@ -42,7 +44,8 @@ public final class HtmlReport {
 
 	private static void design(DesignResult r, Writer w) throws IOException {
 		w.write("<h2>" + escape(r.title() == null ? r.file() : r.title()) + " <span class=\"" + r.status().id() + "\">"
-				+ r.status().id() + "</span></h2>\n<p>" + escape(r.file()) + "</p>\n");
+				+ r.status().id() + "</span></h2>\n<p>" + escape(r.file())
+				+ (r.policy() == null ? "" : " — review policy '" + escape(r.policy()) + "'") + "</p>\n");
 		if (r.findings().isEmpty()) {
 			w.write("<p>No findings.</p>\n");
 		} else {
@@ -69,6 +72,7 @@ public final class HtmlReport {
 			w.write("<h3>Worst utilisation of each rated part</h3>\n");
 			w.write(bars(worst, worstCase));
 		}
+		function(r.function(), w);
 		if (!r.cases().isEmpty()) {
 			w.write("<h3>Cases</h3>\n<ul>");
 			for (CaseResult c : r.cases()) {
@@ -77,6 +81,38 @@ public final class HtmlReport {
 			}
 			w.write("</ul>\n");
 		}
+	}
+
+	private static void function(FunctionFigures f, Writer w) throws IOException {
+		if (f.pairs().isEmpty() && f.standbyAmps() == null) {
+			return;
+		}
+		w.write("<h3>Function at the terminals</h3>\n<table><tr><th>terminals</th><th>threshold</th><th>hysteresis</th>"
+				+ "<th>test current</th><th>open-circuit voltage</th><th>lights LEDs</th></tr>\n");
+		for (PairFigures p : f.pairs()) {
+			w.write("<tr><td>" + escape(p.from() + "–" + p.to()) + "</td><td>" + show(p.thresholdOhms(), "Ω") + "</td><td>"
+					+ show(p.hysteresisOhms(), "Ω") + "</td><td>" + show(p.testCurrentAmps(), "A") + "</td><td>"
+					+ show(p.openVolts(), "V") + "</td><td>" + escape(String.join(", ", p.lightsLeds())) + "</td></tr>\n");
+		}
+		w.write("</table>\n");
+		if (f.standbyAmps() != null) {
+			w.write("<p>Standby current " + show(f.standbyAmps(), "A") + (f.batteryLifeHours() == null ? ""
+					: Double.isInfinite(f.batteryLifeHours()) ? "; the battery is not drawn on"
+							: String.format(Locale.ROOT, "; battery life %.0f h (%.1f years)", f.batteryLifeHours(),
+									f.batteryLifeHours() / 8766))
+					+ ".</p>\n");
+		}
+		for (PairFigures p : f.pairs()) {
+			if (!p.rising().isEmpty()) {
+				w.write("<h4>Threshold sweep, " + escape(p.from() + "–" + p.to()) + " (indicator " + escape(f.indicator())
+						+ "; thick where it is on)</h4>\n");
+				w.write(SweepPlot.svg(p));
+			}
+		}
+	}
+
+	private static String show(Double value, String unit) {
+		return value == null ? "—" : escape(bulwark.check.rules.Figures.engineering(value, unit));
 	}
 
 	/** Horizontal bars, 100 % of the rating marked by a line, longer bars clipped at 200 % with the figure beside. */

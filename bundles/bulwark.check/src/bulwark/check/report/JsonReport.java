@@ -123,6 +123,17 @@ public final class JsonReport {
 			number(w.name("test_current"), p.testCurrentAmps());
 			number(w.name("open_voltage"), p.openVolts());
 			number(w.name("shorted_battery_current"), p.shortedBatteryAmps());
+			for (String direction : new String[] { "rising", "falling" }) {
+				w.name("sweep_" + direction).beginArray();
+				for (var point : direction.equals("rising") ? p.rising() : p.falling()) {
+					w.beginObject();
+					number(w.name("ohms"), point.ohms());
+					number(w.name("current"), point.amps());
+					w.name("on").value(point.on());
+					w.endObject();
+				}
+				w.endArray();
+			}
 			w.name("lights_leds").beginArray();
 			for (String colour : p.lightsLeds()) {
 				w.value(colour);

@@ -84,6 +84,16 @@ class ReportsAndOptionsTest {
 	}
 
 	@Test
+	void htmlShowsThePolicyTheFunctionAndTheSweep() {
+		CliRun run = CliRun.of("check", "--format", "html", CliRun.example("marina-bilge-switch-tester.bulwark"));
+		String html = run.out();
+		assertTrue(html.contains("review policy 'Marine DC systems'"), html);
+		assertTrue(html.contains("<h3>Function at the terminals</h3>"), html);
+		assertTrue(html.contains("<title>threshold sweep TIP–CLIP</title>") && html.contains("rising 154 kΩ"), html);
+		assertTrue(!html.contains("<script") && !html.contains("http"), "self-contained");
+	}
+
+	@Test
 	void junitReportHasOneCasePerRuleAndDesign() throws Exception {
 		CliRun run = CliRun.of("check", "--format", "junit", CliRun.example(LAB), CliRun.example("greenhouse-vent-input.bulwark"));
 		assertEquals(1, run.exitCode(), run.err());
