@@ -93,6 +93,17 @@ class BulwarkParsingTest {
 	}
 
 	@Test
+	void aKeywordAsANameIsExplained() throws Exception {
+		Design d = parser.parse("design \"x\"\nreference net gnd\nnet led\n");
+		List<Diagnostic> errors = d.eResource().getErrors();
+		assertEquals("'led' is a word of the language and cannot be a name as it is; write ^led to use it as one",
+				errors.get(0).getMessage());
+		assertEquals(3, errors.get(0).getLine());
+		Design escaped = parser.parse("design \"x\"\nreference net gnd\nnet ^led\n");
+		assertTrue(escaped.eResource().getErrors().isEmpty(), escaped.eResource().getErrors().toString());
+	}
+
+	@Test
 	void unknownUnitWordIsExplained() throws Exception {
 		Design d = parser.parse("design \"x\"\nreference net gnd\nnet a\nsource V1 (plus: a, minus: gnd) { voltage 5 volts }\n");
 		List<Diagnostic> errors = d.eResource().getErrors();

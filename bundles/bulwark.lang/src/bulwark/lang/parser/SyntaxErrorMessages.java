@@ -13,7 +13,8 @@ import bulwark.lang.validation.IssueCodes;
 /**
  * Says what went wrong when a number is followed by a word that is not a unit ("10k", "5 volts"): the
  * parser then reads the word as the next setting's name and stumbles one token later, where its own
- * message would only name the token it expected.
+ * message would only name the token it expected. Also when a name is one of the language's words
+ * ("net led"), where the parser's own message would speak of RULE_ID.
  */
 public class SyntaxErrorMessages extends SyntaxErrorMessageProvider {
 
@@ -33,6 +34,14 @@ public class SyntaxErrorMessages extends SyntaxErrorMessageProvider {
 						: "'" + text + "' after " + number.getText() + " is not a unit Bulwark knows; units are Ω (or ohm),"
 								+ " V, A, W, Ah, F, H, s, Hz, with the prefixes p n µ m k M G T";
 				return new SyntaxErrorMessage(message, IssueCodes.UNKNOWN_UNIT);
+			}
+			// a name that is a keyword ("net led", "net level"): say so, and how to write it
+			String text = e.token.getText();
+			String expected = context.getDefaultMessage();
+			if (text != null && text.matches("[A-Za-z_][A-Za-z_0-9]*") && e.token.getType() != InternalBulwarkParser.RULE_ID
+					&& expected != null && expected.contains("RULE_ID")) {
+				return new SyntaxErrorMessage("'" + text + "' is a word of the language and cannot be a name as it is;"
+						+ " write ^" + text + " to use it as one", IssueCodes.KEYWORD_AS_NAME);
 			}
 		}
 		return super.getSyntaxErrorMessage(context);

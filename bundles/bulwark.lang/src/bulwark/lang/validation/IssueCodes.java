@@ -30,6 +30,7 @@ public final class IssueCodes {
 	public static final String LIBRARY_NOT_FOUND = PREFIX + "libraryNotFound";
 	public static final String LIBRARY_OUTSIDE = PREFIX + "libraryOutside";
 	public static final String DEFINITION_KIND = PREFIX + "definitionKind";
+	public static final String KEYWORD_AS_NAME = PREFIX + "keywordAsName";
 
 	private IssueCodes() {
 	}
