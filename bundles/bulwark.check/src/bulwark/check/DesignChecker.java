@@ -3,6 +3,7 @@ package bulwark.check;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Duration;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
@@ -42,6 +43,7 @@ public final class DesignChecker {
 	private final DesignLoader loader;
 	private final ReviewPolicy forcedPolicy;
 	private final PolicyFiles policies;
+	private final Duration budget;
 
 	public DesignChecker(DesignLoader loader) {
 		this(loader, null);
@@ -52,9 +54,15 @@ public final class DesignChecker {
 	 *               use the one a design names, else the built-in policy
 	 */
 	public DesignChecker(DesignLoader loader, ReviewPolicy policy) {
+		this(loader, policy, Budget.DEFAULT);
+	}
+
+	/** @param budget the time one design's check may take before it is reported as not checked */
+	public DesignChecker(DesignLoader loader, ReviewPolicy policy, Duration budget) {
 		this.loader = loader;
 		this.forcedPolicy = policy;
 		this.policies = new PolicyFiles(loader);
+		this.budget = budget;
 	}
 
 	/** The policy files this checker has read; the command line shares it to read --policy. */
@@ -85,7 +93,25 @@ public final class DesignChecker {
 		return check(loader.load(text, file, cancel));
 	}
 
+	/**
+	 * The whole check of a loaded design, within its time budget. A check that runs over, or that meets a
+	 * fault of Bulwark's own, ends as not checked with the reason — never as a pass, never stopping a batch.
+	 */
 	public DesignResult check(LoadedDesign loaded) {
+		Budget.start(budget);
+		try {
+			return checkWithinBudget(loaded);
+		} catch (Budget.OverBudget e) {
+			return notChecked(loaded.file(), "budget", "not checked: " + e.getMessage());
+		} catch (RuntimeException e) {
+			return notChecked(loaded.file(), "internal", "not checked: Bulwark met a fault of its own (" + e
+					+ "); please report it with the design");
+		} finally {
+			Budget.stop();
+		}
+	}
+
+	private DesignResult checkWithinBudget(LoadedDesign loaded) {
 		List<Finding> findings = new ArrayList<>();
 		boolean languageErrors = false;
 		for (Issue issue : loaded.issues()) {
@@ -125,6 +151,7 @@ public final class DesignChecker {
 				: FunctionAnalysis.of(compiled, solved.get(0).solution());
 		CheckContext context = CheckContext.of(compiled, solved, policy, function);
 		for (Rule rule : RuleRegistry.all()) {
+			Budget.checkpoint("rule " + rule.info().id());
 			// a policy's severity replaces the rule's own; otherwise each finding keeps the one its rule gave it
 			Severity set = policy.severities().get(rule.info().id());
 			rule.check(context, f -> findings.add(set == null || f.severity() == set ? f : f.withSeverity(set)));
@@ -190,6 +217,12 @@ public final class DesignChecker {
 	}
 
 	/** A design refused before it was read: one finding saying why, status error. */
+	/** A design whose check stopped: one solver finding saying why, status error. */
+	private static DesignResult notChecked(String file, String rule, String reason) {
+		return new DesignResult(file, null, Status.ERROR,
+				List.of(Finding.plain(rule, Concern.SOLVER, Severity.ERROR, reason, null, SourceLocation.NONE)), List.of());
+	}
+
 	static DesignResult notChecked(String file, String reason, SourceLocation where) {
 		return new DesignResult(file, null, Status.ERROR,
 				List.of(Finding.plain("file", Concern.STRUCTURE, Severity.ERROR, reason, null, where)), List.of());

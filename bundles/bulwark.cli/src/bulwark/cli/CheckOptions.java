@@ -38,6 +38,10 @@ public final class CheckOptions {
 			description = "A folder where 'use \"…\"' also looks for parts libraries (repeatable; the BULWARK_LIBRARY environment variable adds more).")
 	java.util.List<Path> library = new java.util.ArrayList<>();
 
+	@Option(names = "--budget", defaultValue = "60", paramLabel = "SECONDS",
+			description = "Time one design's check may take; past it the design is reported as not checked and the batch goes on (default: ${DEFAULT-VALUE}).")
+	double budget;
+
 	@Option(names = "--out", paramLabel = "FILE", description = "Write the report to FILE (atomically) instead of standard output.")
 	Path out;
 }

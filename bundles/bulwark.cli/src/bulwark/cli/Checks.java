@@ -53,7 +53,12 @@ final class Checks {
 			return ExitCodes.USAGE;
 		}
 		LibraryFolders.apply(options.library);
-		DesignChecker checker = Language.checker();
+		if (!(options.budget > 0)) {
+			err.println("bulwark: --budget takes a number of seconds above 0");
+			return ExitCodes.USAGE;
+		}
+		java.time.Duration budget = java.time.Duration.ofMillis(Math.round(options.budget * 1000));
+		DesignChecker checker = Language.checker(null, budget);
 		if (options.policy != null) {
 			PolicyFiles.Resolution policy = checker.policies().read(options.policy);
 			if (policy.policy().isEmpty()) {
@@ -61,7 +66,7 @@ final class Checks {
 				err.flush();
 				return ExitCodes.NOT_CHECKED;
 			}
-			checker = Language.checker(policy.policy().get());
+			checker = Language.checker(policy.policy().get(), budget);
 		}
 		List<DesignResult> results = checkAll(checker, files, options.jobs, progress(files.size(), err));
 		StringWriter report = new StringWriter();

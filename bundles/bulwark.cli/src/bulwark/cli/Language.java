@@ -29,4 +29,9 @@ final class Language {
 	static DesignChecker checker(ReviewPolicy policy) {
 		return new DesignChecker(loader(), policy);
 	}
+
+	/** A checker with a review policy for every design (null: each design's own) and a time budget per design. */
+	static DesignChecker checker(ReviewPolicy policy, java.time.Duration budget) {
+		return new DesignChecker(loader(), policy, budget);
+	}
 }

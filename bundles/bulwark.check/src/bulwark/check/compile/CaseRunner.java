@@ -38,6 +38,7 @@ public final class CaseRunner {
 		Map<String, PreparedCircuit> prepared = new HashMap<>();
 		List<CaseOutcome> outcomes = new ArrayList<>();
 		for (FaultCase c : CaseGenerator.cases(design, policy)) {
+			bulwark.check.Budget.checkpoint("case '" + c.name() + "'");
 			PreparedCircuit circuit = prepared.computeIfAbsent(shape(c), k -> DcSolver.prepare(apply(design.circuit(), c)));
 			for (Device d : c.added()) {
 				circuit = circuit.with(d.name(), d);

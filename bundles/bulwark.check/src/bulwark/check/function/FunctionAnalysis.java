@@ -53,6 +53,7 @@ public final class FunctionAnalysis {
 		List<PairFigures> pairs = new ArrayList<>();
 		DcSolver solver = new DcSolver();
 		for (Terminal[] pair : MeasuringPairs.of(design)) {
+			bulwark.check.Budget.checkpoint("the function figures across " + pair[0].getName() + " and " + pair[1].getName());
 			String name = "resistance under test";
 			int a = design.circuit().netIndex(pair[0].getNet().getName());
 			int b = design.circuit().netIndex(pair[1].getNet().getName());

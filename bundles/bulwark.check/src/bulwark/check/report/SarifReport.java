@@ -30,7 +30,8 @@ public final class SarifReport {
 	private static final Map<String, String> OWN = Map.of("syntax", "the design text does not parse", "structure",
 			"the text parses but is not a valid design", "solver", "a case could not be solved", "file",
 			"the file could not be read or is refused", "policy", "the review policy cannot be used", "waiver",
-			"a waiver is stale, unknown or lacks what the policy needs");
+			"a waiver is stale, unknown or lacks what the policy needs", "budget",
+			"the check took longer than its time budget", "internal", "the check met a fault of its own");
 
 	private SarifReport() {
 	}

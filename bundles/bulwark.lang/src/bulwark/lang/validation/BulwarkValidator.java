@@ -128,6 +128,17 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 		}
 	}
 
+	/** A two-pin part with both pins on one net does nothing; almost always a slip of the pen. */
+	@Check
+	public void notConnectedToItself(Part part) {
+		if (part.getPins().size() == 2 && part.getPins().get(0).getNet() != null
+				&& part.getPins().get(0).getNet() == part.getPins().get(1).getNet()) {
+			warning(part.getName() + " has both pins on net '" + part.getPins().get(0).getNet().getName()
+					+ "': it carries nothing and is checked for nothing", part, DesignPackage.Literals.MEMBER__NAME,
+					IssueCodes.SELF_CONNECTED);
+		}
+	}
+
 	@Check
 	public void settingsMatchKind(Part part) {
 		Set<String> parameters = knownSettings(part.getKind(), part.getSettings());

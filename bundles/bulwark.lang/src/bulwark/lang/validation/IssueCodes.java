@@ -31,6 +31,7 @@ public final class IssueCodes {
 	public static final String LIBRARY_OUTSIDE = PREFIX + "libraryOutside";
 	public static final String DEFINITION_KIND = PREFIX + "definitionKind";
 	public static final String KEYWORD_AS_NAME = PREFIX + "keywordAsName";
+	public static final String SELF_CONNECTED = PREFIX + "selfConnected";
 
 	private IssueCodes() {
 	}

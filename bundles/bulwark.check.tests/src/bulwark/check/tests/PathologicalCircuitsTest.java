@@ -1,0 +1,119 @@
+package bulwark.check.tests;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.time.Duration;
+
+import org.eclipse.xtext.util.CancelIndicator;
+import org.junit.jupiter.api.Test;
+
+import bulwark.check.Concern;
+import bulwark.check.DesignChecker;
+import bulwark.check.DesignResult;
+import bulwark.check.Finding;
+import bulwark.check.Severity;
+import bulwark.check.Status;
+
+/**
+ * Circuits that break naive solvers end in a located finding or a solved result — never a silent pass,
+ * never an exception, never a hang — and a check that runs over its time budget is reported as not checked.
+ */
+class PathologicalCircuitsTest {
+	private static final String HEAD = "design \"p\"\nreference net gnd\nnet a\nnet b\n";
+
+	private static DesignResult check(String body) {
+		return Fixtures.checkUnderDefault(HEAD + body);
+	}
+
+	private static boolean has(DesignResult r, Concern concern, String text) {
+		return r.findings().stream().anyMatch(f -> f.concern() == concern && f.message().contains(text)
+				&& (f.location().line() > 0 || concern == Concern.SOLVER));
+	}
+
+	@Test
+	void aFloatingNetIsNamedAndTheDesignIsNotChecked() {
+		DesignResult r = check("""
+				source V1 (plus: a, minus: gnd) { voltage 5 V }
+				resistor R1 (a: a, b: gnd) { value 1 kΩ package 0805 rated power 125 mW }
+				net c
+				net d
+				resistor R2 (a: c, b: d) { value 1 kΩ package 0805 rated power 125 mW }
+				resistor R3 (a: d, b: c) { value 2 kΩ package 0805 rated power 125 mW }
+				""");
+		assertEquals(Status.ERROR, r.status());
+		assertTrue(has(r, Concern.SOLVER, "floating"), r.findings().toString());
+	}
+
+	@Test
+	void aLoopOfIdealSourcesIsNamed() {
+		DesignResult r = check("""
+				source V1 (plus: a, minus: gnd) { voltage 5 V }
+				source V2 (plus: a, minus: gnd) { voltage 6 V }
+				""");
+		assertEquals(Status.ERROR, r.status());
+		assertTrue(has(r, Concern.SOLVER, "loop"), r.findings().toString());
+	}
+
+	@Test
+	void aZeroOhmPartIsALocatedError() {
+		DesignResult r = check("resistor R1 (a: a, b: gnd) { value 0 Ω }\n");
+		assertEquals(Status.ERROR, r.status());
+		Finding f = r.findings().stream().filter(x -> x.message().contains("more than zero")).findFirst().orElseThrow();
+		assertEquals(5, f.location().line());
+	}
+
+	@Test
+	void extremeValuesSolve() {
+		DesignResult r = check("""
+				source V1 (plus: a, minus: gnd) { voltage 5 V }
+				resistor R_HUGE (a: a, b: b) { value 1 TΩ package 0805 rated power 125 mW }
+				resistor R_TINY (a: b, b: gnd) { value 1 mΩ package 0805 rated power 125 mW }
+				capacitor C_TINY (a: a, b: gnd) { value 0.000001 pF rated voltage 50 V }
+				""");
+		assertEquals(Status.PASS, r.status(), r.findings().toString());
+		// 5 V over 1 TΩ: 5 pA [closed form]
+		double current = r.cases().get(0).parts().stream().filter(p -> p.part().equals("R_HUGE")).findFirst().orElseThrow()
+				.current();
+		assertEquals(5e-12, current, 1e-18);
+	}
+
+	@Test
+	void thousandsOfPartsOnOneNetSolve() {
+		StringBuilder body = new StringBuilder("source V1 (plus: a, minus: gnd) { voltage 5 V resistance 1 Ω }\n");
+		for (int i = 0; i < 3000; i++) {
+			body.append("resistor R").append(i).append(" (a: a, b: gnd) { value 3 MΩ package 0805 rated power 125 mW }\n");
+		}
+		DesignResult r = check(body.toString());
+		assertEquals(Status.PASS, r.status(), r.findings().toString());
+		// 3000 × 3 MΩ in parallel is 1 kΩ behind 1 Ω: each carries 5/(1001)/3000 [closed form]
+		double current = r.cases().get(0).parts().stream().filter(p -> p.part().equals("R17")).findFirst().orElseThrow()
+				.current();
+		assertEquals(5.0 / 1001 / 3000, current, 1e-15);
+	}
+
+	@Test
+	void aPartConnectedToItselfIsALocatedWarning() {
+		DesignResult r = check("""
+				source V1 (plus: a, minus: gnd) { voltage 5 V }
+				resistor R1 (a: a, b: a) { value 1 kΩ package 0805 rated power 125 mW }
+				resistor R2 (a: a, b: gnd) { value 1 kΩ package 0805 rated power 125 mW }
+				""");
+		Finding f = r.findings().stream().filter(x -> x.message().contains("both pins on net 'a'")).findFirst().orElseThrow();
+		assertEquals(Severity.WARNING, f.severity());
+		assertEquals(6, f.location().line());
+	}
+
+	@Test
+	void aCheckOverItsBudgetIsNotChecked() {
+		DesignChecker hurried = new DesignChecker(Fixtures.loader(), null, Duration.ZERO);
+		DesignResult r = hurried.check(HEAD + "source V1 (plus: a, minus: gnd) { voltage 5 V }\n"
+				+ "resistor R1 (a: a, b: gnd) { value 1 kΩ package 0805 rated power 125 mW }\n", "p.bulwark",
+				CancelIndicator.NullImpl);
+		assertEquals(Status.ERROR, r.status());
+		Finding f = r.findings().get(0);
+		assertEquals("budget", f.rule());
+		assertEquals(Concern.SOLVER, f.concern());
+		assertTrue(f.message().startsWith("not checked: the check took longer than its budget"), f.message());
+	}
+}
