@@ -7,7 +7,6 @@ import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.ExecutionException;
@@ -21,6 +20,7 @@ import bulwark.check.DesignChecker;
 import bulwark.check.DesignResult;
 import bulwark.check.Severity;
 import bulwark.check.Status;
+import bulwark.check.io.AtomicFile;
 import bulwark.check.policy.PolicyFiles;
 import bulwark.check.report.HtmlReport;
 import bulwark.check.report.JUnitReport;
@@ -201,15 +201,6 @@ final class Checks {
 
 	/** Writes beside the target, then moves into place, so a reader never sees half a report. */
 	static void writeAtomically(Path target, String content) throws IOException {
-		Path abs = target.toAbsolutePath();
-		Path dir = abs.getParent();
-		Files.createDirectories(dir);
-		Path tmp = Files.createTempFile(dir, "." + abs.getFileName(), ".tmp");
-		try {
-			Files.writeString(tmp, content, StandardCharsets.UTF_8);
-			Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-		} finally {
-			Files.deleteIfExists(tmp);
-		}
+		AtomicFile.write(target, content, false);
 	}
 }

@@ -112,6 +112,26 @@ class DesignEditorUiTest {
 		assertTrue(editor.isDirty());
 	}
 
+	@Test
+	@Order(4)
+	void savingIsAtomicAndKeepsTheVersionBefore() throws Exception {
+		Path dir = java.nio.file.Files.createTempDirectory("bulwark-save");
+		Path copy = dir.resolve("lab.bulwark");
+		java.nio.file.Files.copy(LAB, copy);
+		java.nio.file.Files.copy(LAB.resolveSibling("teaching-lab.bulwark-policy"), dir.resolve("teaching-lab.bulwark-policy"));
+		DesignEditor editor = Application.openFile(page(), copy);
+		IDocument doc = editor.getDocumentProvider().getDocument(editor.getEditorInput());
+		String before = doc.get();
+		doc.replace(doc.get().indexOf("rated power 125 mW"), "rated power 125 mW".length(), "rated power 2 W");
+		editor.doSave(null);
+		assertTrue(!editor.isDirty(), "clean after the save");
+		assertEquals(doc.get(), java.nio.file.Files.readString(copy));
+		assertEquals(before, java.nio.file.Files.readString(dir.resolve("lab.bulwark.bak")));
+		try (var files = java.nio.file.Files.list(dir)) {
+			assertEquals(3, files.count(), "no temporary file left behind");
+		}
+	}
+
 	private static void screenshot(String name) throws Exception {
 		Screenshot.save(PlatformUI.getWorkbench().getActiveWorkbenchWindow().getShell(),
 				ROOT.resolve("bundles/bulwark.ui.tests/target/screenshots").resolve(name));

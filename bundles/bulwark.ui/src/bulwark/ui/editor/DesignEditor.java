@@ -1,14 +1,23 @@
 package bulwark.ui.editor;
 
+import java.io.IOException;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;
 
+import org.eclipse.core.runtime.CoreException;
+import org.eclipse.core.runtime.IProgressMonitor;
+import org.eclipse.jface.dialogs.MessageDialog;
+import org.eclipse.jface.text.IDocument;
 import org.eclipse.jface.text.source.Annotation;
+import org.eclipse.jface.viewers.ISelection;
 import org.eclipse.jface.text.source.IAnnotationModel;
 import org.eclipse.ui.editors.text.TextEditor;
+import org.eclipse.ui.ide.FileStoreEditorInput;
 
 import bulwark.check.DesignResult;
+import bulwark.check.io.AtomicFile;
 
 /**
  * The design editor: a text editor whose reconciler checks the design in the background after each pause
@@ -37,6 +46,48 @@ public class DesignEditor extends TextEditor {
 	public void dispose() {
 		closed = true;
 		super.dispose();
+	}
+
+	/**
+	 * Saves atomically, keeping the previous version as NAME.bak: the text goes to a temporary file beside the
+	 * design and replaces it in one step, so a crash midway leaves the design as it was. A save that fails
+	 * leaves the editor dirty and says why; nothing typed is lost.
+	 */
+	@Override
+	public void doSave(IProgressMonitor monitor) {
+		Path file = file();
+		if (file == null) {
+			super.doSave(monitor);
+			return;
+		}
+		IDocument document = getDocumentProvider().getDocument(getEditorInput());
+		try {
+			AtomicFile.write(file, document.get(), true);
+		} catch (IOException e) {
+			MessageDialog.openError(getSite().getShell(), "Design not saved",
+					"Could not save " + file + ": " + e.getMessage() + "\nThe text is still here, unsaved.");
+			return;
+		}
+		// the file now holds the text: let the provider reread it, so that the editor is clean, and keep the view
+		ISelection selection = getSelectionProvider().getSelection();
+		int top = getSourceViewer() == null ? 0 : getSourceViewer().getTopIndex();
+		try {
+			getDocumentProvider().resetDocument(getEditorInput());
+		} catch (CoreException e) {
+			MessageDialog.openError(getSite().getShell(), "Design saved, not reread", e.getMessage());
+		}
+		getSelectionProvider().setSelection(selection);
+		if (getSourceViewer() != null) {
+			getSourceViewer().setTopIndex(top);
+		}
+	}
+
+	/** The design's file on disk, or null when the input is not a local file. */
+	public Path file() {
+		if (getEditorInput() instanceof FileStoreEditorInput input && "file".equals(input.getURI().getScheme())) {
+			return Path.of(input.getURI());
+		}
+		return null;
 	}
 
 	/** The newest check result, or null before the first check finished. */
