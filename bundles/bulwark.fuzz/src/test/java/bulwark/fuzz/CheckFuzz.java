@@ -76,6 +76,50 @@ class CheckFuzz {
 				});
 	}
 
+	/** The seeds in corpus/: the demo designs, a library, a policy and a design using every construct once. */
+	static final java.util.List<String> CORPUS = corpus();
+
+	private static java.util.List<String> corpus() {
+		java.nio.file.Path dir = java.nio.file.Path.of(System.getProperty("bulwark.fuzz.corpus", "corpus"));
+		try (var files = java.nio.file.Files.list(dir)) {
+			java.util.List<String> texts = new java.util.ArrayList<>();
+			for (java.nio.file.Path f : files.sorted().toList()) {
+				texts.add(java.nio.file.Files.readString(f));
+			}
+			if (texts.isEmpty()) {
+				throw new IllegalStateException("empty fuzzing corpus in " + dir.toAbsolutePath());
+			}
+			return texts;
+		} catch (java.io.IOException e) {
+			throw new java.io.UncheckedIOException(e);
+		}
+	}
+
+	/** A corpus seed with one random cut replaced by random characters, or two lines swapped. */
+	@Provide
+	Arbitrary<String> mangledSeeds() {
+		return Combinators.combine(Arbitraries.of(CORPUS), Arbitraries.integers().between(0, 5_000),
+				Arbitraries.integers().between(0, 40), Arbitraries.strings().ofMaxLength(8), Arbitraries.integers().between(0, 60))
+				.as((text, at, cut, insert, swap) -> {
+					int from = Math.min(at, text.length());
+					int to = Math.min(from + cut, text.length());
+					String mangled = text.substring(0, from) + insert + text.substring(to);
+					String[] lines = mangled.split("\n", -1);
+					if (lines.length > 2) {
+						int i = swap % lines.length, j = (swap * 7 + 3) % lines.length;
+						String t = lines[i];
+						lines[i] = lines[j];
+						lines[j] = t;
+					}
+					return String.join("\n", lines);
+				});
+	}
+
+	@Property
+	void mangledSeedsEndInAResult(@ForAll("mangledSeeds") String text) {
+		checkSurvives(text);
+	}
+
 	@Property
 	void wellFormedDesignsEndInAResult(@ForAll("designs") String text) {
 		checkSurvives(text);
