@@ -65,6 +65,11 @@ public final class DesignChecker {
 		this.budget = budget;
 	}
 
+	/** The loader this checker parses with; quick fixes parse their copies with it. */
+	public DesignLoader loader() {
+		return loader;
+	}
+
 	/** The policy files this checker has read; the command line shares it to read --policy. */
 	public PolicyFiles policies() {
 		return policies;

@@ -42,6 +42,9 @@ public final class CheckOptions {
 			description = "Time one design's check may take; past it the design is reported as not checked and the batch goes on (default: ${DEFAULT-VALUE}).")
 	double budget;
 
+	@Option(names = "--no-fixes", description = "Leave out the quick fixes the JSON report otherwise gives each finding (each is checked by a full re-check, which costs time on large batches).")
+	boolean noFixes;
+
 	@Option(names = "--out", paramLabel = "FILE", description = "Write the report to FILE (atomically) instead of standard output.")
 	Path out;
 }

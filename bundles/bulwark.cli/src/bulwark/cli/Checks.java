@@ -21,6 +21,7 @@ import bulwark.check.DesignResult;
 import bulwark.check.Severity;
 import bulwark.check.Status;
 import bulwark.check.io.AtomicFile;
+import bulwark.lang.ide.fixes.QuickFixes;
 import bulwark.check.policy.PolicyFiles;
 import bulwark.check.report.HtmlReport;
 import bulwark.check.report.JUnitReport;
@@ -70,7 +71,7 @@ final class Checks {
 		}
 		List<DesignResult> results = checkAll(checker, files, options.jobs, progress(files.size(), err));
 		StringWriter report = new StringWriter();
-		write(results, options, report);
+		write(results, options, checker, report);
 		if (options.out == null) {
 			out.print(report);
 			out.flush();
@@ -175,10 +176,12 @@ final class Checks {
 		}
 	}
 
-	private static void write(List<DesignResult> results, CheckOptions options, Writer w) throws IOException {
+	private static void write(List<DesignResult> results, CheckOptions options, DesignChecker checker, Writer w)
+			throws IOException {
 		switch (options.format) {
 		case json:
-			JsonReport.write(results, Version.get(), Safety.CAUTION, w);
+			JsonReport.write(results, Version.get(), Safety.CAUTION,
+					options.noFixes ? (r, f) -> List.of() : fixes(checker), w);
 			break;
 		case html:
 			HtmlReport.write(results, Version.get(), Safety.CAUTION, w);
@@ -197,6 +200,21 @@ final class Checks {
 		default:
 			TextReport.write(results, w);
 		}
+	}
+
+	/** The verified quick fixes of each finding, worked out once per design when the report asks. */
+	private static java.util.function.BiFunction<DesignResult, bulwark.check.Finding, List<bulwark.check.fix.Fix>> fixes(
+			DesignChecker checker) {
+		java.util.Map<DesignResult, java.util.Map<bulwark.check.Finding, List<bulwark.check.fix.Fix>>> cache =
+				new java.util.IdentityHashMap<>();
+		return (r, f) -> cache.computeIfAbsent(r, d -> {
+			try {
+				String text = Files.readString(Path.of(d.file()), StandardCharsets.UTF_8);
+				return QuickFixes.of(checker, text, d.file(), d);
+			} catch (IOException | RuntimeException e) {
+				return java.util.Map.of(); // an unreadable file has no fixes; its findings say why
+			}
+		}).getOrDefault(f, List.of());
 	}
 
 	/** Writes beside the target, then moves into place, so a reader never sees half a report. */

@@ -11,6 +11,8 @@ import bulwark.check.DesignResult;
 import bulwark.check.Finding;
 import bulwark.check.PartStress;
 import bulwark.check.WorstStress;
+import bulwark.check.fix.Fix;
+import bulwark.check.fix.TextEdit;
 import bulwark.check.function.FunctionFigures;
 import bulwark.check.function.PairFigures;
 
@@ -24,6 +26,12 @@ public final class JsonReport {
 
 	public static void write(List<DesignResult> results, String version, String caution, Writer out)
 			throws IOException {
+		write(results, version, caution, (r, f) -> List.of(), out);
+	}
+
+	/** @param fixes the verified fixes of a finding of a design (an empty list when none or not computed) */
+	public static void write(List<DesignResult> results, String version, String caution,
+			java.util.function.BiFunction<DesignResult, Finding, List<Fix>> fixes, Writer out) throws IOException {
 		JsonWriter w = new JsonWriter(out);
 		w.setIndent("  ");
 		w.beginObject();
@@ -31,7 +39,7 @@ public final class JsonReport {
 		w.name("caution").value(caution);
 		w.name("designs").beginArray();
 		for (DesignResult r : results) {
-			design(w, r);
+			design(w, r, fixes);
 		}
 		w.endArray();
 		w.endObject();
@@ -40,7 +48,8 @@ public final class JsonReport {
 		out.flush();
 	}
 
-	private static void design(JsonWriter w, DesignResult r) throws IOException {
+	private static void design(JsonWriter w, DesignResult r,
+			java.util.function.BiFunction<DesignResult, Finding, List<Fix>> fixes) throws IOException {
 		w.beginObject();
 		w.name("file").value(r.file());
 		w.name("title").value(r.title());
@@ -61,6 +70,11 @@ public final class JsonReport {
 			number(w.name("limit"), f.limit());
 			w.name("unit").value(f.unit());
 			w.name("waived").value(f.waived());
+			w.name("fixes").beginArray();
+			for (Fix fix : fixes.apply(r, f)) {
+				fix(w, fix);
+			}
+			w.endArray();
 			w.endObject();
 		}
 		w.endArray();
@@ -102,6 +116,25 @@ public final class JsonReport {
 		}
 		w.endArray();
 		function(w, r.function());
+		w.endObject();
+	}
+
+	private static void fix(JsonWriter w, Fix fix) throws IOException {
+		w.beginObject();
+		w.name("label").value(fix.label());
+		for (String side : new String[] { "before", "after" }) {
+			w.name(side).beginObject();
+			for (var e : (side.equals("before") ? fix.before() : fix.after()).entrySet()) {
+				number(w.name(e.getKey()), e.getValue());
+			}
+			w.endObject();
+		}
+		w.name("edits").beginArray();
+		for (TextEdit e : fix.edits()) {
+			w.beginObject().name("line").value(e.line()).name("column").value(e.column()).name("offset").value(e.offset())
+					.name("length").value(e.length()).name("text").value(e.text()).endObject();
+		}
+		w.endArray();
 		w.endObject();
 	}
 

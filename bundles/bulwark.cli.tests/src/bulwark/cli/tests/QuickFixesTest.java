@@ -1,0 +1,135 @@
+package bulwark.cli.tests;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+
+import org.eclipse.xtext.util.CancelIndicator;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import bulwark.check.DesignChecker;
+import bulwark.check.DesignResult;
+import bulwark.check.Finding;
+import bulwark.check.fix.Fix;
+import bulwark.check.load.DesignLoader;
+import bulwark.lang.BulwarkStandaloneSetup;
+import bulwark.lang.ide.fixes.PreferredValues;
+import bulwark.lang.ide.fixes.QuickFixes;
+
+/** Quick fixes compute their values, and are offered only when a full re-check proves them. */
+class QuickFixesTest {
+	private static final DesignChecker CHECKER = new DesignChecker(
+			new DesignLoader(new BulwarkStandaloneSetup().createInjectorAndDoEMFRegistration()));
+
+	private static Map<Finding, List<Fix>> fixes(Path file) throws Exception {
+		String text = Files.readString(file);
+		DesignResult r = CHECKER.check(text, file.toString(), CancelIndicator.NullImpl);
+		return QuickFixes.of(CHECKER, text, file.toString(), r);
+	}
+
+	private static Fix only(Map<Finding, List<Fix>> fixes, String rule) {
+		List<Fix> list = fixes.entrySet().stream().filter(e -> e.getKey().rule().equals(rule))
+				.flatMap(e -> e.getValue().stream()).toList();
+		assertEquals(1, list.size(), fixes.toString());
+		return list.get(0);
+	}
+
+	@Test
+	void raiseAPowerRatingToTheStepThatHolds(@TempDir Path dir) throws Exception {
+		Path lab = dir.resolve("lab.bulwark");
+		Files.copy(CliRun.root().resolve("examples/lab-indicator-seeded.bulwark"), lab);
+		Files.copy(CliRun.root().resolve("examples/teaching-lab.bulwark-policy"), dir.resolve("teaching-lab.bulwark-policy"));
+		Fix fix = only(fixes(lab), "resistor-power");
+		// 0.96 W with the output shorted, derated to 60 %: at least 1.6 W, so the 2 W step [closed form]
+		assertEquals("raise R_DROP's rated power 125 mW → 2 W (1280 % → 80 % of the limit)", fix.label());
+		assertEquals(2.0, fix.after().get("rated"), 0);
+		String fixed = fix.applyTo(Files.readString(lab));
+		assertTrue(fixed.contains("  rated power 2 W\n"), fixed);
+		DesignResult after = CHECKER.check(fixed, lab.toString(), CancelIndicator.NullImpl);
+		assertTrue(after.findings().stream().noneMatch(f -> f.rule().equals("resistor-power")), after.findings().toString());
+	}
+
+	@Test
+	void splitAResistorOverItsVoltage(@TempDir Path dir) throws Exception {
+		Path design = dir.resolve("d.bulwark");
+		Files.writeString(design, """
+				design "one resistor across the terminals"
+				reference net gnd
+				net tip
+				terminal TIP at tip
+				terminal COM at gnd common
+				resistor R1 (a: tip, b: gnd) {
+				  value 1 MΩ ± 1 %
+				  package 0805
+				  rated power 250 mW
+				}
+				""");
+		Fix fix = only(fixes(design), "resistor-voltage");
+		// 357.8 V (IEC 60038 230 V + 10 % peak) over 0805's 150 V derated to 80 % (120 V): three parts;
+		// 1 MΩ / 3 = 333 kΩ, the nearest E24 value 330 kΩ, each 119.3 V [closed form]
+		assertTrue(fix.label().startsWith("split R1 into 3 × 330 kΩ in series (119 V each"), fix.label());
+		String fixed = fix.applyTo(Files.readString(design));
+		assertTrue(fixed.contains("""
+				net R1_N1
+				net R1_N2
+
+				resistor R1_1 (a: tip, b: R1_N1) {
+				  value 330 kΩ ± 1 %
+				  package 0805
+				  rated power 250 mW
+				}
+				"""), fixed);
+		DesignResult after = CHECKER.check(fixed, design.toString(), CancelIndicator.NullImpl);
+		assertTrue(after.findings().stream().noneMatch(f -> f.severity() == bulwark.check.Severity.ERROR),
+				after.findings().toString());
+	}
+
+	@Test
+	void addAMissingPowerRatingThatHolds(@TempDir Path dir) throws Exception {
+		Path design = dir.resolve("d.bulwark");
+		Files.writeString(design, """
+				design "unrated"
+				reference net gnd
+				net v
+				net m
+				source V1 (plus: v, minus: gnd) { voltage 12 V }
+				resistor R1 (a: v, b: m) { value 100 Ω package 1206 }
+				resistor R2 (a: m, b: gnd) { value 200 Ω package 1206 rated power 1 W }
+				""");
+		Fix fix = only(fixes(design), "rating-missing");
+		// (40 mA)² × 100 Ω = 160 mW; 250 mW derated to 60 % holds 150 mW, too little: 500 mW [closed form]
+		assertTrue(fix.label().startsWith("add R1's rated power 500 mW (worst dissipation 160 mW"), fix.label());
+		assertTrue(fix.applyTo(Files.readString(design)).contains(
+				"resistor R1 (a: v, b: m) {\n  value 100 Ω\n  package 1206\n  rated power 500 mW # added by a quick fix"),
+				fix.applyTo(Files.readString(design)));
+	}
+
+	@Test
+	void noFixIsOfferedThatARecheckWouldRefute(@TempDir Path dir) throws Exception {
+		Path loom = dir.resolve("loom.bulwark");
+		Files.copy(CliRun.root().resolve("examples/stage-loom-checker.bulwark"), loom);
+		Files.createDirectories(dir.resolve("lib"));
+		Files.copy(CliRun.root().resolve("examples/lib/generic-parts.bulwark"), dir.resolve("lib/generic-parts.bulwark"));
+		// R_LIMIT dissipates 197 W under mains: no standard power step holds that, so nothing is offered for it
+		assertTrue(fixes(loom).entrySet().stream()
+				.noneMatch(e -> "R_LIMIT".equals(e.getKey().part()) && e.getKey().rule().equals("resistor-power")));
+	}
+
+	@Test
+	void preferredValuesOfIec60063() {
+		assertEquals(96, PreferredValues.series(96).length);
+		assertArrayEquals(new double[] { 1.0, 1.5, 2.2, 3.3, 4.7, 6.8 }, PreferredValues.series(6), 0);
+		// E24 is a table: 2.7, 3.0, 3.3 … 8.2, 9.1 where the formula would give 2.6, 3.2 … 8.3 [sources.md]
+		assertEquals(2.7, PreferredValues.series(24)[10], 0);
+		assertTrue(java.util.Arrays.stream(PreferredValues.series(192)).anyMatch(v -> v == 9.20));
+		assertEquals(1.02, PreferredValues.series(96)[1], 0); // round(100·10^(1/96)) / 100 [closed form]
+		assertEquals(330e3, PreferredValues.nearest(333.3e3, 24), 1e-6);
+		assertEquals(3.6e3, PreferredValues.atLeast(3.4e3, 24), 1e-9);
+	}
+}

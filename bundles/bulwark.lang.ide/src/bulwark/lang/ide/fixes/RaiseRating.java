@@ -1,0 +1,94 @@
+package bulwark.lang.ide.fixes;
+
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+
+import bulwark.check.Finding;
+import bulwark.check.compile.Settings;
+import bulwark.check.fix.Fix;
+import bulwark.check.fix.TextEdit;
+import bulwark.check.rules.Figures;
+import bulwark.lang.design.Part;
+import bulwark.lang.design.PartKind;
+import bulwark.lang.design.Setting;
+
+/**
+ * Raises the rating a finding is over to the next standard step that holds the worst stress with the
+ * policy's derating: the part's own rating is replaced, or one is added over what its definition says.
+ * The steps are the usual catalogue values of each rating [common practice].
+ */
+final class RaiseRating implements FixProvider {
+	private static final Map<String, double[]> STEPS = Map.of(
+			"power", new double[] { 0.063, 0.1, 0.125, 0.25, 0.5, 0.75, 1, 2, 3, 5, 10 },
+			"reverse", new double[] { 50, 75, 100, 200, 400, 600, 800, 1000, 1500 },
+			"forward", new double[] { 0.02, 0.05, 0.1, 0.2, 0.5, 1, 2, 3 },
+			"voltage", new double[] { 16, 25, 32, 50, 63, 100, 125, 250, 400, 500, 630, 1000, 2000 },
+			"collector_emitter", new double[] { 30, 45, 60, 80, 100, 160, 300, 400, 600 },
+			"drain_source", new double[] { 30, 60, 100, 200, 400, 600, 800 },
+			"blocking", new double[] { 250, 400, 600, 1000 },
+			"collector", new double[] { 0.1, 0.2, 0.5, 1, 2 },
+			"drain", new double[] { 0.1, 0.2, 0.5, 1, 2, 5 });
+	/** Which rating each rule's finding is about, by the part's kind. */
+	private static final Map<String, String> RATING_OF_RULE = Map.of("resistor-power", "power", "device-power", "power",
+			"diode-reverse", "reverse", "forward-current", "forward", "capacitor-voltage", "voltage", "fuse-voltage",
+			"voltage", "protector-blocking", "blocking", "transistor-current", "collector");
+
+	@Override
+	public List<Fix> propose(FixContext context, Finding finding) {
+		if (finding.part() == null || finding.value() == null || finding.limit() == null) {
+			return List.of();
+		}
+		Optional<Part> found = PartText.part(context.design(), finding.part());
+		if (found.isEmpty()) {
+			return List.of();
+		}
+		Part part = found.get();
+		String rating = rating(finding.rule(), part.getKind());
+		if (rating == null || !STEPS.containsKey(rating)) {
+			return List.of();
+		}
+		Optional<Double> rated = Settings.rating(part, rating);
+		if (rated.isEmpty()) {
+			return List.of();
+		}
+		double factor = finding.limit() / rated.get(); // the policy's derating, as applied
+		double needed = finding.value() / factor;
+		double step = Double.NaN;
+		for (double s : STEPS.get(rating)) {
+			if (s >= needed * (1 + 1e-9) && s > rated.get()) {
+				step = s;
+				break;
+			}
+		}
+		if (Double.isNaN(step)) {
+			return List.of();
+		}
+		String unit = finding.unit();
+		String written = value(step, unit);
+		Optional<Setting> own = PartText.own(part, rating, true);
+		TextEdit edit = own.isPresent() ? PartText.replaceValue(context.text(), own.get(), written)
+				: PartText.addSetting(context.text(), part, "rated " + rating + " " + written);
+		String label = String.format(Locale.ROOT, "raise %s's rated %s %s → %s (%.0f %% → %.0f %% of the limit)",
+				part.getName(), rating.replace('_', '-'), Figures.engineering(rated.get(), unit), written,
+				100 * finding.value() / finding.limit(), 100 * finding.value() / (step * factor));
+		return List.of(new Fix(label, Map.of("rated", rated.get(), "utilisation", finding.value() / finding.limit()),
+				Map.of("rated", step, "utilisation", finding.value() / (step * factor)), List.of(edit)));
+	}
+
+	private static String rating(String rule, PartKind kind) {
+		if (rule.equals("transistor-voltage")) {
+			return kind == PartKind.NMOS || kind == PartKind.PMOS ? "drain_source" : "collector_emitter";
+		}
+		if (rule.equals("transistor-current")) {
+			return kind == PartKind.NMOS || kind == PartKind.PMOS ? "drain" : "collector";
+		}
+		return RATING_OF_RULE.get(rule);
+	}
+
+	/** A rating as the design language writes it: "2 W", "250 mW", "1 kV". */
+	static String value(double si, String unit) {
+		return Figures.engineering(si, unit);
+	}
+}
