@@ -110,6 +110,68 @@ class QuickFixesTest {
 				fix.applyTo(Files.readString(design)));
 	}
 
+	/** The continuity input of the hysteresis rule's test, without its feedback resistor. */
+	private static final String NO_FEEDBACK = """
+			design "continuity input"
+			reference net gnd
+			net vbat
+			net tip
+			net plus
+			net ref
+			net out
+			terminal TIP at tip
+			terminal COM at gnd common
+			battery B1 (plus: vbat, minus: gnd) { emf 3 V }
+			resistor R_PULL (a: vbat, b: tip) { value 10 kΩ rated power 250 mW package 0805 }
+			resistor R1 (a: tip, b: plus) { value 100 kΩ rated power 250 mW package 0805 }
+			resistor R_TOP (a: vbat, b: ref) { value 100 kΩ rated power 250 mW package 0805 }
+			resistor R_BOT (a: ref, b: gnd) { value 100 kΩ rated power 250 mW package 0805 }
+			comparator U1 (in_plus: plus, in_minus: ref, out: out, supply_plus: vbat, supply_minus: gnd)
+			""";
+
+	@Test
+	void addHysteresisSizedByTheNetworkFormula(@TempDir Path dir) throws Exception {
+		Path design = dir.resolve("d.bulwark");
+		Files.writeString(design, NO_FEEDBACK.replace("design \"continuity input\"",
+				"design \"continuity input\"\npolicy \"p.bulwark-policy\""));
+		Files.writeString(dir.resolve("p.bulwark-policy"), "policy \"p\"\n  mains none\n");
+		Fix fix = only(fixes(design), "hysteresis");
+		// step = VOH·R1/(R1 + R2) ≥ 2 × 10 mV with VOH = 3 V, R1 = 100 kΩ: R2 ≤ 14.9 MΩ, on E24 13 MΩ, which
+		// gives 3·100 k/13.1 M = 22.9 mV [closed form, sources.md's non-inverting network]
+		assertTrue(fix.label().startsWith("add R_HYST_U1 = 13 MΩ from U1's output to in_plus: about 22.9 mV"), fix.label());
+		DesignResult after = CHECKER.check(fix.applyTo(Files.readString(design)), design.toString(), CancelIndicator.NullImpl);
+		assertTrue(after.findings().stream().noneMatch(f -> f.rule().equals("hysteresis")), after.findings().toString());
+	}
+
+	@Test
+	void limitAClampCurrentWithTheSmallestResistorThatHolds(@TempDir Path dir) throws Exception {
+		Path design = dir.resolve("d.bulwark");
+		Files.writeString(design, """
+				design "bare input"
+				policy "p.bulwark-policy"
+				reference net gnd
+				net vbat
+				net tip
+				net ref
+				net out
+				terminal TIP at tip
+				terminal COM at gnd common
+				battery B1 (plus: vbat, minus: gnd) { emf 5 V type rechargeable rated charge 1 A }
+				resistor R_TOP (a: vbat, b: ref) { value 100 kΩ rated power 250 mW package 0805 }
+				resistor R_BOT (a: ref, b: gnd) { value 100 kΩ rated power 250 mW package 0805 }
+				resistor R_OUT (a: out, b: gnd) { value 100 kΩ rated power 250 mW package 0805 }
+				resistor R_TIP (a: tip, b: gnd) { value 1 MΩ rated power 250 mW package 0805 }
+				comparator U1 (in_plus: tip, in_minus: ref, out: out, supply_plus: vbat, supply_minus: gnd)
+				""");
+		Files.writeString(dir.resolve("p.bulwark-policy"), "policy \"p\"\n  mains none\n  level 24 V\n");
+		Fix fix = only(fixes(design), "clamp-current");
+		// 24 V on the tip, 5 V rail: about 19 V across the new resistor; 10 kΩ passes about 1.9 mA, within the
+		// 10 mA clamp rating, and dissipates 36 mW in its 250 mW [closed form]
+		assertEquals("put R_CLAMP_U1 = 10 kΩ in series with U1's in_plus to limit its clamp current", fix.label());
+		String fixed = fix.applyTo(Files.readString(design));
+		assertTrue(fixed.contains("comparator U1 (in_plus: U1_IN_PLUS,") && fixed.contains("net U1_IN_PLUS"), fixed);
+	}
+
 	@Test
 	void noFixIsOfferedThatARecheckWouldRefute(@TempDir Path dir) throws Exception {
 		Path loom = dir.resolve("loom.bulwark");

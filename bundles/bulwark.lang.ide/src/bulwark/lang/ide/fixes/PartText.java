@@ -88,6 +88,65 @@ final class PartText {
 		return new TextEdit(offset, length, replacement, line, offset - lineStart + 1);
 	}
 
+	/** A new member written after an existing one, a blank line between, as the formatter lays parts out. */
+	static TextEdit insertAfter(String text, EObject member, String block) {
+		ICompositeNode node = NodeModelUtils.findActualNodeFor(member);
+		return edit(text, node.getEndOffset(), 0, "\n\n" + block);
+	}
+
+	/** Points one pin of a part at another net. */
+	static TextEdit repoint(String text, Part part, String pin, String net) {
+		for (bulwark.lang.design.PinBinding b : part.getPins()) {
+			if (b.getPin().equals(pin)) {
+				var node = NodeModelUtils.findNodesForFeature(b, bulwark.lang.design.DesignPackage.Literals.PIN_BINDING__NET)
+						.get(0);
+				return edit(text, node.getOffset(), node.getLength(), net);
+			}
+		}
+		throw new IllegalArgumentException(part.getName() + " has no pin " + pin);
+	}
+
+	/** A net declared after the design's last net declaration. */
+	static TextEdit addNet(String text, Design design, String name) {
+		EObject last = null;
+		for (Member m : design.getMembers()) {
+			if (m instanceof bulwark.lang.design.Net) {
+				last = m;
+			}
+		}
+		ICompositeNode node = NodeModelUtils.findActualNodeFor(last);
+		return edit(text, node.getEndOffset(), 0, "\nnet " + name);
+	}
+
+	/** The name of the net a pin is on, as written. */
+	static String netOf(Part part, String pin) {
+		for (bulwark.lang.design.PinBinding b : part.getPins()) {
+			if (b.getPin().equals(pin)) {
+				return NodeModelUtils.getTokenText(NodeModelUtils
+						.findNodesForFeature(b, bulwark.lang.design.DesignPackage.Literals.PIN_BINDING__NET).get(0));
+			}
+		}
+		throw new IllegalArgumentException(part.getName() + " has no pin " + pin);
+	}
+
+	/** A net name as it must be written (a keyword gets its ^). */
+	static String escapeName(String name) {
+		return name;
+	}
+
+	/** A name not yet used in the design, from a stem. */
+	static String freeName(Design design, String stem) {
+		java.util.Set<String> used = new java.util.HashSet<>();
+		for (Member m : design.getMembers()) {
+			used.add(m.getName());
+		}
+		String name = stem;
+		for (int i = 2; used.contains(name); i++) {
+			name = stem + "_" + i;
+		}
+		return name;
+	}
+
 	/** The text of an element as written, tokens separated by single spaces. */
 	static String tokens(EObject element) {
 		return NodeModelUtils.getTokenText(NodeModelUtils.findActualNodeFor(element));

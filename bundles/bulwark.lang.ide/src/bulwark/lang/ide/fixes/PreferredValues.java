@@ -68,6 +68,17 @@ public final class PreferredValues {
 		return best;
 	}
 
+	/** The largest value of the series at or below {@code value}. */
+	public static double atMost(double value, int n) {
+		double best = 0;
+		for (double v : candidates(value, n)) {
+			if (v <= value * (1 + 1e-12) && v > best) {
+				best = v;
+			}
+		}
+		return best;
+	}
+
 	private static List<Double> candidates(double value, int n) {
 		int decade = (int) Math.floor(Math.log10(value));
 		List<Double> list = new ArrayList<>();

@@ -24,7 +24,9 @@ import bulwark.check.policy.ReviewPolicy;
  */
 public final class QuickFixes {
 	private static final List<FixProvider> PROVIDERS = List.of(new RaiseRating(), new SplitResistor(),
-			new AddMissingRating());
+			new AddMissingRating(), new AddHysteresis(), new LimitClampCurrent(), new BlockReversePath());
+	/** Proposals of one provider for one finding after the first verified one are not tried. */
+	private static final boolean FIRST_ONLY = true;
 
 	private QuickFixes() {
 	}
@@ -51,6 +53,9 @@ public final class QuickFixes {
 				for (Fix fix : provider.propose(context, f)) {
 					if (removes(checker, fix.applyTo(text), file, f, errorsBefore)) {
 						verified.add(fix);
+						if (FIRST_ONLY) {
+							break; // a provider's proposals run from the least change up: the first that works
+						}
 					}
 				}
 			}
