@@ -184,6 +184,44 @@ class QuickFixesTest {
 	}
 
 	@Test
+	void aLargerPackageOrASplit(@TempDir Path dir) throws Exception {
+		Path design = dir.resolve("d.bulwark");
+		Files.writeString(design, """
+				design "200 V on a chip resistor"
+				policy "p.bulwark-policy"
+				reference net gnd
+				net tip
+				terminal TIP at tip
+				terminal COM at gnd common
+				resistor R1 (a: tip, b: gnd) { value 1 MΩ ± 1 % package 0805 rated power 250 mW }
+				case "200 V" { apply 200 V from TIP to COM }
+				""");
+		Files.writeString(dir.resolve("p.bulwark-policy"), "policy \"p\"\n  mains none\n");
+		List<Fix> fixes = fixes(design).entrySet().stream().filter(e -> e.getKey().rule().equals("resistor-voltage"))
+				.flatMap(e -> e.getValue().stream()).toList();
+		// 200 V against 0805's 150 V derated to 80 % (120 V): an axial ¼ W part (250 V → 200 V) holds it exactly;
+		// or two parts of 510 kΩ (E24 nearest to 500 kΩ), 100 V each [closed form]
+		assertEquals(List.of("move R1 from 0805 to axial quarter (limiting element voltage 150 V → 250 V; 167 % → 100 % of the limit)",
+				"split R1 into 2 × 510 kΩ in series (100 V each, 83 % of the limit, was 167 %; total 1.02 MΩ for 1 MΩ)"),
+				fixes.stream().map(Fix::label).toList());
+	}
+
+	@Test
+	void snapAComputedValue(@TempDir Path dir) throws Exception {
+		Path design = dir.resolve("d.bulwark");
+		Files.writeString(design, """
+				design "computed"
+				reference net gnd
+				net a
+				source V1 (plus: a, minus: gnd) { voltage 5 V }
+				resistor R1 (a: a, b: gnd) { value 333 kΩ ± 5 % package 0805 rated power 125 mW }
+				""");
+		Fix fix = only(fixes(design), "preferred-value");
+		assertEquals("snap R1 to 330 kΩ", fix.label());
+		assertTrue(fix.applyTo(Files.readString(design)).contains("value 330 kΩ ± 5 %"));
+	}
+
+	@Test
 	void preferredValuesOfIec60063() {
 		assertEquals(96, PreferredValues.series(96).length);
 		assertArrayEquals(new double[] { 1.0, 1.5, 2.2, 3.3, 4.7, 6.8 }, PreferredValues.series(6), 0);

@@ -23,8 +23,8 @@ import bulwark.check.policy.ReviewPolicy;
  * a fix is offered only when the finding it targets is gone and no new error appears.
  */
 public final class QuickFixes {
-	private static final List<FixProvider> PROVIDERS = List.of(new RaiseRating(), new SplitResistor(),
-			new AddMissingRating(), new AddHysteresis(), new LimitClampCurrent(), new BlockReversePath());
+	private static final List<FixProvider> PROVIDERS = List.of(new RaiseRating(), new RaisePackage(), new SplitResistor(),
+			new AddMissingRating(), new AddHysteresis(), new LimitClampCurrent(), new BlockReversePath(), new SnapValue());
 	/** Proposals of one provider for one finding after the first verified one are not tried. */
 	private static final boolean FIRST_ONLY = true;
 
