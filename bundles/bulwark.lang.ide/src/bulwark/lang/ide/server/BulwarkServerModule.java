@@ -1,0 +1,17 @@
+package bulwark.lang.ide.server;
+
+import org.eclipse.xtext.ide.server.codeActions.ICodeActionService2;
+import org.eclipse.xtext.ide.server.hover.IHoverService;
+import org.eclipse.xtext.validation.IResourceValidator;
+
+import com.google.inject.AbstractModule;
+
+/** What the language server adds to the language's IDE services: the whole check, part hovers, quick fixes. */
+public class BulwarkServerModule extends AbstractModule {
+	@Override
+	protected void configure() {
+		bind(IResourceValidator.class).to(CheckingResourceValidator.class);
+		bind(IHoverService.class).to(PartHoverService.class);
+		bind(ICodeActionService2.class).to(QuickFixActions.class);
+	}
+}

@@ -1,0 +1,40 @@
+package bulwark.lang.ide.server;
+
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
+
+import com.google.inject.Singleton;
+
+import bulwark.check.DesignChecker;
+import bulwark.check.DesignResult;
+import bulwark.check.load.DesignLoader;
+import bulwark.lang.BulwarkStandaloneSetup;
+
+/**
+ * The language server's checker and the newest result of each open document, which hover and code actions
+ * read. The checker parses with the plain runtime (no IDE services), so that checking never re-enters the
+ * server's own validator.
+ */
+@Singleton
+public class Checks {
+	/** A document's text and what its check found. */
+	public record Checked(String text, DesignResult result) {
+	}
+
+	private final DesignChecker checker = new DesignChecker(
+			new DesignLoader(new BulwarkStandaloneSetup().createInjector()));
+	private final Map<String, Checked> latest = new ConcurrentHashMap<>();
+
+	public DesignChecker checker() {
+		return checker;
+	}
+
+	void put(String uri, Checked checked) {
+		latest.put(uri, checked);
+	}
+
+	/** The newest result for the document, or null before its first check. */
+	public Checked get(String uri) {
+		return latest.get(uri);
+	}
+}
