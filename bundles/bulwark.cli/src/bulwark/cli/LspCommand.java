@@ -11,7 +11,7 @@ import picocli.CommandLine.Command;
 		+ "formatting, symbols, go to definition. See docs/editors.md." })
 final class LspCommand implements Callable<Integer> {
 	@Override
-	public Integer call() throws InterruptedException {
+	public Integer call() throws Exception {
 		try {
 			BulwarkLanguageServer.start(System.in, System.out).get();
 		} catch (ExecutionException e) {

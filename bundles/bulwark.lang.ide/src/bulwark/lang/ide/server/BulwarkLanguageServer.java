@@ -19,6 +19,8 @@ import com.google.inject.Guice;
 import com.google.inject.Injector;
 import com.google.inject.util.Modules;
 
+import bulwark.check.DesignChecker;
+import bulwark.check.load.DesignLoader;
 import bulwark.lang.BulwarkRuntimeModule;
 import bulwark.lang.BulwarkStandaloneSetup;
 import bulwark.lang.ide.BulwarkIdeModule;
@@ -34,9 +36,12 @@ public final class BulwarkLanguageServer {
 
 	/** The server's injector, the language registered for both of its file extensions. */
 	public static Injector injector() {
-		new BulwarkStandaloneSetup().createInjectorAndDoEMFRegistration(); // EMF package registration
+		// the plain runtime (which registers the EMF package) parses for the checker; the language's services
+		// for the editor come from a second injector with the IDE and server modules mixed in
+		Injector runtime = new BulwarkStandaloneSetup().createInjectorAndDoEMFRegistration();
+		Checks checks = new Checks(new DesignChecker(new DesignLoader(runtime)));
 		Injector language = Guice.createInjector(
-				Modules2.mixin(new BulwarkRuntimeModule(), new BulwarkIdeModule(), new BulwarkServerModule()));
+				Modules2.mixin(new BulwarkRuntimeModule(), new BulwarkIdeModule(), new BulwarkServerModule(checks)));
 		IResourceServiceProvider provider = language.getInstance(IResourceServiceProvider.class);
 		IResourceServiceProvider.Registry registry = new ResourceServiceProviderRegistryImpl();
 		registry.getExtensionToFactoryMap().put("bulwark", provider);

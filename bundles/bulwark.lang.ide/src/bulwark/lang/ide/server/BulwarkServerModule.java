@@ -8,8 +8,16 @@ import com.google.inject.AbstractModule;
 
 /** What the language server adds to the language's IDE services: the whole check, part hovers, quick fixes. */
 public class BulwarkServerModule extends AbstractModule {
+	private final Checks checks;
+
+	/** @param checks the checker and results shared by validation, hover and code actions */
+	public BulwarkServerModule(Checks checks) {
+		this.checks = checks;
+	}
+
 	@Override
 	protected void configure() {
+		bind(Checks.class).toInstance(checks);
 		bind(IResourceValidator.class).to(CheckingResourceValidator.class);
 		bind(IHoverService.class).to(PartHoverService.class);
 		bind(ICodeActionService2.class).to(QuickFixActions.class);

@@ -21,9 +21,18 @@ public class Checks {
 	public record Checked(String text, DesignResult result) {
 	}
 
-	private final DesignChecker checker = new DesignChecker(
-			new DesignLoader(new BulwarkStandaloneSetup().createInjector()));
+	private final DesignChecker checker;
 	private final Map<String, Checked> latest = new ConcurrentHashMap<>();
+
+	/** With a checker of its own (tests, and a server started without one). */
+	public Checks() {
+		this(new DesignChecker(new DesignLoader(new BulwarkStandaloneSetup().createInjector())));
+	}
+
+	/** With the checker the server made from the language's plain runtime. */
+	public Checks(DesignChecker checker) {
+		this.checker = checker;
+	}
 
 	public DesignChecker checker() {
 		return checker;
