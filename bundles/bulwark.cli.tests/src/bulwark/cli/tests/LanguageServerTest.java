@@ -57,6 +57,7 @@ class LanguageServerTest {
 
 	@BeforeAll
 	static void start() throws Exception {
+		System.setProperty("bulwark.home", CliRun.root().toString()); // where the rules' explanations are
 		dir = Files.createTempDirectory("bulwark-lsp");
 		Files.copy(CliRun.root().resolve("examples/teaching-lab.bulwark-policy"), dir.resolve("teaching-lab.bulwark-policy"));
 		Path lab = dir.resolve("lab.bulwark");
@@ -119,6 +120,7 @@ class LanguageServerTest {
 				.get(30, TimeUnit.SECONDS);
 		String md = h.getContents().getRight().getValue();
 		assertTrue(md.contains("**R_DROP**") && md.contains("power: 960 mW in case 'normal, LAMP_OUT shorted to LAMP_RET'"), md);
+		assertTrue(md.contains("*resistor-power*: In some case, a resistor turns more power into heat"), md); // the rule's explanation
 	}
 
 	@Test
@@ -148,6 +150,26 @@ class LanguageServerTest {
 				.get(30, TimeUnit.SECONDS);
 		int line = definition.getLeft().get(0).getRange().getStart().getLine();
 		assertEquals("net lamp", text.lines().toList().get(line).strip());
+	}
+
+	@Test
+	void completionOffersPinsSettingsAndUnitsOfTheKind() throws Exception {
+		String probe = "design \"probe\"\nreference net gnd\nnet a\nled D1 (";
+		String probeUri = dir.resolve("probe.bulwark").toUri().toString();
+		server.getTextDocumentService().didOpen(new DidOpenTextDocumentParams(new TextDocumentItem(probeUri, "bulwark", 1, probe)));
+		var pins = server.getTextDocumentService().completion(new org.eclipse.lsp4j.CompletionParams(
+				new TextDocumentIdentifier(probeUri), new Position(3, 8))).get(30, TimeUnit.SECONDS);
+		List<String> labels = pins.getRight().getItems().stream().map(i -> i.getLabel()).toList();
+		assertTrue(labels.contains("anode: ") && labels.contains("cathode: "), labels.toString());
+		String withBlock = "design \"probe\"\nreference net gnd\nnet a\nled D1 (anode: a, cathode: gnd) { rated ";
+		server.getTextDocumentService().didChange(new org.eclipse.lsp4j.DidChangeTextDocumentParams(
+				new org.eclipse.lsp4j.VersionedTextDocumentIdentifier(probeUri, 2),
+				List.of(new org.eclipse.lsp4j.TextDocumentContentChangeEvent(withBlock))));
+		var ratings = server.getTextDocumentService().completion(new org.eclipse.lsp4j.CompletionParams(
+				new TextDocumentIdentifier(probeUri), new Position(3, withBlock.lines().toList().get(3).length())))
+				.get(30, TimeUnit.SECONDS);
+		List<String> names = ratings.getRight().getItems().stream().map(i -> i.getLabel()).toList();
+		assertTrue(names.contains("reverse ") && names.contains("forward "), names.toString());
 	}
 
 	@Test

@@ -1,5 +1,12 @@
 package bulwark.lang.ide;
 
-/** Guice bindings of the UI-free IDE services (content assist now; quick fixes and the language server later). */
+import org.eclipse.xtext.ide.editor.contentassist.IdeContentProposalProvider;
+
+import bulwark.lang.ide.contentassist.BulwarkProposalProvider;
+
+/** Guice bindings of the UI-free IDE services: completion from the kind catalogue. */
 public class BulwarkIdeModule extends AbstractBulwarkIdeModule {
+	public Class<? extends IdeContentProposalProvider> bindIdeContentProposalProvider() {
+		return BulwarkProposalProvider.class;
+	}
 }

@@ -37,6 +37,18 @@ public class CheckingResourceValidator extends ResourceValidatorImpl {
 			return issues;
 		}
 		String text = x.getParseResult().getRootNode().getText();
+		if (bulwark.check.InputLimits.check(text).isPresent()) {
+			Issue.IssueImpl refused = new Issue.IssueImpl();
+			refused.setSeverity(Severity.ERROR);
+			refused.setMessage("not checked: " + bulwark.check.InputLimits.check(text).get().message());
+			refused.setCode("file");
+			refused.setLineNumber(1);
+			refused.setColumn(1);
+			refused.setOffset(0);
+			refused.setLength(0);
+			issues.add(refused);
+			return issues;
+		}
 		String file = resource.getURI().isFile() ? resource.getURI().toFileString() : resource.getURI().lastSegment();
 		DesignResult result;
 		try {

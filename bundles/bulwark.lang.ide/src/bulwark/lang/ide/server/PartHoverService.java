@@ -17,10 +17,12 @@ import com.google.inject.Inject;
 
 import bulwark.check.WorstStress;
 import bulwark.check.rules.Figures;
+import bulwark.check.rules.RulePages;
 
 /**
  * Hovering over a part's name shows its worst stress against each derated rating and the case it happens
- * in, then its findings; elsewhere Xtext's own hover.
+ * in, then its findings, each with what its rule finds (from the rule's explanation page); elsewhere Xtext's
+ * own hover.
  */
 public class PartHoverService extends HoverService {
 	@Inject
@@ -56,7 +58,9 @@ public class PartHoverService extends HoverService {
 			return super.hover(document, resource, params, cancel);
 		}
 		String findings = checked.result().findings().stream().filter(f -> word.equals(f.part()))
-				.map(f -> "- **" + f.severity().id() + "** " + f.rule() + ": " + f.message()).collect(Collectors.joining("\n"));
+				.map(f -> "- **" + f.severity().id() + "** " + f.rule() + ": " + f.message()
+						+ RulePages.what(f.rule()).map(w -> "\n\n  *" + f.rule() + "*: " + w.replace("\n", " ")).orElse(""))
+				.collect(Collectors.joining("\n"));
 		String body = "**" + word + "**, worst stress per rating\n\n" + md + (findings.isEmpty() ? "" : "\n" + findings);
 		return new Hover(new MarkupContent(MarkupKind.MARKDOWN, body),
 				new Range(document.getPosition(start), document.getPosition(end)));
