@@ -4,8 +4,10 @@ import org.eclipse.ui.IPageLayout;
 import org.eclipse.ui.IPerspectiveFactory;
 
 import bulwark.ui.findings.FindingsView;
+import bulwark.ui.stress.StressMapView;
+import bulwark.ui.sweep.SweepView;
 
-/** The editor with the findings below it. */
+/** The editor with the findings below it, and the stress map and threshold sweep beside them. */
 public class ReviewPerspective implements IPerspectiveFactory {
 	public static final String ID = "bulwark.ui.perspective";
 
@@ -13,5 +15,8 @@ public class ReviewPerspective implements IPerspectiveFactory {
 	public void createInitialLayout(IPageLayout layout) {
 		layout.setEditorAreaVisible(true);
 		layout.addView(FindingsView.ID, IPageLayout.BOTTOM, 0.62f, layout.getEditorArea());
+		var right = layout.createFolder("bulwark.ui.right", IPageLayout.RIGHT, 0.58f, layout.getEditorArea());
+		right.addView(StressMapView.ID);
+		right.addView(SweepView.ID);
 	}
 }

@@ -27,6 +27,7 @@ public class DesignEditor extends TextEditor {
 	public static final String ID = "bulwark.ui.designEditor";
 
 	private volatile DesignResult lastResult;
+	private final FixProposals fixProposals = new FixProposals(this);
 	private volatile boolean closed;
 
 	public DesignEditor() {
@@ -88,6 +89,11 @@ public class DesignEditor extends TextEditor {
 			return Path.of(input.getURI());
 		}
 		return null;
+	}
+
+	/** The quick fixes of this editor (what Ctrl+1 shows). */
+	public FixProposals fixProposals() {
+		return fixProposals;
 	}
 
 	/** The newest check result, or null before the first check finished. */

@@ -2,12 +2,14 @@ package bulwark.ui.editor;
 
 import org.eclipse.jface.preference.IPreferenceStore;
 import org.eclipse.jface.text.ITextHover;
+import org.eclipse.jface.text.quickassist.IQuickAssistAssistant;
+import org.eclipse.jface.text.quickassist.QuickAssistAssistant;
 import org.eclipse.jface.text.reconciler.IReconciler;
 import org.eclipse.jface.text.reconciler.MonoReconciler;
 import org.eclipse.jface.text.source.ISourceViewer;
 import org.eclipse.ui.editors.text.TextSourceViewerConfiguration;
 
-/** Installs the background check. */
+/** Installs the background check, the part hover and the quick fixes. */
 class DesignSourceViewerConfiguration extends TextSourceViewerConfiguration {
 	/** Pause after the last keystroke before a check starts. */
 	static final int DEBOUNCE_MS = 150;
@@ -22,6 +24,15 @@ class DesignSourceViewerConfiguration extends TextSourceViewerConfiguration {
 	@Override
 	public ITextHover getTextHover(ISourceViewer sourceViewer, String contentType) {
 		return new PartHover(editor);
+	}
+
+	/** Ctrl+1 offers the quick fixes of the findings on the caret's line. */
+	@Override
+	public IQuickAssistAssistant getQuickAssistAssistant(ISourceViewer sourceViewer) {
+		QuickAssistAssistant assistant = new QuickAssistAssistant();
+		assistant.setQuickAssistProcessor(editor.fixProposals());
+		assistant.setInformationControlCreator(getInformationControlCreator(sourceViewer));
+		return assistant;
 	}
 
 	@Override

@@ -1,0 +1,93 @@
+package bulwark.ui.tests;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.function.BooleanSupplier;
+
+import org.eclipse.swt.graphics.RGB;
+import org.eclipse.swt.widgets.Display;
+import org.eclipse.ui.IWorkbenchPage;
+import org.eclipse.ui.PlatformUI;
+import org.junit.jupiter.api.Test;
+
+import bulwark.ui.Application;
+import bulwark.ui.Screenshot;
+import bulwark.ui.editor.DesignEditor;
+import bulwark.ui.stress.StressMapView;
+import bulwark.ui.stress.UtilisationScale;
+import bulwark.ui.sweep.SweepView;
+
+/** The stress map and the threshold sweep follow the design being edited. */
+class ReviewViewsUiTest {
+	private static final Path ROOT = Path.of(System.getProperty("bulwark.root", "../..")).toAbsolutePath().normalize();
+	private static final Path MARINA = ROOT.resolve("examples/marina-bilge-switch-tester.bulwark");
+
+	private static IWorkbenchPage page() {
+		return PlatformUI.getWorkbench().getActiveWorkbenchWindow().getActivePage();
+	}
+
+	private static boolean waitUntil(BooleanSupplier condition) {
+		Display display = Display.getCurrent();
+		long deadline = System.currentTimeMillis() + 60_000;
+		while (System.currentTimeMillis() < deadline) {
+			if (condition.getAsBoolean()) {
+				return true;
+			}
+			while (display.readAndDispatch()) {
+				// keep the UI and the background checks going
+			}
+			display.timerExec(50, () -> {
+			});
+			display.sleep();
+		}
+		return condition.getAsBoolean();
+	}
+
+	@Test
+	void stressMapAndSweepShowTheDesign() throws Exception {
+		StressMapView map = (StressMapView) page().showView(StressMapView.ID);
+		DesignEditor editor = Application.openFile(page(), MARINA);
+		assertTrue(waitUntil(() -> editor.lastResult() != null && map.shownRows().stream().anyMatch(r -> r.part().equals("R_BASE"))),
+				"the stress map does not show R_BASE");
+		StressMapView.Row base = map.shownRows().stream().filter(r -> r.part().equals("R_BASE")).findFirst().orElseThrow();
+		assertTrue(base.worst() > 0, base.toString());
+		assertEquals(editor.lastResult().cases().size(), base.perCase().size());
+		Screenshot.save(PlatformUI.getWorkbench().getActiveWorkbenchWindow().getShell(),
+				ROOT.resolve("bundles/bulwark.ui.tests/target/screenshots/stress-map.png"));
+		SweepView sweep = (SweepView) page().showView(SweepView.ID);
+		page().activate(editor);
+		page().showView(SweepView.ID);
+		assertTrue(waitUntil(() -> sweep.shownPair() != null), "no sweep drawn");
+		assertEquals("TIP", sweep.shownPair().from());
+		Screenshot.save(PlatformUI.getWorkbench().getActiveWorkbenchWindow().getShell(),
+				ROOT.resolve("bundles/bulwark.ui.tests/target/screenshots/threshold-sweep.png"));
+	}
+
+	@Test
+	void aQuickFixThroughTheCtrl1Api() throws Exception {
+		Path dir = java.nio.file.Files.createTempDirectory("bulwark-fix");
+		Path lab = dir.resolve("lab.bulwark");
+		java.nio.file.Files.copy(ROOT.resolve("examples/lab-indicator-seeded.bulwark"), lab);
+		java.nio.file.Files.copy(ROOT.resolve("examples/teaching-lab.bulwark-policy"), dir.resolve("teaching-lab.bulwark-policy"));
+		DesignEditor editor = Application.openFile(page(), lab);
+		assertTrue(waitUntil(() -> editor.lastResult() != null
+				&& editor.lastResult().findings().stream().anyMatch(f -> f.rule().equals("resistor-power"))));
+		var fixes = editor.fixProposals().fixesAt(22);
+		assertEquals("raise R_DROP's rated power 125 mW → 2 W (1280 % → 80 % of the limit)", fixes.get(0).label());
+		editor.fixProposals().apply(fixes.get(0));
+		assertTrue(waitUntil(() -> editor.lastResult().findings().stream().noneMatch(f -> f.rule().equals("resistor-power"))),
+				"the finding stays after its fix");
+		assertTrue(editor.isDirty());
+	}
+
+	@Test
+	void theScaleRunsFromCoolToWarmToDark() {
+		RGB cool = UtilisationScale.of(0), limit = UtilisationScale.of(1), over = UtilisationScale.of(2);
+		assertTrue(cool.blue > cool.red, cool.toString());
+		assertTrue(limit.red > limit.blue, limit.toString());
+		float[] a = limit.getHSB(), b = over.getHSB();
+		assertTrue(b[2] < a[2], "darker beyond the limit");
+	}
+}
