@@ -56,6 +56,14 @@ class ReviewViewsUiTest {
 		assertEquals(editor.lastResult().cases().size(), base.perCase().size());
 		Screenshot.save(PlatformUI.getWorkbench().getActiveWorkbenchWindow().getShell(),
 				ROOT.resolve("bundles/bulwark.ui.tests/target/screenshots/stress-map.png"));
+		bulwark.ui.findings.FindingsView findings = (bulwark.ui.findings.FindingsView) page()
+				.showView(bulwark.ui.findings.FindingsView.ID);
+		page().activate(editor);
+		assertTrue(waitUntil(() -> findings.shownFindings() != null && !findings.shownFindings().isEmpty()));
+		findings.filter("error", "reverse-path");
+		assertTrue(!findings.visibleFindings().isEmpty()
+				&& findings.visibleFindings().stream().allMatch(f -> f.concern().id().equals("reverse-path")));
+		findings.filter("all", "all");
 		SweepView sweep = (SweepView) page().showView(SweepView.ID);
 		page().activate(editor);
 		page().showView(SweepView.ID);

@@ -1,7 +1,11 @@
 package bulwark.ui.editor;
 
 import org.eclipse.jface.preference.IPreferenceStore;
+import org.eclipse.jface.text.IDocument;
 import org.eclipse.jface.text.ITextHover;
+import org.eclipse.jface.text.presentation.IPresentationReconciler;
+import org.eclipse.jface.text.presentation.PresentationReconciler;
+import org.eclipse.jface.text.rules.DefaultDamagerRepairer;
 import org.eclipse.jface.text.quickassist.IQuickAssistAssistant;
 import org.eclipse.jface.text.quickassist.QuickAssistAssistant;
 import org.eclipse.jface.text.reconciler.IReconciler;
@@ -9,7 +13,7 @@ import org.eclipse.jface.text.reconciler.MonoReconciler;
 import org.eclipse.jface.text.source.ISourceViewer;
 import org.eclipse.ui.editors.text.TextSourceViewerConfiguration;
 
-/** Installs the background check, the part hover and the quick fixes. */
+/** Installs the highlighting, the background check, the part hover and the quick fixes. */
 class DesignSourceViewerConfiguration extends TextSourceViewerConfiguration {
 	/** Pause after the last keystroke before a check starts. */
 	static final int DEBOUNCE_MS = 150;
@@ -24,6 +28,16 @@ class DesignSourceViewerConfiguration extends TextSourceViewerConfiguration {
 	@Override
 	public ITextHover getTextHover(ISourceViewer sourceViewer, String contentType) {
 		return new PartHover(editor);
+	}
+
+	/** Lexical highlighting of the whole text (one content type). */
+	@Override
+	public IPresentationReconciler getPresentationReconciler(ISourceViewer sourceViewer) {
+		PresentationReconciler reconciler = new PresentationReconciler();
+		DefaultDamagerRepairer dr = new DefaultDamagerRepairer(new DesignScanner(sourceViewer.getTextWidget().getDisplay()));
+		reconciler.setDamager(dr, IDocument.DEFAULT_CONTENT_TYPE);
+		reconciler.setRepairer(dr, IDocument.DEFAULT_CONTENT_TYPE);
+		return reconciler;
 	}
 
 	/** Ctrl+1 offers the quick fixes of the findings on the caret's line. */

@@ -92,6 +92,8 @@ final class PartHover implements ITextHover {
 			if (part.equals(f.part())) {
 				text.append('\n').append(f.severity().id()).append(f.waived() ? " (waived) " : " ").append(f.rule())
 						.append(": ").append(f.message());
+				bulwark.check.rules.RulePages.what(f.rule())
+						.ifPresent(w -> text.append("\n    (").append(f.rule()).append(": ").append(w.replace('\n', ' ')).append(')'));
 			}
 		}
 		return text.toString();

@@ -9,6 +9,12 @@ import org.eclipse.jface.viewers.ColumnLabelProvider;
 import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.jface.viewers.TableViewer;
 import org.eclipse.jface.viewers.TableViewerColumn;
+import org.eclipse.jface.viewers.Viewer;
+import org.eclipse.jface.viewers.ViewerFilter;
+import org.eclipse.swt.layout.GridData;
+import org.eclipse.swt.layout.GridLayout;
+import org.eclipse.swt.widgets.Combo;
+import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.graphics.Image;
 import org.eclipse.swt.widgets.Composite;
@@ -20,11 +26,15 @@ import org.eclipse.ui.IWorkbenchPartReference;
 import org.eclipse.ui.PlatformUI;
 import org.eclipse.ui.part.ViewPart;
 
+import bulwark.check.Concern;
 import bulwark.check.DesignResult;
 import bulwark.check.Finding;
 import bulwark.ui.editor.DesignEditor;
 
-/** The findings of the design being edited: one row each; double-click jumps to the text. */
+/**
+ * The findings of the design being edited: one row each, filtered by severity and concern; double-click
+ * jumps to the text.
+ */
 public class FindingsView extends ViewPart {
 	public static final String ID = "bulwark.ui.findings";
 
@@ -32,9 +42,36 @@ public class FindingsView extends ViewPart {
 	private DesignEditor editor;
 	private final BiConsumer<DesignEditor, DesignResult> listener = this::show;
 
+	private String severityShown = "all", concernShown = "all";
+
 	@Override
 	public void createPartControl(Composite parent) {
+		parent.setLayout(new GridLayout(1, false));
+		Composite filters = new Composite(parent, SWT.NONE);
+		filters.setLayout(new GridLayout(4, false));
+		new Label(filters, SWT.NONE).setText("Severity:");
+		Combo severity = new Combo(filters, SWT.READ_ONLY);
+		severity.setItems("all", "error", "warning", "info");
+		severity.select(0);
+		new Label(filters, SWT.NONE).setText("Concern:");
+		Combo concern = new Combo(filters, SWT.READ_ONLY);
+		concern.add("all");
+		for (Concern c : Concern.values()) {
+			concern.add(c.id());
+		}
+		concern.select(0);
+		severity.addListener(SWT.Selection, e -> filter(severity.getText(), concernShown));
+		concern.addListener(SWT.Selection, e -> filter(severityShown, concern.getText()));
 		viewer = new TableViewer(parent, SWT.FULL_SELECTION | SWT.V_SCROLL | SWT.H_SCROLL | SWT.BORDER);
+		viewer.getControl().setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
+		viewer.addFilter(new ViewerFilter() {
+			@Override
+			public boolean select(Viewer v, Object parentElement, Object element) {
+				Finding f = (Finding) element;
+				return (severityShown.equals("all") || f.severity().id().equals(severityShown))
+						&& (concernShown.equals("all") || f.concern().id().equals(concernShown));
+			}
+		});
 		Table table = viewer.getTable();
 		table.setHeaderVisible(true);
 		table.setLinesVisible(true);
@@ -110,6 +147,19 @@ public class FindingsView extends ViewPart {
 		viewer.setInput(result.findings());
 		setContentDescription((result.title() == null ? result.file() : result.title()) + ": "
 				+ result.status().id() + ", " + result.findings().size() + " finding(s)");
+	}
+
+	/** Shows only the findings of a severity and a concern ("all" for any); the filter the view's combos set. */
+	public void filter(String severity, String concern) {
+		severityShown = severity;
+		concernShown = concern;
+		viewer.refresh();
+	}
+
+	/** The findings the filter lets through, for tests. */
+	public List<Finding> visibleFindings() {
+		return shownFindings().stream().filter(f -> (severityShown.equals("all") || f.severity().id().equals(severityShown))
+				&& (concernShown.equals("all") || f.concern().id().equals(concernShown))).toList();
 	}
 
 	/** The findings now listed, for tests. */
