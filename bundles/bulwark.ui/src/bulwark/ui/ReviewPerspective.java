@@ -3,6 +3,7 @@ package bulwark.ui;
 import org.eclipse.ui.IPageLayout;
 import org.eclipse.ui.IPerspectiveFactory;
 
+import bulwark.ui.cases.CasesView;
 import bulwark.ui.findings.FindingsView;
 import bulwark.ui.stress.StressMapView;
 import bulwark.ui.sweep.SweepView;
@@ -18,5 +19,6 @@ public class ReviewPerspective implements IPerspectiveFactory {
 		var right = layout.createFolder("bulwark.ui.right", IPageLayout.RIGHT, 0.58f, layout.getEditorArea());
 		right.addView(StressMapView.ID);
 		right.addView(SweepView.ID);
+		right.addView(CasesView.ID);
 	}
 }

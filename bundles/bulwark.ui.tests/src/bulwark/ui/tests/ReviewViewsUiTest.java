@@ -64,6 +64,11 @@ class ReviewViewsUiTest {
 		assertTrue(!findings.visibleFindings().isEmpty()
 				&& findings.visibleFindings().stream().allMatch(f -> f.concern().id().equals("reverse-path")));
 		findings.filter("all", "all");
+		bulwark.ui.cases.CasesView cases = (bulwark.ui.cases.CasesView) page().showView(bulwark.ui.cases.CasesView.ID);
+		page().activate(editor);
+		page().showView(bulwark.ui.cases.CasesView.ID);
+		assertTrue(waitUntil(() -> cases.shownCases() != null && cases.shownCases().size() == editor.lastResult().cases().size()
+				&& !cases.shownCases().isEmpty()), "the cases view does not list the cases");
 		SweepView sweep = (SweepView) page().showView(SweepView.ID);
 		page().activate(editor);
 		page().showView(SweepView.ID);
