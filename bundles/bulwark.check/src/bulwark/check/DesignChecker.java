@@ -221,6 +221,29 @@ public final class DesignChecker {
 				List.of(Finding.plain("policy", Concern.STRUCTURE, Severity.ERROR, message, null, where)));
 	}
 
+	/**
+	 * Checks a review policy's text as an editor shows it: its language issues and the problems that would
+	 * stop its use (an unknown rule), each located in the policy's own text; status error when it cannot be
+	 * used, pass otherwise. Nothing is solved.
+	 */
+	public DesignResult checkPolicy(String text, String file) {
+		Optional<Finding> refused = InputLimits.check(text);
+		if (refused.isPresent()) {
+			return notChecked(file, refused.get().message(), refused.get().location());
+		}
+		var loaded = loader.loadPolicy(text, file);
+		List<Finding> findings = new ArrayList<>();
+		for (Issue issue : loaded.issues()) {
+			findings.add(LanguageFindings.of(issue));
+		}
+		String title = loaded.policy() == null ? null : loaded.policy().getTitle();
+		if (loaded.policy() != null && findings.stream().noneMatch(f -> f.severity() == Severity.ERROR)) {
+			bulwark.check.policy.PolicyCompiler.compile(loaded.policy(), findings::add);
+		}
+		boolean errors = findings.stream().anyMatch(f -> f.severity() == Severity.ERROR) || loaded.policy() == null;
+		return new DesignResult(file, title, errors ? Status.ERROR : Status.PASS, findings, List.of());
+	}
+
 	/** A design refused before it was read: one finding saying why, status error. */
 	/** A design whose check stopped: one solver finding saying why, status error. */
 	private static DesignResult notChecked(String file, String rule, String reason) {

@@ -96,6 +96,18 @@ class ReviewViewsUiTest {
 	}
 
 	@Test
+	void aReviewPolicyOpensWithItsProblemsMarked() throws Exception {
+		Path dir = java.nio.file.Files.createTempDirectory("bulwark-policy");
+		Path policy = dir.resolve("team.bulwark-policy");
+		java.nio.file.Files.writeString(policy, "policy \"team\"\n  mains 230 V ± 10 %\n  severity \"no-such-rule\" error\n");
+		DesignEditor editor = Application.openFile(page(), policy);
+		assertTrue(waitUntil(() -> editor.lastResult() != null && !editor.findingAnnotations().isEmpty()),
+				"no problem marked in the policy");
+		assertEquals(2, editor.lineOf(editor.findingAnnotations().get(0)), "on the severity line");
+		assertTrue(editor.lastResult().findings().get(0).message().contains("no rule Bulwark has"));
+	}
+
+	@Test
 	void theScaleRunsFromCoolToWarmToDark() {
 		RGB cool = UtilisationScale.of(0), limit = UtilisationScale.of(1), over = UtilisationScale.of(2);
 		assertTrue(cool.blue > cool.red, cool.toString());

@@ -71,8 +71,9 @@ final class CheckingStrategy implements IReconcilingStrategy, IReconcilingStrate
 			return;
 		}
 		String text = doc.get();
-		DesignResult result = BulwarkUi.checker().check(text, fileName(),
-				() -> monitor != null && monitor.isCanceled());
+		// a review policy is validated, not solved
+		DesignResult result = fileName().endsWith(".bulwark-policy") ? BulwarkUi.checker().checkPolicy(text, fileName())
+				: BulwarkUi.checker().check(text, fileName(), () -> monitor != null && monitor.isCanceled());
 		if (editor.isClosed() || !text.equals(doc.get())) {
 			return; // closed, or the engineer typed on and the next reconcile brings the newer result
 		}
