@@ -15,8 +15,8 @@ import bulwark.lang.design.PartKind;
  * nearer its positive supply).
  */
 public final class IndicatorState {
-	/** Forward current at which an LED is visibly lit [common practice: about 1 mA for an indicator LED]. */
-	static final double LED_ON = 1e-3;
+	/** Forward current at which an LED is visibly lit: the same as an LED under test (FunctionAnalysis). */
+	static final double LED_ON = FunctionAnalysis.LED_LIT;
 	/** Activation current of an indicator when the design gives none; as DeviceModels [common practice]. */
 	static final double INDICATOR_ON = 1e-3;
 

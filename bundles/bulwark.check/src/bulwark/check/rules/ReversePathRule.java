@@ -42,9 +42,9 @@ public final class ReversePathRule implements Rule {
 	static final double CONDUCTING = 1e-6;
 	/** A junction reverse-biased by more than this blocks [common practice: well clear of forward conduction]. */
 	static final double REVERSE_BIASED = 0.1;
-	/** A zener within this fraction of its breakdown voltage conducts. */
+	/** A zener within this fraction of its breakdown voltage conducts [common practice: its knee is soft]. */
 	static final double BREAKING = 0.9;
-	/** A protector at this fraction of its trip current is limiting, not conducting freely. */
+	/** A protector at this fraction of its trip current is limiting, not conducting freely [common practice]. */
 	static final double TRIPPED = 0.9;
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.REVERSE_PATH, Severity.ERROR,
 			"an abuse at the terminals reaches an over-stressed part through nothing that blocks it");
@@ -178,8 +178,8 @@ public final class ReversePathRule implements Rule {
 				return true;
 			}
 			if (part.getKind() == PartKind.ZENER) {
-				double knee = Settings.parameter(part, "breakdown").orElse(Double.POSITIVE_INFINITY);
-				return reverse >= BREAKING * knee;
+				double breakdown = Settings.parameter(part, "breakdown").orElse(Double.POSITIVE_INFINITY);
+				return reverse >= BREAKING * breakdown;
 			}
 			return reverse > Settings.rating(part, "reverse").orElse(Double.POSITIVE_INFINITY);
 		}
