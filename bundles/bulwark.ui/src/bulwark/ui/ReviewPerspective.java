@@ -7,6 +7,7 @@ import bulwark.ui.cases.CasesView;
 import bulwark.ui.findings.FindingsView;
 import bulwark.ui.stress.StressMapView;
 import bulwark.ui.sweep.SweepView;
+import bulwark.ui.topology.TopologyView;
 
 /** The editor with the findings below it, and the stress map and threshold sweep beside them. */
 public class ReviewPerspective implements IPerspectiveFactory {
@@ -20,5 +21,6 @@ public class ReviewPerspective implements IPerspectiveFactory {
 		right.addView(StressMapView.ID);
 		right.addView(SweepView.ID);
 		right.addView(CasesView.ID);
+		right.addView(TopologyView.ID);
 	}
 }

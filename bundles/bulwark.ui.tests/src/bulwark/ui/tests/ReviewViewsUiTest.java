@@ -69,6 +69,19 @@ class ReviewViewsUiTest {
 		page().showView(bulwark.ui.cases.CasesView.ID);
 		assertTrue(waitUntil(() -> cases.shownCases() != null && cases.shownCases().size() == editor.lastResult().cases().size()
 				&& !cases.shownCases().isEmpty()), "the cases view does not list the cases");
+		bulwark.ui.topology.TopologyView topology = (bulwark.ui.topology.TopologyView) page()
+				.showView(bulwark.ui.topology.TopologyView.ID);
+		page().activate(editor);
+		page().showView(bulwark.ui.topology.TopologyView.ID);
+		assertTrue(waitUntil(() -> topology.shownDrawing() != null), "no topology drawn");
+		var boxes = topology.shownDrawing().boxes();
+		assertTrue(boxes.stream().anyMatch(b -> b.name().equals("R_BASE") && b.kind().equals("resistor")), boxes.toString());
+		// terminals in the first layer: left of every part
+		double terminalX = boxes.stream().filter(b -> b.kind().equals("terminal")).mapToDouble(b -> b.x()).max().orElseThrow();
+		double partX = boxes.stream().filter(b -> b.kind().equals("resistor")).mapToDouble(b -> b.x()).min().orElseThrow();
+		assertTrue(terminalX < partX, "terminals on the left");
+		Screenshot.save(PlatformUI.getWorkbench().getActiveWorkbenchWindow().getShell(),
+				ROOT.resolve("bundles/bulwark.ui.tests/target/screenshots/topology.png"));
 		SweepView sweep = (SweepView) page().showView(SweepView.ID);
 		page().activate(editor);
 		page().showView(SweepView.ID);
