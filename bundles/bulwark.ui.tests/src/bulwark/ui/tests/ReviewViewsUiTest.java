@@ -109,6 +109,24 @@ class ReviewViewsUiTest {
 	}
 
 	@Test
+	void aWaiverFromAFinding() throws Exception {
+		Path dir = java.nio.file.Files.createTempDirectory("bulwark-waive");
+		Path lab = dir.resolve("lab.bulwark");
+		java.nio.file.Files.copy(ROOT.resolve("examples/lab-indicator-seeded.bulwark"), lab);
+		java.nio.file.Files.copy(ROOT.resolve("examples/teaching-lab.bulwark-policy"), dir.resolve("teaching-lab.bulwark-policy"));
+		bulwark.ui.findings.FindingsView findings = (bulwark.ui.findings.FindingsView) page()
+				.showView(bulwark.ui.findings.FindingsView.ID);
+		DesignEditor editor = Application.openFile(page(), lab);
+		assertTrue(waitUntil(() -> findings.shownFindings() != null
+				&& findings.shownFindings().stream().anyMatch(f -> f.rule().equals("resistor-power"))));
+		var finding = findings.shownFindings().stream().filter(f -> f.rule().equals("resistor-power")).findFirst().orElseThrow();
+		findings.waive(finding, "the \"lamp\" test lasts 10 ms", "A. Reviewer");
+		assertTrue(waitUntil(() -> editor.lastResult().findings().stream()
+				.anyMatch(f -> f.rule().equals("resistor-power") && f.waived())), "the finding is not waived");
+		assertEquals(bulwark.check.Status.PASS, editor.lastResult().status());
+	}
+
+	@Test
 	void aReviewPolicyOpensWithItsProblemsMarked() throws Exception {
 		Path dir = java.nio.file.Files.createTempDirectory("bulwark-policy");
 		Path policy = dir.resolve("team.bulwark-policy");

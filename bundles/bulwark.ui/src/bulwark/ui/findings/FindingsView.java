@@ -4,7 +4,16 @@ import java.util.List;
 import java.util.function.BiConsumer;
 import java.util.function.Function;
 
+import java.time.LocalDate;
+
+import org.eclipse.jface.action.Action;
+import org.eclipse.jface.action.MenuManager;
+import org.eclipse.jface.dialogs.InputDialog;
+import org.eclipse.jface.dialogs.MessageDialog;
+import org.eclipse.jface.text.BadLocationException;
+import org.eclipse.jface.text.IDocument;
 import org.eclipse.jface.viewers.ArrayContentProvider;
+import org.eclipse.jface.window.Window;
 import org.eclipse.jface.viewers.ColumnLabelProvider;
 import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.jface.viewers.TableViewer;
@@ -91,6 +100,17 @@ public class FindingsView extends ViewPart {
 				editor.selectAndReveal(f.location().offset(), f.location().length());
 			}
 		});
+		MenuManager menu = new MenuManager();
+		menu.add(new Action("Waive…") {
+			@Override
+			public void run() {
+				Object o = viewer.getStructuredSelection().getFirstElement();
+				if (o instanceof Finding f) {
+					askAndWaive(f);
+				}
+			}
+		});
+		viewer.getControl().setMenu(menu.createContextMenu(viewer.getControl()));
 		setContentDescription("No design checked yet.");
 		FindingsHub.subscribe(listener);
 		getSite().getPage().addPartListener(activation);
@@ -147,6 +167,35 @@ public class FindingsView extends ViewPart {
 		viewer.setInput(result.findings());
 		setContentDescription((result.title() == null ? result.file() : result.title()) + ": "
 				+ result.status().id() + ", " + result.findings().size() + " finding(s)");
+	}
+
+	/** Asks for the justification and the name the review policy wants, then writes the waiver. */
+	private void askAndWaive(Finding f) {
+		if (f.part() == null || editor == null) {
+			MessageDialog.openInformation(getSite().getShell(), "Waive", "Only a finding on a part can be waived.");
+			return;
+		}
+		InputDialog why = new InputDialog(getSite().getShell(), "Waive " + f.rule() + " on " + f.part(),
+				"Why is this finding acceptable? (kept with the waiver in every report)", "",
+				t -> t.isBlank() ? "A justification is needed" : null);
+		if (why.open() != Window.OK) {
+			return;
+		}
+		InputDialog who = new InputDialog(getSite().getShell(), "Waive " + f.rule() + " on " + f.part(),
+				"Who accepts it?", System.getProperty("user.name", ""), t -> t.isBlank() ? "A name is needed" : null);
+		if (who.open() == Window.OK) {
+			waive(f, why.getValue(), who.getValue());
+		}
+	}
+
+	/** Appends a waiver of the finding to the design in the editor; what "Waive…" does after asking. */
+	public void waive(Finding f, String justification, String who) {
+		IDocument doc = editor.getDocumentProvider().getDocument(editor.getEditorInput());
+		try {
+			doc.replace(doc.getLength(), 0, WaiverText.of(f, justification, who, LocalDate.now()));
+		} catch (BadLocationException e) {
+			throw new IllegalStateException(e);
+		}
 	}
 
 	/** Shows only the findings of a severity and a concern ("all" for any); the filter the view's combos set. */
