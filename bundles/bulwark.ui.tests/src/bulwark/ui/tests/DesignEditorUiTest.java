@@ -105,8 +105,11 @@ class DesignEditorUiTest {
 		assertTrue(waitUntil(() -> powerAnnotation(editor).isPresent()), "no power finding marked in the editor");
 		IDocument doc = editor.getDocumentProvider().getDocument(editor.getEditorInput());
 		int at = doc.get().indexOf("rated power 125 mW");
+		long typed = System.nanoTime();
 		doc.replace(at, "rated power 125 mW".length(), "rated power 2 W");
 		assertTrue(waitUntil(() -> powerAnnotation(editor).isEmpty()), "power finding still shown after the fix");
+		// a measurement for docs/performance.md, not a pass mark: the pause before a check plus the check
+		System.out.println("keystroke to updated markers: " + (System.nanoTime() - typed) / 1_000_000 + " ms");
 		assertTrue(waitUntil(() -> view.shownFindings().stream().noneMatch(f -> f.rule().equals("resistor-power"))),
 				"findings view still lists the power finding after the fix");
 		assertTrue(editor.isDirty());

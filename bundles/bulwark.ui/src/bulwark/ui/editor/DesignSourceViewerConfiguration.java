@@ -16,7 +16,7 @@ import org.eclipse.ui.editors.text.TextSourceViewerConfiguration;
 /** Installs the highlighting, the background check, the part hover and the quick fixes. */
 class DesignSourceViewerConfiguration extends TextSourceViewerConfiguration {
 	/** Pause after the last keystroke before a check starts. */
-	static final int DEBOUNCE_MS = 150;
+	static final int DEBOUNCE_MS = 50;
 
 	private final DesignEditor editor;
 
