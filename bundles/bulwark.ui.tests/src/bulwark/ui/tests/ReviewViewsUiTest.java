@@ -139,6 +139,17 @@ class ReviewViewsUiTest {
 	}
 
 	@Test
+	void theOutlineListsTheDeclarations() throws Exception {
+		DesignEditor editor = Application.openFile(page(), MARINA);
+		var outline = (bulwark.ui.outline.DesignOutline) editor.getAdapter(org.eclipse.ui.views.contentoutline.IContentOutlinePage.class);
+		var entries = bulwark.ui.outline.DesignOutline.entries(editor.getDocumentProvider().getDocument(editor.getEditorInput()).get());
+		assertTrue(entries.stream().anyMatch(e -> e.kind().equals("resistor") && e.name().equals("R_BASE")), entries.toString());
+		assertTrue(entries.stream().anyMatch(e -> e.kind().equals("reference net") && e.name().equals("gnd")), entries.toString());
+		assertTrue(entries.stream().anyMatch(e -> e.kind().equals("require") && e.name().equals("threshold")), entries.toString());
+		assertTrue(outline != null);
+	}
+
+	@Test
 	void theScaleRunsFromCoolToWarmToDark() {
 		RGB cool = UtilisationScale.of(0), limit = UtilisationScale.of(1), over = UtilisationScale.of(2);
 		assertTrue(cool.blue > cool.red, cool.toString());

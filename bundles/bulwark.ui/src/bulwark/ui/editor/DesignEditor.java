@@ -13,11 +13,15 @@ import org.eclipse.jface.text.IDocument;
 import org.eclipse.jface.text.source.Annotation;
 import org.eclipse.jface.viewers.ISelection;
 import org.eclipse.jface.text.source.IAnnotationModel;
+import org.eclipse.jface.text.source.DefaultCharacterPairMatcher;
 import org.eclipse.ui.editors.text.TextEditor;
+import org.eclipse.ui.texteditor.SourceViewerDecorationSupport;
+import org.eclipse.ui.views.contentoutline.IContentOutlinePage;
 import org.eclipse.ui.ide.FileStoreEditorInput;
 
 import bulwark.check.DesignResult;
 import bulwark.check.io.AtomicFile;
+import bulwark.ui.outline.DesignOutline;
 
 /**
  * The design editor: a text editor whose reconciler checks the design in the background after each pause
@@ -36,7 +40,38 @@ public class DesignEditor extends TextEditor {
 
 	void resultArrived(DesignResult result) {
 		lastResult = result;
+		DesignOutline o = outline;
+		if (o != null && getSite() != null) {
+			getSite().getShell().getDisplay().asyncExec(o::refresh);
+		}
 	}
+
+	private volatile DesignOutline outline;
+
+	/** The outline page, and nothing else of our own, adapted. */
+	@Override
+	public <T> T getAdapter(Class<T> adapter) {
+		if (adapter == IContentOutlinePage.class) {
+			if (outline == null) {
+				outline = new DesignOutline(this);
+			}
+			return adapter.cast(outline);
+		}
+		return super.getAdapter(adapter);
+	}
+
+	/** Brackets of a part's pins and settings are matched under the caret. */
+	@Override
+	protected void configureSourceViewerDecorationSupport(SourceViewerDecorationSupport support) {
+		support.setCharacterPairMatcher(new DefaultCharacterPairMatcher(new char[] { '(', ')', '{', '}' }));
+		support.setMatchingCharacterPainterPreferenceKeys(MATCHING_BRACKETS, MATCHING_BRACKETS_COLOR);
+		getPreferenceStore().setDefault(MATCHING_BRACKETS, true);
+		getPreferenceStore().setDefault(MATCHING_BRACKETS_COLOR, "128,128,128");
+		super.configureSourceViewerDecorationSupport(support);
+	}
+
+	static final String MATCHING_BRACKETS = "bulwark.matchingBrackets";
+	static final String MATCHING_BRACKETS_COLOR = "bulwark.matchingBracketsColor";
 
 	/** True once the editor is closed: a check still running for it must not publish anything. */
 	public boolean isClosed() {
