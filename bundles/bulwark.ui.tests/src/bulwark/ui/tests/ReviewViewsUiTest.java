@@ -150,6 +150,15 @@ class ReviewViewsUiTest {
 	}
 
 	@Test
+	void helpOpensTheUserGuide() throws Exception {
+		System.setProperty("bulwark.home", ROOT.toString());
+		org.eclipse.ui.handlers.IHandlerService handlers = PlatformUI.getWorkbench().getActiveWorkbenchWindow()
+				.getService(org.eclipse.ui.handlers.IHandlerService.class);
+		handlers.executeCommand("bulwark.ui.help.user-guide", null);
+		assertEquals("user-guide.md", page().getActiveEditor().getTitle());
+	}
+
+	@Test
 	void theScaleRunsFromCoolToWarmToDark() {
 		RGB cool = UtilisationScale.of(0), limit = UtilisationScale.of(1), over = UtilisationScale.of(2);
 		assertTrue(cool.blue > cool.red, cool.toString());
