@@ -4,6 +4,7 @@ import org.eclipse.ui.IPageLayout;
 import org.eclipse.ui.IPerspectiveFactory;
 
 import bulwark.ui.cases.CasesView;
+import bulwark.ui.changes.ChangesView;
 import bulwark.ui.findings.FindingsView;
 import bulwark.ui.stress.StressMapView;
 import bulwark.ui.sweep.SweepView;
@@ -22,5 +23,6 @@ public class ReviewPerspective implements IPerspectiveFactory {
 		right.addView(SweepView.ID);
 		right.addView(CasesView.ID);
 		right.addView(TopologyView.ID);
+		right.addView(ChangesView.ID);
 	}
 }

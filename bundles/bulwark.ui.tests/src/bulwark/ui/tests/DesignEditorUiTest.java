@@ -130,6 +130,14 @@ class DesignEditorUiTest {
 		assertTrue(!editor.isDirty(), "clean after the save");
 		assertEquals(doc.get(), java.nio.file.Files.readString(copy));
 		assertEquals(before, java.nio.file.Files.readString(dir.resolve("lab.bulwark.bak")));
+		// the Changes view compares with the version kept: the power finding is fixed, R_DROP better
+		bulwark.ui.changes.ChangesView changes = (bulwark.ui.changes.ChangesView) page()
+				.showView(bulwark.ui.changes.ChangesView.ID);
+		page().activate(editor);
+		assertTrue(waitUntil(() -> changes.shownChanges() != null && changes.shownChanges().stream()
+				.anyMatch(c -> c.kind().equals("fixed") && c.text().contains("resistor-power"))), "no fixed finding listed");
+		assertTrue(changes.shownChanges().stream()
+				.anyMatch(c -> c.kind().equals("better") && c.text().startsWith("R_DROP worst utilisation 1280 % → 80 %")));
 		try (var files = java.nio.file.Files.list(dir)) {
 			assertEquals(3, files.count(), "no temporary file left behind");
 		}
