@@ -60,6 +60,13 @@ public class Application implements IApplication {
 							for (int i = 0; i < args.length; i++) {
 								if ("--snapshot".equals(args[i]) && i + 1 < args.length) {
 									snapshot = Path.of(args[++i]);
+								} else if ("--policy".equals(args[i]) && i + 1 < args.length) {
+									var problems = BulwarkUi.usePolicy(Path.of(args[++i]));
+									if (!problems.isEmpty()) {
+										org.eclipse.jface.dialogs.MessageDialog.openError(c.getWindow().getShell(),
+												"Review policy not used", problems.stream().map(f -> f.message())
+														.collect(java.util.stream.Collectors.joining("\n")));
+									}
 								} else if (args[i].endsWith(".bulwark")) {
 									DesignEditor editor = openFile(c.getWindow().getActivePage(), Path.of(args[i]));
 									first = first == null ? editor : first;

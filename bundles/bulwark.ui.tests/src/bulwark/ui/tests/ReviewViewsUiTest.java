@@ -159,6 +159,15 @@ class ReviewViewsUiTest {
 	}
 
 	@Test
+	void aPolicyWithErrorsIsRefusedAndTheCheckerKept() throws Exception {
+		Path bad = java.nio.file.Files.createTempFile("bad", ".bulwark-policy");
+		java.nio.file.Files.writeString(bad, "policy \"bad\"\n  derate resistor power to 0 %\n");
+		var before = bulwark.ui.BulwarkUi.checker();
+		assertTrue(!bulwark.ui.BulwarkUi.usePolicy(bad).isEmpty());
+		assertTrue(before == bulwark.ui.BulwarkUi.checker(), "a refused policy leaves the checker as it was");
+	}
+
+	@Test
 	void theScaleRunsFromCoolToWarmToDark() {
 		RGB cool = UtilisationScale.of(0), limit = UtilisationScale.of(1), over = UtilisationScale.of(2);
 		assertTrue(cool.blue > cool.red, cool.toString());
