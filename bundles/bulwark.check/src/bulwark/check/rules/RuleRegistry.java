@@ -8,7 +8,7 @@ public final class RuleRegistry {
 			new SeriesStringRule(), new DevicePowerRule(), new DiodeReverseRule(), new ForwardCurrentRule(),
 			new BaseEmitterRule(), new TransistorVoltageRule(), new TransistorCurrentRule(), new CapacitorVoltageRule(),
 			new ProtectorBlockingRule(), new FuseVoltageRule(), new BatteryChargeRule(), new ComparatorInputRule(),
-			new ClampCurrentRule(), new ReversePathRule(), new HysteresisRule(), new RequirementRule(), new RatingMissingRule(), new PreferredValueRule());
+			new ClampCurrentRule(), new InputRangeRule(), new ReversePathRule(), new HysteresisRule(), new RequirementRule(), new RatingMissingRule(), new PreferredValueRule());
 
 	private RuleRegistry() {
 	}

@@ -79,7 +79,9 @@ public final class KindCatalog {
 					new SettingSpec("quiescent", Unit.AMPERE, false, "supply current with no load (10 µA when omitted)")),
 			List.of(new SettingSpec("input_margin", Unit.VOLT, false, "absolute-maximum input beyond either rail"),
 					new SettingSpec("clamp", Unit.AMPERE, false, "rated input clamp current"),
-					new SettingSpec("supply", Unit.VOLT, false, "rated supply voltage")));
+					new SettingSpec("supply", Unit.VOLT, false, "rated supply voltage"),
+					new SettingSpec("headroom", Unit.VOLT, false,
+							"how far below the positive supply the inputs must stay to work (leave out for rail-to-rail inputs)")));
 
 	private static final List<String> TWO = List.of("a", "b");
 	private static final KindSpec CAPACITOR = new KindSpec("capacitor", TWO,
