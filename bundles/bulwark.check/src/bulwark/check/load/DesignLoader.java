@@ -33,6 +33,11 @@ public final class DesignLoader {
 		this.injector = injector;
 	}
 
+	/** The language injector it parses with; completion asks the same one. */
+	public Injector injector() {
+		return injector;
+	}
+
 	public LoadedDesign load(String text, String file, CancelIndicator cancel) {
 		Parsed parsed = parse(text, file, ".bulwark", cancel);
 		Design design = parsed.root() instanceof Design d ? d : null;

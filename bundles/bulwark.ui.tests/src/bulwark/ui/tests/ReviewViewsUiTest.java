@@ -168,6 +168,16 @@ class ReviewViewsUiTest {
 	}
 
 	@Test
+	void completionOffersThePinsOfTheKind() throws Exception {
+		DesignEditor editor = Application.openFile(page(), MARINA);
+		var processor = new bulwark.ui.editor.CompletionProcessor(editor);
+		String text = "design \"probe\"\nreference net gnd\nnet a\nled D1 (";
+		var labels = processor.entriesAt(text, text.length()).stream().map(e -> e.getProposal()).toList();
+		assertTrue(labels.contains("anode: ") && labels.contains("cathode: "), labels.toString());
+		assertTrue(editor.getAction("ContentAssistProposal") != null, "Ctrl+Space is bound in the editor");
+	}
+
+	@Test
 	void theScaleRunsFromCoolToWarmToDark() {
 		RGB cool = UtilisationScale.of(0), limit = UtilisationScale.of(1), over = UtilisationScale.of(2);
 		assertTrue(cool.blue > cool.red, cool.toString());

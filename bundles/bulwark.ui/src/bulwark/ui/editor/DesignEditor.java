@@ -5,6 +5,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;
+import java.util.ResourceBundle;
 
 import org.eclipse.core.runtime.CoreException;
 import org.eclipse.core.runtime.IProgressMonitor;
@@ -15,6 +16,8 @@ import org.eclipse.jface.viewers.ISelection;
 import org.eclipse.jface.text.source.IAnnotationModel;
 import org.eclipse.jface.text.source.DefaultCharacterPairMatcher;
 import org.eclipse.ui.editors.text.TextEditor;
+import org.eclipse.ui.texteditor.ContentAssistAction;
+import org.eclipse.ui.texteditor.ITextEditorActionDefinitionIds;
 import org.eclipse.ui.texteditor.SourceViewerDecorationSupport;
 import org.eclipse.ui.views.contentoutline.IContentOutlinePage;
 import org.eclipse.ui.ide.FileStoreEditorInput;
@@ -58,6 +61,16 @@ public class DesignEditor extends TextEditor {
 			return adapter.cast(outline);
 		}
 		return super.getAdapter(adapter);
+	}
+
+	/** Ctrl+Space opens the proposals (TextEditor registers Ctrl+1 itself, content assist it leaves to us). */
+	@Override
+	protected void createActions() {
+		super.createActions();
+		ContentAssistAction assist = new ContentAssistAction(
+				ResourceBundle.getBundle("bulwark.ui.editor.EditorActions"), "ContentAssistProposal.", this);
+		assist.setActionDefinitionId(ITextEditorActionDefinitionIds.CONTENT_ASSIST_PROPOSALS);
+		setAction("ContentAssistProposal", assist);
 	}
 
 	/** Brackets of a part's pins and settings are matched under the caret. */
