@@ -72,6 +72,13 @@ public class Application implements IApplication {
 									first = first == null ? editor : first;
 								}
 							}
+							if (first == null && snapshot == null) {
+								try {
+									c.getWindow().getActivePage().showView(bulwark.ui.start.StartView.ID);
+								} catch (PartInitException e) {
+									throw new IllegalStateException(e);
+								}
+							}
 							if (snapshot != null) {
 								Snapshot.whenChecked(c.getWindow(), first, snapshot);
 							}

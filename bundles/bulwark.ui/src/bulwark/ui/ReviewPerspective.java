@@ -24,5 +24,6 @@ public class ReviewPerspective implements IPerspectiveFactory {
 		right.addView(CasesView.ID);
 		right.addView(TopologyView.ID);
 		right.addView(ChangesView.ID);
+		layout.addPlaceholder(bulwark.ui.start.StartView.ID, IPageLayout.LEFT, 0.5f, layout.getEditorArea());
 	}
 }

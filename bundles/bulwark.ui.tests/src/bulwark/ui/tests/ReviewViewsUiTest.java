@@ -2,13 +2,13 @@ package bulwark.ui.tests;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static bulwark.ui.tests.Ui.ROOT;
+import static bulwark.ui.tests.Ui.page;
+import static bulwark.ui.tests.Ui.waitUntil;
 
 import java.nio.file.Path;
-import java.util.function.BooleanSupplier;
 
 import org.eclipse.swt.graphics.RGB;
-import org.eclipse.swt.widgets.Display;
-import org.eclipse.ui.IWorkbenchPage;
 import org.eclipse.ui.PlatformUI;
 import org.junit.jupiter.api.Test;
 
@@ -21,29 +21,7 @@ import bulwark.ui.sweep.SweepView;
 
 /** The stress map and the threshold sweep follow the design being edited. */
 class ReviewViewsUiTest {
-	private static final Path ROOT = Path.of(System.getProperty("bulwark.root", "../..")).toAbsolutePath().normalize();
 	private static final Path MARINA = ROOT.resolve("examples/marina-bilge-switch-tester.bulwark");
-
-	private static IWorkbenchPage page() {
-		return PlatformUI.getWorkbench().getActiveWorkbenchWindow().getActivePage();
-	}
-
-	private static boolean waitUntil(BooleanSupplier condition) {
-		Display display = Display.getCurrent();
-		long deadline = System.currentTimeMillis() + 60_000;
-		while (System.currentTimeMillis() < deadline) {
-			if (condition.getAsBoolean()) {
-				return true;
-			}
-			while (display.readAndDispatch()) {
-				// keep the UI and the background checks going
-			}
-			display.timerExec(50, () -> {
-			});
-			display.sleep();
-		}
-		return condition.getAsBoolean();
-	}
 
 	@Test
 	void stressMapAndSweepShowTheDesign() throws Exception {

@@ -5,6 +5,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.function.BiConsumer;
 
+import org.eclipse.jface.action.Action;
 import org.eclipse.jface.viewers.ArrayContentProvider;
 import org.eclipse.jface.viewers.ColumnLabelProvider;
 import org.eclipse.jface.viewers.TableViewer;
@@ -24,6 +25,7 @@ import bulwark.ui.findings.FindingsHub;
 /**
  * What changed since the previous saved version (the NAME.bak a save keeps): findings new and fixed, parts
  * worse and better — the same comparison as `bulwark compare`, for review before handing a revision on.
+ * File > Compare Two Designs… shows the same for any two files.
  */
 public class ChangesView extends ViewPart {
 	public static final String ID = "bulwark.ui.changes";
@@ -41,7 +43,20 @@ public class ChangesView extends ViewPart {
 		viewer.setInput(List.of());
 		setContentDescription("No previous version: save a design to compare with what it was.");
 		FindingsHub.subscribe(listener);
+		follow.setEnabled(false);
+		getViewSite().getActionBars().getToolBarManager().add(follow);
 	}
+
+	private boolean pinned;
+	private final Action follow = new Action("Follow the editor") {
+		@Override
+		public void run() {
+			pinned = false;
+			setEnabled(false);
+			viewer.setInput(List.of());
+			setContentDescription("Comparing the design being edited with its previous saved version at its next check.");
+		}
+	};
 
 	private void column(String title, int width, java.util.function.Function<Revisions.Change, String> text) {
 		TableViewerColumn c = new TableViewerColumn(viewer, SWT.LEFT);
@@ -55,8 +70,23 @@ public class ChangesView extends ViewPart {
 		});
 	}
 
+	/**
+	 * Compares two design files — revisions, or two designs — each checked at its own place, and keeps showing
+	 * that comparison until "Follow the editor" is chosen again.
+	 */
+	public List<Revisions.Change> compareFiles(Path before, Path after) throws java.io.IOException {
+		DesignResult a = BulwarkUi.checker().check(Files.readString(before), before.toString(), CancelIndicator.NullImpl);
+		DesignResult b = BulwarkUi.checker().check(Files.readString(after), after.toString(), CancelIndicator.NullImpl);
+		List<Revisions.Change> changes = Revisions.compare(a, b);
+		pinned = true;
+		follow.setEnabled(true);
+		viewer.setInput(changes);
+		setContentDescription(changes.size() + " change(s) from " + before.getFileName() + " to " + after.getFileName());
+		return changes;
+	}
+
 	private void show(DesignEditor editor, DesignResult now) {
-		if (viewer == null || viewer.getControl().isDisposed() || editor.isClosed() || editor.file() == null) {
+		if (pinned || viewer == null || viewer.getControl().isDisposed() || editor.isClosed() || editor.file() == null) {
 			return;
 		}
 		Path previous = editor.file().resolveSibling(editor.file().getFileName() + AtomicFile.BACKUP_SUFFIX);

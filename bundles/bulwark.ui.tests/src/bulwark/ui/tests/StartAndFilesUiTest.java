@@ -1,0 +1,88 @@
+package bulwark.ui.tests;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static bulwark.ui.tests.Ui.ROOT;
+import static bulwark.ui.tests.Ui.page;
+import static bulwark.ui.tests.Ui.waitUntil;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+import org.eclipse.ui.PlatformUI;
+import org.eclipse.ui.handlers.IHandlerService;
+import org.junit.jupiter.api.Test;
+
+import bulwark.check.Severity;
+import bulwark.check.Status;
+import bulwark.ui.Application;
+import bulwark.ui.Screenshot;
+import bulwark.ui.changes.ChangesView;
+import bulwark.ui.editor.DesignEditor;
+import bulwark.ui.start.DemoDesigns;
+import bulwark.ui.start.NewDesign;
+import bulwark.ui.start.StartView;
+import bulwark.ui.start.Templates;
+
+/** The start page, new designs from templates, File > Save and comparing two files. */
+class StartAndFilesUiTest {
+	@Test
+	void theStartPageOffersTheDemosTemplatesAndHelp() throws Exception {
+		System.setProperty("bulwark.home", ROOT.toString()); // where the launcher points: the demo designs
+		// opened afresh: the page lists what the installation holds when it is created
+		var shown = page().findView(StartView.ID);
+		if (shown != null) {
+			page().hideView(shown);
+		}
+		StartView start = (StartView) page().showView(StartView.ID);
+		assertTrue(DemoDesigns.list().size() >= 4, DemoDesigns.list().toString());
+		assertTrue(DemoDesigns.list().stream().anyMatch(d -> d.title().equals("Bilge float-switch tester")));
+		// a link per demo and per template, "open", and three help pages
+		assertEquals(DemoDesigns.list().size() + Templates.ALL.size() + 1 + 3, start.linkCount());
+		Screenshot.save(PlatformUI.getWorkbench().getActiveWorkbenchWindow().getShell(),
+				ROOT.resolve("bundles/bulwark.ui.tests/target/screenshots/start.png"));
+	}
+
+	@Test
+	void everyTemplatePassesTheDefaultPolicy() throws Exception {
+		Path dir = Files.createTempDirectory("bulwark-new");
+		for (Templates.Template t : Templates.ALL) {
+			DesignEditor editor = NewDesign.create(page(), t, dir.resolve(t.file()));
+			assertTrue(waitUntil(() -> editor.lastResult() != null), t.name() + " was not checked");
+			var result = editor.lastResult();
+			assertEquals(Status.PASS, result.status(), t.name() + ": " + result.findings());
+			assertTrue(result.findings().stream().noneMatch(f -> f.severity() != Severity.INFO), t.name() + ": " + result.findings());
+			assertEquals(t.text(), Files.readString(dir.resolve(t.file())));
+			page().closeEditor(editor, false);
+		}
+	}
+
+	@Test
+	void fileSaveWritesTheText() throws Exception {
+		Path dir = Files.createTempDirectory("bulwark-save");
+		Path file = dir.resolve("d.bulwark");
+		DesignEditor editor = NewDesign.create(page(), Templates.ALL.get(0), file);
+		var document = editor.getDocumentProvider().getDocument(editor.getEditorInput());
+		document.replace(document.getLength(), 0, "# saved through File > Save\n");
+		page().activate(editor);
+		PlatformUI.getWorkbench().getService(IHandlerService.class).executeCommand("org.eclipse.ui.file.save", null);
+		assertTrue(Files.readString(file).endsWith("# saved through File > Save\n"));
+		assertTrue(!editor.isDirty());
+		page().closeEditor(editor, false);
+	}
+
+	@Test
+	void twoFilesCompared() throws Exception {
+		Path dir = Files.createTempDirectory("bulwark-compare");
+		Path before = dir.resolve("lab-1.bulwark"), after = dir.resolve("lab-2.bulwark");
+		String lab = Files.readString(ROOT.resolve("examples/lab-indicator-seeded.bulwark"));
+		Files.copy(ROOT.resolve("examples/teaching-lab.bulwark-policy"), dir.resolve("teaching-lab.bulwark-policy"));
+		Files.writeString(before, lab);
+		Files.writeString(after, lab.replace("  value 150 Ω ± 5 %\n  rated power 125 mW", "  value 150 Ω ± 5 %\n  rated power 2 W"));
+		ChangesView changes = (ChangesView) page().showView(ChangesView.ID);
+		var shown = changes.compareFiles(before, after);
+		assertTrue(shown.stream().anyMatch(c -> c.kind().equals("fixed") && c.text().contains("resistor-power")), shown.toString());
+		assertTrue(shown.stream().anyMatch(c -> c.kind().equals("better") && c.text().startsWith("R_DROP")), shown.toString());
+		assertEquals(shown, changes.shownChanges());
+	}
+}
