@@ -44,6 +44,7 @@ class ReversePathRuleTest {
 		assertEquals(Concern.REVERSE_PATH, f.concern());
 		assertEquals("24 V DC, COM + to TIP −", f.caseName());
 		assertTrue(f.message().contains("COM → D1 → net a → R1 → TIP"), f.message());
+		assertEquals(java.util.List.of("COM", "D1", "net a", "R1", "TIP"), ReversePathRule.pathOf(f));
 		assertEquals(24, f.value(), 1e-6); // nothing flows, so R1 drops nothing [closed form]
 		assertEquals(5 * 0.7, f.limit(), 1e-12);
 	}

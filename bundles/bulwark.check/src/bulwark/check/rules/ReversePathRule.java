@@ -80,13 +80,27 @@ public final class ReversePathRule implements Rule {
 		for (Reach r : worst.values()) {
 			Overstress o = r.over();
 			String message = String.format(Locale.ROOT,
-					"case '%s' reaches %s with nothing blocking it: %s; its %s is %s, over %s, %.0f %% of the limit",
+					"case '%s' reaches %s " + PATH_START + "%s" + PATH_END + "%s is %s, over %s, %.0f %% of the limit",
 					r.c().faultCase().name(), o.part().getName(), String.join(" → ", r.path()), o.measure().what(),
 					Figures.engineering(o.value(), o.measure().unit()), o.limit().describe(), 100 * o.utilisation());
 			findings.accept(new Finding(ID, INFO.concern(), INFO.severity(), message, o.part().getName(),
 					r.c().faultCase().name(), Locations.of(o.part(), DesignPackage.Literals.MEMBER__NAME), o.value(),
 					o.limit().value(), o.measure().unit(), false));
 		}
+	}
+
+	private static final String PATH_START = "with nothing blocking it: ", PATH_END = "; its ";
+
+	/**
+	 * The steps of the path a reverse-path finding names — terminals, parts and "net NAME" — in order, for
+	 * drawings that highlight it; empty for any other finding.
+	 */
+	public static List<String> pathOf(Finding f) {
+		int start = f.message().indexOf(PATH_START), end = f.message().indexOf(PATH_END, Math.max(start, 0));
+		if (!ID.equals(f.rule()) || start < 0 || end < 0) {
+			return List.of();
+		}
+		return List.of(f.message().substring(start + PATH_START.length(), end).split(" → "));
 	}
 
 	/** How a net was reached: from which net, through which device (null at the start). */

@@ -58,6 +58,16 @@ class ReviewViewsUiTest {
 		double terminalX = boxes.stream().filter(b -> b.kind().equals("terminal")).mapToDouble(b -> b.x()).max().orElseThrow();
 		double partX = boxes.stream().filter(b -> b.kind().equals("resistor")).mapToDouble(b -> b.x()).min().orElseThrow();
 		assertTrue(terminalX < partX, "terminals on the left");
+		var reverse = editor.lastResult().findings().stream().filter(f -> f.rule().equals("reverse-path")).findFirst().orElseThrow();
+		topology.highlight(reverse);
+		var path = bulwark.check.rules.ReversePathRule.pathOf(reverse);
+		assertTrue(topology.highlighted().containsAll(path) && topology.highlighted().contains("net gnd"), topology.highlighted().toString());
+		String svg = topology.svg();
+		var xml = javax.xml.parsers.DocumentBuilderFactory.newInstance().newDocumentBuilder()
+				.parse(new java.io.ByteArrayInputStream(svg.getBytes(java.nio.charset.StandardCharsets.UTF_8)));
+		assertEquals("svg", xml.getDocumentElement().getTagName());
+		assertTrue(svg.contains("data-name=\"R_BASE\"") && svg.contains("#6a1b9a"), "the part and the highlighted path are drawn");
+		java.nio.file.Files.writeString(ROOT.resolve("bundles/bulwark.ui.tests/target/screenshots/topology.svg"), svg);
 		Screenshot.save(PlatformUI.getWorkbench().getActiveWorkbenchWindow().getShell(),
 				ROOT.resolve("bundles/bulwark.ui.tests/target/screenshots/topology.png"));
 		SweepView sweep = (SweepView) page().showView(SweepView.ID);
@@ -67,6 +77,16 @@ class ReviewViewsUiTest {
 		assertEquals("TIP", sweep.shownPair().from());
 		Screenshot.save(PlatformUI.getWorkbench().getActiveWorkbenchWindow().getShell(),
 				ROOT.resolve("bundles/bulwark.ui.tests/target/screenshots/threshold-sweep.png"));
+		double[] full = sweep.shownOhms();
+		sweep.zoomToSwitching();
+		double[] zoomed = sweep.shownOhms();
+		double rising = sweep.shownPair().risingOhms();
+		assertTrue(zoomed[0] <= rising && rising <= zoomed[1] && zoomed[1] / zoomed[0] < full[1] / full[0] / 10,
+				java.util.Arrays.toString(zoomed) + " of " + java.util.Arrays.toString(full));
+		Screenshot.save(PlatformUI.getWorkbench().getActiveWorkbenchWindow().getShell(),
+				ROOT.resolve("bundles/bulwark.ui.tests/target/screenshots/threshold-sweep-zoomed.png"));
+		sweep.resetZoom();
+		assertEquals(full[0], sweep.shownOhms()[0], full[0] * 1e-12);
 	}
 
 	@Test
@@ -153,6 +173,16 @@ class ReviewViewsUiTest {
 		var labels = processor.entriesAt(text, text.length()).stream().map(e -> e.getProposal()).toList();
 		assertTrue(labels.contains("anode: ") && labels.contains("cathode: "), labels.toString());
 		assertTrue(editor.getAction("ContentAssistProposal") != null, "Ctrl+Space is bound in the editor");
+	}
+
+	@Test
+	void ticksGrowDenserAsTheAxisIsZoomed() {
+		// log10 positions: 1 Ω … 1 MΩ every decade; 1 kΩ … 3 kΩ in 1-2 steps plus every mantissa below 0.6 decade
+		assertEquals(java.util.List.of(0.0, 1.0, 2.0, 3.0, 4.0, 5.0, 6.0), bulwark.ui.sweep.AxisTicks.logarithmic(0, 6.0 - 1e-12));
+		assertEquals(java.util.List.of(0.0, 2.0, 4.0, 6.0, 8.0), bulwark.ui.sweep.AxisTicks.logarithmic(0, 8));
+		var fine = bulwark.ui.sweep.AxisTicks.logarithmic(3, 3.5);
+		assertEquals(3, fine.size(), fine.toString()); // 1 k, 2 k, 3 k
+		assertEquals(Math.log10(3000), fine.get(2), 1e-12);
 	}
 
 	@Test

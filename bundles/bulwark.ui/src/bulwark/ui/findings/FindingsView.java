@@ -112,6 +112,7 @@ public class FindingsView extends ViewPart {
 		});
 		viewer.getControl().setMenu(menu.createContextMenu(viewer.getControl()));
 		setContentDescription("No design checked yet.");
+		getSite().setSelectionProvider(viewer); // the topology highlights the selected finding's reverse path
 		FindingsHub.subscribe(listener);
 		getSite().getPage().addPartListener(activation);
 	}

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.function.BiConsumer;
 
+import org.eclipse.jface.action.Action;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.graphics.Color;
 import org.eclipse.swt.graphics.GC;
@@ -27,7 +28,8 @@ import bulwark.ui.findings.FindingsHub;
  * The threshold sweep of the design being edited, drawn with SWT: the current into the resistance under test
  * against that resistance (both logarithmic), rising sweep solid, falling dashed, thick where the indicator is
  * on, each switching point marked. Moving the pointer reads the resistance under it and the currents of both
- * sweeps there.
+ * sweeps there. The wheel zooms the resistance axis about the pointer, dragging zooms to the dragged span,
+ * double-click shows the whole sweep again; "Zoom to the switching points" frames the hysteresis loop.
  */
 public class SweepView extends ViewPart {
 	public static final String ID = "bulwark.ui.sweep";
@@ -37,6 +39,9 @@ public class SweepView extends ViewPart {
 	private Label readout;
 	private PairFigures pair;
 	private String indicator;
+	/** The resistance axis shown, log10 Ω, or null for the whole sweep. */
+	private double[] window;
+	private int dragFrom = -1, dragTo = -1;
 	private final BiConsumer<DesignEditor, DesignResult> listener = this::show;
 
 	@Override
@@ -48,15 +53,106 @@ public class SweepView extends ViewPart {
 		readout = new Label(parent, SWT.NONE);
 		readout.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
 		readout.setText("No threshold sweep: check a design whose indicator switches across its terminals.");
-		canvas.addMouseMoveListener(e -> read(e.x));
+		canvas.addMouseMoveListener(e -> {
+			read(e.x);
+			if (dragFrom >= 0) {
+				dragTo = e.x;
+				canvas.redraw();
+			}
+		});
+		canvas.addListener(SWT.MouseVerticalWheel, e -> zoomAbout(e.x, e.count > 0 ? 0.8 : 1.25));
+		canvas.addListener(SWT.MouseDown, e -> {
+			if (e.button == 1 && pair != null) {
+				dragFrom = e.x;
+				dragTo = e.x;
+			}
+		});
+		canvas.addListener(SWT.MouseUp, e -> {
+			if (dragFrom >= 0 && Math.abs(e.x - dragFrom) > 4) {
+				double[] x = xRange();
+				int w = canvas.getClientArea().width - LEFT - RIGHT;
+				double a = x[0] + (double) (Math.min(dragFrom, e.x) - LEFT) / w * (x[1] - x[0]);
+				double b = x[0] + (double) (Math.max(dragFrom, e.x) - LEFT) / w * (x[1] - x[0]);
+				zoom(Math.pow(10, a), Math.pow(10, b));
+			}
+			dragFrom = -1;
+			canvas.redraw();
+		});
+		canvas.addListener(SWT.MouseDoubleClick, e -> resetZoom());
+		getViewSite().getActionBars().getToolBarManager().add(new Action("Zoom to the switching points") {
+			@Override
+			public void run() {
+				zoomToSwitching();
+			}
+		});
+		getViewSite().getActionBars().getToolBarManager().add(new Action("Whole sweep") {
+			@Override
+			public void run() {
+				resetZoom();
+			}
+		});
 		FindingsHub.subscribe(listener);
+	}
+
+	/** Shows the resistances from lo to hi (clamped to the sweep; at least a twentieth of a decade). */
+	public void zoom(double loOhms, double hiOhms) {
+		if (pair == null) {
+			return;
+		}
+		double[] full = range(false);
+		double lo = Math.max(full[0], Math.log10(loOhms)), hi = Math.min(full[1], Math.log10(hiOhms));
+		if (hi - lo < 0.05) {
+			double mid = (lo + hi) / 2;
+			lo = Math.max(full[0], mid - 0.025);
+			hi = Math.min(full[1], mid + 0.025);
+		}
+		window = lo <= full[0] && hi >= full[1] ? null : new double[] { lo, hi };
+		canvas.redraw();
+	}
+
+	/** A third of a decade either side of the switching points: the hysteresis loop fills the plot. */
+	public void zoomToSwitching() {
+		if (pair == null || pair.risingOhms() == null) {
+			return;
+		}
+		double a = pair.risingOhms(), b = pair.fallingOhms() == null ? a : pair.fallingOhms();
+		zoom(Math.min(a, b) / 2, Math.max(a, b) * 2);
+	}
+
+	public void resetZoom() {
+		window = null;
+		canvas.redraw();
+	}
+
+	/** The resistances shown, in ohms, for tests. */
+	public double[] shownOhms() {
+		double[] x = xRange();
+		return new double[] { Math.pow(10, x[0]), Math.pow(10, x[1]) };
+	}
+
+	private void zoomAbout(int mouseX, double factor) {
+		if (pair == null) {
+			return;
+		}
+		double[] x = xRange();
+		int w = canvas.getClientArea().width - LEFT - RIGHT;
+		double at = x[0] + Math.min(1, Math.max(0, (double) (mouseX - LEFT) / w)) * (x[1] - x[0]);
+		zoom(Math.pow(10, at - (at - x[0]) * factor), Math.pow(10, at + (x[1] - at) * factor));
+	}
+
+	private double[] xRange() {
+		return window != null ? window : range(false);
 	}
 
 	private void show(DesignEditor from, DesignResult result) {
 		if (canvas == null || canvas.isDisposed() || from.isClosed()) {
 			return;
 		}
+		PairFigures was = pair;
 		pair = result.function().pairs().stream().filter(p -> !p.rising().isEmpty()).findFirst().orElse(null);
+		if (pair == null || was == null || !pair.from().equals(was.from()) || !pair.to().equals(was.to())) {
+			window = null; // a zoom stays while the same pair is edited
+		}
 		indicator = result.function().indicator();
 		setContentDescription(pair == null ? "No threshold sweep for this design."
 				: "Threshold sweep " + pair.from() + "–" + pair.to() + ", indicator " + indicator
@@ -91,7 +187,7 @@ public class SweepView extends ViewPart {
 		if (pair == null) {
 			return;
 		}
-		double[] x = range(false), y = range(true);
+		double[] x = xRange(), y = range(true);
 		int w = area.width - LEFT - RIGHT, h = area.height - TOP - BOTTOM;
 		if (w < 20 || h < 20) {
 			return;
@@ -99,11 +195,18 @@ public class SweepView extends ViewPart {
 		gc.setAntialias(SWT.ON);
 		gc.setForeground(canvas.getDisplay().getSystemColor(SWT.COLOR_DARK_GRAY));
 		gc.drawRectangle(LEFT, TOP, w, h);
-		for (int d = (int) Math.ceil(x[0]); d <= x[1]; d += 2) {
-			int px = LEFT + (int) ((d - x[0]) / (x[1] - x[0]) * w);
+		for (double tick : AxisTicks.logarithmic(x[0], x[1])) {
+			int px = LEFT + (int) ((tick - x[0]) / (x[1] - x[0]) * w);
 			gc.drawLine(px, TOP + h, px, TOP + h + 4);
-			gc.drawText(Figures.engineering(Math.pow(10, d), "Ω"), px - 14, TOP + h + 6, true);
+			gc.drawText(Figures.engineering(Math.pow(10, tick), "Ω"), px - 14, TOP + h + 6, true);
 		}
+		if (dragFrom >= 0 && dragTo != dragFrom) {
+			gc.setBackground(canvas.getDisplay().getSystemColor(SWT.COLOR_GRAY));
+			gc.setAlpha(80);
+			gc.fillRectangle(Math.min(dragFrom, dragTo), TOP, Math.abs(dragTo - dragFrom), h);
+			gc.setAlpha(255);
+		}
+		gc.setClipping(LEFT, TOP, w + 1, h + 1);
 		for (int d = (int) y[0]; d <= y[1]; d += Math.max(1, (int) ((y[1] - y[0]) / 5))) {
 			int py = TOP + h - (int) ((d - y[0]) / (y[1] - y[0]) * h);
 			gc.drawText(Figures.engineering(Math.pow(10, d), "A"), 4, py - 7, true);
@@ -115,6 +218,7 @@ public class SweepView extends ViewPart {
 			mark(gc, pair.risingOhms(), rising, x, w, h, 0);
 			mark(gc, pair.fallingOhms(), falling, x, w, h, 16);
 		} finally {
+			gc.setClipping((Rectangle) null);
 			rising.dispose();
 			falling.dispose();
 		}
@@ -156,7 +260,7 @@ public class SweepView extends ViewPart {
 		if (pair == null) {
 			return;
 		}
-		double[] x = range(false);
+		double[] x = xRange();
 		int w = canvas.getClientArea().width - LEFT - RIGHT;
 		double ohms = Math.pow(10, x[0] + (double) (mouseX - LEFT) / w * (x[1] - x[0]));
 		readout.setText(String.format(Locale.ROOT, "%s: rising %s, falling %s", Figures.engineering(ohms, "Ω"),

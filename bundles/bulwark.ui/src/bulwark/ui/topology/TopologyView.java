@@ -1,12 +1,20 @@
 package bulwark.ui.topology;
 
+import java.io.IOException;
+import java.nio.file.Path;
 import java.util.HashMap;
+import java.util.List;
 import java.util.HashSet;
 import java.util.Map;
 import java.util.Set;
 import java.util.function.BiConsumer;
 
+import org.eclipse.jface.action.Action;
+import org.eclipse.jface.dialogs.MessageDialog;
+import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.swt.SWT;
+import org.eclipse.swt.widgets.FileDialog;
+import org.eclipse.ui.ISelectionListener;
 import org.eclipse.swt.custom.ScrolledComposite;
 import org.eclipse.swt.graphics.Color;
 import org.eclipse.swt.graphics.GC;
@@ -19,15 +27,19 @@ import bulwark.check.CaseResult;
 import bulwark.check.DesignResult;
 import bulwark.check.Finding;
 import bulwark.check.PartStress;
+import bulwark.check.io.AtomicFile;
 import bulwark.check.load.LoadedDesign;
+import bulwark.check.rules.ReversePathRule;
 import bulwark.ui.BulwarkUi;
 import bulwark.ui.editor.DesignEditor;
 import bulwark.ui.findings.FindingsHub;
+import bulwark.ui.findings.FindingsView;
 import bulwark.ui.stress.UtilisationScale;
 
 /**
  * The circuit drawn automatically (TopologyLayout): terminals on the left, each part filled by its worst
- * utilisation on the stress map's scale, the parts on a reverse path outlined heavily.
+ * utilisation on the stress map's scale, the parts on a reverse path outlined heavily; selecting a reverse-path
+ * finding draws its path in the highlight colour. Export SVG… writes the same picture (TopologySvg).
  */
 public class TopologyView extends ViewPart {
 	public static final String ID = "bulwark.ui.topology";
@@ -37,7 +49,13 @@ public class TopologyView extends ViewPart {
 	private TopologyLayout.Drawing drawing;
 	private final Map<String, Double> worst = new HashMap<>();
 	private final Set<String> onReversePath = new HashSet<>();
+	private Set<String> highlighted = Set.of();
 	private final BiConsumer<DesignEditor, DesignResult> listener = this::show;
+	private final ISelectionListener findingSelected = (part, selection) -> {
+		if (selection instanceof IStructuredSelection s && s.getFirstElement() instanceof Finding f) {
+			highlight(f);
+		}
+	};
 
 	@Override
 	public void createPartControl(Composite parent) {
@@ -47,6 +65,65 @@ public class TopologyView extends ViewPart {
 		canvas.addPaintListener(e -> paint(e.gc));
 		setContentDescription("No design checked yet.");
 		FindingsHub.subscribe(listener);
+		getSite().getPage().addSelectionListener(FindingsView.ID, findingSelected);
+		getViewSite().getActionBars().getToolBarManager().add(new Action("Export SVG\u2026") {
+			@Override
+			public void run() {
+				exportAsked();
+			}
+		});
+	}
+
+	/** Highlights the reverse path a finding names (a finding of another rule clears the highlight). */
+	public void highlight(Finding f) {
+		List<String> path = ReversePathRule.pathOf(f);
+		highlighted = drawing == null ? Set.of() : pathWithTerminalNets(drawing, path);
+		if (!canvas.isDisposed()) {
+			canvas.redraw();
+			canvas.update();
+		}
+	}
+
+	/** The path's steps, plus the net each of its terminals stands on (the path names terminals, not their nets). */
+	static Set<String> pathWithTerminalNets(TopologyLayout.Drawing d, List<String> path) {
+		Set<String> steps = new HashSet<>(path);
+		for (TopologyLayout.Box b : d.boxes()) {
+			if (b.kind().equals("terminal") && steps.contains(b.name())) {
+				d.wires().stream().filter(w -> w.part().equals(b.name())).forEach(w -> steps.add("net " + w.net()));
+			}
+		}
+		return steps;
+	}
+
+	/** What is highlighted, for tests. */
+	public Set<String> highlighted() {
+		return highlighted;
+	}
+
+	/** The picture as SVG: what Export SVG… writes. */
+	public String svg() {
+		return drawing == null ? null : TopologySvg.of(drawing, worst, onReversePath, highlighted);
+	}
+
+	private void exportAsked() {
+		String svg = svg();
+		if (svg == null) {
+			return;
+		}
+		FileDialog dialog = new FileDialog(getSite().getShell(), SWT.SAVE);
+		dialog.setText("Export the topology as SVG");
+		dialog.setFilterExtensions(new String[] { "*.svg" });
+		dialog.setFileName("topology.svg");
+		dialog.setOverwrite(true);
+		String file = dialog.open();
+		if (file == null) {
+			return;
+		}
+		try {
+			AtomicFile.write(Path.of(file), svg, false);
+		} catch (IOException e) {
+			MessageDialog.openError(getSite().getShell(), "Topology not exported", "Could not write " + file + ": " + e.getMessage());
+		}
 	}
 
 	private void show(DesignEditor editor, DesignResult result) {
@@ -70,15 +147,9 @@ public class TopologyView extends ViewPart {
 		}
 		onReversePath.clear();
 		for (Finding f : result.findings()) {
-			if (f.rule().equals("reverse-path")) {
-				int start = f.message().indexOf(": "), end = f.message().indexOf("; its ");
-				if (start > 0 && end > start) {
-					for (String step : f.message().substring(start + 2, end).split(" → ")) {
-						onReversePath.add(step);
-					}
-				}
-			}
+			onReversePath.addAll(ReversePathRule.pathOf(f));
 		}
+		highlighted = Set.of();
 		canvas.setSize((int) drawing.width() + 20, (int) drawing.height() + 20);
 		setContentDescription(drawing.boxes().size() + " boxes; filled by worst utilisation, heavy outline on a reverse path");
 		canvas.redraw();
@@ -96,12 +167,18 @@ public class TopologyView extends ViewPart {
 		gc.setAntialias(SWT.ON);
 		Color wire = canvas.getDisplay().getSystemColor(SWT.COLOR_DARK_GRAY);
 		gc.setForeground(wire);
+		Color path = new Color(TopologySvg.HIGHLIGHT);
 		for (TopologyLayout.Wire w : drawing.wires()) {
+			boolean on = TopologySvg.onPath(highlighted, w);
+			gc.setForeground(on ? path : wire);
+			gc.setLineWidth(on ? 3 : 1);
 			for (int i = 1; i < w.points().size(); i++) {
 				double[] a = w.points().get(i - 1), b = w.points().get(i);
 				gc.drawLine((int) a[0] + 10, (int) a[1] + 10, (int) b[0] + 10, (int) b[1] + 10);
 			}
 		}
+		gc.setLineWidth(1);
+		gc.setForeground(wire);
 		for (TopologyLayout.Box b : drawing.boxes()) {
 			int x = (int) b.x() + 10, y = (int) b.y() + 10, w = (int) b.width(), h = (int) b.height();
 			if (b.kind().equals("net")) {
@@ -114,11 +191,17 @@ public class TopologyView extends ViewPart {
 			Color fill = u == null ? null : new Color(UtilisationScale.of(u));
 			gc.setBackground(fill != null ? fill : canvas.getDisplay().getSystemColor(SWT.COLOR_WHITE));
 			if (b.kind().equals("terminal")) {
+				boolean on = highlighted.contains(b.name());
 				gc.fillRoundRectangle(x, y, w, h, 12, 12);
+				gc.setForeground(on ? path : wire);
+				gc.setLineWidth(on ? 3 : 1);
 				gc.drawRoundRectangle(x, y, w, h, 12, 12);
+				gc.setLineWidth(1);
 			} else {
 				gc.fillRectangle(x, y, w, h);
-				gc.setLineWidth(onReversePath.contains(b.name()) ? 3 : 1);
+				boolean on = highlighted.contains(b.name());
+				gc.setForeground(on ? path : wire);
+				gc.setLineWidth(on || onReversePath.contains(b.name()) ? 3 : 1);
 				gc.drawRectangle(x, y, w, h);
 				gc.setLineWidth(1);
 			}
@@ -131,6 +214,7 @@ public class TopologyView extends ViewPart {
 				fill.dispose();
 			}
 		}
+		path.dispose();
 	}
 
 	@Override
@@ -141,6 +225,7 @@ public class TopologyView extends ViewPart {
 	@Override
 	public void dispose() {
 		FindingsHub.unsubscribe(listener);
+		getSite().getPage().removeSelectionListener(FindingsView.ID, findingSelected);
 		super.dispose();
 	}
 }
