@@ -25,6 +25,10 @@ class ReviewViewsUiTest {
 
 	@Test
 	void stressMapAndSweepShowTheDesign() throws Exception {
+		var start = page().findView(bulwark.ui.start.StartView.ID);
+		if (start != null) {
+			page().hideView(start); // the pictures are of the review views
+		}
 		StressMapView map = (StressMapView) page().showView(StressMapView.ID);
 		DesignEditor editor = Application.openFile(page(), MARINA);
 		assertTrue(waitUntil(() -> editor.lastResult() != null && map.shownRows().stream().anyMatch(r -> r.part().equals("R_BASE"))),
@@ -173,6 +177,39 @@ class ReviewViewsUiTest {
 		var labels = processor.entriesAt(text, text.length()).stream().map(e -> e.getProposal()).toList();
 		assertTrue(labels.contains("anode: ") && labels.contains("cathode: "), labels.toString());
 		assertTrue(editor.getAction("ContentAssistProposal") != null, "Ctrl+Space is bound in the editor");
+	}
+
+	@Test
+	void blocksAndCommentRunsFold() throws Exception {
+		String text = """
+				# one
+				# two
+				# three
+				design "a { b"
+				resistor R1 (a: x, b: y) { value 1 kΩ }
+				resistor R2 (a: x, b: y) {
+				  value 1 kΩ # not a } brace
+				}
+				""";
+		var regions = bulwark.ui.editor.FoldRegions.of(text);
+		assertEquals(2, regions.size(), regions.toString()); // the comment run and R2's block
+		assertEquals(0, regions.get(0).getOffset());
+		assertEquals(text.indexOf("design"), regions.get(0).getLength());
+		assertEquals(text.indexOf("resistor R2"), regions.get(1).getOffset());
+		assertEquals(text.length(), regions.get(1).getOffset() + regions.get(1).getLength());
+		DesignEditor editor = Application.openFile(page(), MARINA);
+		String marina = editor.getDocumentProvider().getDocument(editor.getEditorInput()).get();
+		assertEquals(bulwark.ui.editor.FoldRegions.of(marina), editor.foldRegions());
+		// the opening comment, and the blocks of B1, R_OFF, R_BASE, R_LED, D1 and Z1 (Q1 is one line)
+		assertEquals(7, editor.foldRegions().size(), editor.foldRegions().toString());
+		// semantic highlighting: R_BASE's declaration in the part colour, bold; a net reference in the net colour
+		assertTrue(waitUntil(() -> !editor.semanticRanges().isEmpty()), "no names classified");
+		var widget = (org.eclipse.swt.custom.StyledText) editor.getAdapter(org.eclipse.swt.widgets.Control.class);
+		var part = widget.getStyleRangeAtOffset(marina.indexOf("R_BASE (") + 1);
+		assertEquals(new RGB(32, 44, 124), part.foreground.getRGB());
+		assertTrue((part.fontStyle & org.eclipse.swt.SWT.BOLD) != 0);
+		var net = widget.getStyleRangeAtOffset(marina.indexOf("(a: base") + 4);
+		assertEquals(new RGB(0, 118, 88), net.foreground.getRGB());
 	}
 
 	@Test

@@ -1,6 +1,7 @@
 package bulwark.ui.editor;
 
 import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
 
 import org.eclipse.core.runtime.IProgressMonitor;
@@ -20,6 +21,7 @@ import org.eclipse.ui.IURIEditorInput;
 
 import bulwark.check.DesignResult;
 import bulwark.check.Finding;
+import bulwark.lang.ide.highlight.SemanticRanges;
 import bulwark.ui.BulwarkUi;
 import bulwark.ui.findings.FindingsHub;
 
@@ -105,6 +107,13 @@ final class CheckingStrategy implements IReconcilingStrategy, IReconcilingStrate
 					FindingsHub.publish(editor, result);
 				}
 			});
+		}
+		// after the findings, which matter more: the names classified for highlighting
+		if (!fileName().endsWith(".bulwark-policy")) {
+			List<SemanticRanges.Range> ranges = SemanticRanges.of(BulwarkUi.checker().loader().injector(), text, fileName());
+			if (!display.isDisposed()) {
+				display.asyncExec(() -> editor.semanticRangesArrived(text, ranges));
+			}
 		}
 	}
 

@@ -4,13 +4,25 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Iterator;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.ResourceBundle;
 
 import org.eclipse.core.runtime.CoreException;
 import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.jface.dialogs.MessageDialog;
+import org.eclipse.jface.text.DocumentEvent;
 import org.eclipse.jface.text.IDocument;
+import org.eclipse.jface.text.IDocumentListener;
+import org.eclipse.jface.text.Position;
+import org.eclipse.jface.text.source.ISourceViewer;
+import org.eclipse.jface.text.source.IVerticalRuler;
+import org.eclipse.jface.text.source.projection.ProjectionAnnotation;
+import org.eclipse.jface.text.source.projection.ProjectionAnnotationModel;
+import org.eclipse.jface.text.source.projection.ProjectionSupport;
+import org.eclipse.jface.text.source.projection.ProjectionViewer;
+import org.eclipse.swt.widgets.Composite;
 import org.eclipse.jface.text.source.Annotation;
 import org.eclipse.jface.viewers.ISelection;
 import org.eclipse.jface.text.source.IAnnotationModel;
@@ -24,6 +36,7 @@ import org.eclipse.ui.ide.FileStoreEditorInput;
 
 import bulwark.check.DesignResult;
 import bulwark.check.io.AtomicFile;
+import bulwark.lang.ide.highlight.SemanticRanges;
 import bulwark.ui.outline.DesignOutline;
 
 /**
@@ -61,6 +74,101 @@ public class DesignEditor extends TextEditor {
 			return adapter.cast(outline);
 		}
 		return super.getAdapter(adapter);
+	}
+
+	private ProjectionSupport projectionSupport;
+	private final SemanticHighlighter semantic = new SemanticHighlighter();
+	private boolean foldingQueued;
+
+	/** A projection viewer, so that blocks and comment runs fold (FoldRegions). */
+	@Override
+	protected ISourceViewer createSourceViewer(Composite parent, IVerticalRuler ruler, int styles) {
+		ISourceViewer viewer = new ProjectionViewer(parent, ruler, getOverviewRuler(), isOverviewRulerVisible(), styles);
+		getSourceViewerDecorationSupport(viewer); // created and configured before the viewer is used
+		return viewer;
+	}
+
+	@Override
+	public void createPartControl(Composite parent) {
+		super.createPartControl(parent);
+		ProjectionViewer viewer = (ProjectionViewer) getSourceViewer();
+		projectionSupport = new ProjectionSupport(viewer, getAnnotationAccess(), getSharedColors());
+		projectionSupport.install();
+		viewer.doOperation(ProjectionViewer.TOGGLE);
+		viewer.addTextPresentationListener(semantic);
+		updateFolding();
+		viewer.getDocument().addDocumentListener(new IDocumentListener() {
+			@Override
+			public void documentAboutToBeChanged(DocumentEvent event) {
+			}
+
+			@Override
+			public void documentChanged(DocumentEvent event) {
+				// once per pause in typing: the scan is cheap, redrawing the ruler on each key is not
+				if (!foldingQueued) {
+					foldingQueued = true;
+					parent.getDisplay().timerExec(300, () -> {
+						foldingQueued = false;
+						updateFolding();
+					});
+				}
+			}
+		});
+	}
+
+	/**
+	 * Brings the fold regions up to date with the text. A region that is still where it was keeps its
+	 * annotation, and so stays folded if the engineer folded it.
+	 */
+	public void updateFolding() {
+		ProjectionViewer viewer = (ProjectionViewer) getSourceViewer();
+		if (viewer == null || viewer.getDocument() == null || viewer.getProjectionAnnotationModel() == null) {
+			return;
+		}
+		ProjectionAnnotationModel model = viewer.getProjectionAnnotationModel();
+		List<Position> wanted = new ArrayList<>(FoldRegions.of(viewer.getDocument().get()));
+		List<Annotation> stale = new ArrayList<>();
+		for (Iterator<Annotation> it = model.getAnnotationIterator(); it.hasNext();) {
+			Annotation a = it.next();
+			Position p = model.getPosition(a);
+			if (!wanted.remove(p)) {
+				stale.add(a);
+			}
+		}
+		Map<ProjectionAnnotation, Position> added = new HashMap<>();
+		for (Position p : wanted) {
+			added.put(new ProjectionAnnotation(), p);
+		}
+		model.modifyAnnotations(stale.toArray(Annotation[]::new), added, null);
+	}
+
+	/** Names classified by the background parse of this text; shown if the text is still the editor's. */
+	void semanticRangesArrived(String text, List<SemanticRanges.Range> ranges) {
+		ISourceViewer viewer = getSourceViewer();
+		if (isClosed() || viewer == null || viewer.getDocument() == null || !text.equals(viewer.getDocument().get())) {
+			return;
+		}
+		semantic.set(ranges);
+		viewer.invalidateTextPresentation();
+	}
+
+	/** The names highlighted by what they stand for, for tests. */
+	public List<SemanticRanges.Range> semanticRanges() {
+		return semantic.ranges();
+	}
+
+	/** The fold regions now in the editor, for tests. */
+	public List<Position> foldRegions() {
+		List<Position> regions = new ArrayList<>();
+		ProjectionViewer viewer = (ProjectionViewer) getSourceViewer();
+		ProjectionAnnotationModel model = viewer == null ? null : viewer.getProjectionAnnotationModel();
+		if (model != null) {
+			for (Iterator<Annotation> it = model.getAnnotationIterator(); it.hasNext();) {
+				regions.add(model.getPosition(it.next()));
+			}
+		}
+		regions.sort((a, b) -> Integer.compare(a.getOffset(), b.getOffset()));
+		return regions;
 	}
 
 	/** Ctrl+Space opens the proposals (TextEditor registers Ctrl+1 itself, content assist it leaves to us). */

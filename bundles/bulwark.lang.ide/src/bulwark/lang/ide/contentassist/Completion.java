@@ -1,27 +1,22 @@
 package bulwark.lang.ide.contentassist;
 
-import java.io.ByteArrayInputStream;
-import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import java.util.Map;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 
-import org.eclipse.emf.common.util.URI;
 import org.eclipse.xtext.ide.editor.contentassist.ContentAssistContext;
 import org.eclipse.xtext.ide.editor.contentassist.ContentAssistEntry;
 import org.eclipse.xtext.ide.editor.contentassist.IdeContentProposalAcceptor;
 import org.eclipse.xtext.ide.editor.contentassist.IdeContentProposalProvider;
 import org.eclipse.xtext.ide.editor.contentassist.antlr.ContentAssistContextFactory;
-import org.eclipse.xtext.resource.IResourceFactory;
 import org.eclipse.xtext.resource.XtextResource;
-import org.eclipse.xtext.resource.XtextResourceSet;
 import org.eclipse.xtext.util.TextRegion;
 
 import com.google.inject.Injector;
+
+import bulwark.lang.ide.InMemoryResource;
 
 /**
  * Completion for an editor without Xtext's UI (the workbench's JFace editor): the language's IDE services
@@ -40,16 +35,7 @@ public final class Completion {
 
 	/** The proposals at an offset of a text, in the order the provider ranks them. */
 	public static List<ContentAssistEntry> at(Injector injector, String text, String file, int offset) {
-		XtextResourceSet set = injector.getInstance(XtextResourceSet.class);
-		XtextResource resource = (XtextResource) injector.getInstance(IResourceFactory.class)
-				.createResource(URI.createFileURI(file));
-		set.getResources().add(resource);
-		try {
-			resource.load(new ByteArrayInputStream(text.getBytes(StandardCharsets.UTF_8)),
-					Map.of(XtextResource.OPTION_ENCODING, StandardCharsets.UTF_8.name()));
-		} catch (IOException e) {
-			throw new IllegalStateException(e); // reading from memory
-		}
+		XtextResource resource = InMemoryResource.load(injector, text, file);
 		ContentAssistContextFactory factory = injector.getInstance(ContentAssistContextFactory.class);
 		factory.setPool(POOL);
 		ContentAssistContext[] contexts = factory.create(text, new TextRegion(offset, 0), offset, resource);
