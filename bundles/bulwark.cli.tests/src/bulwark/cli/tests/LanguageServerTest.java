@@ -173,6 +173,26 @@ class LanguageServerTest {
 	}
 
 	@Test
+	void semanticTokensClassifyTheNames() throws Exception {
+		var tokens = server.getTextDocumentService()
+				.semanticTokensFull(new org.eclipse.lsp4j.SemanticTokensParams(new TextDocumentIdentifier(uri))).get(30, TimeUnit.SECONDS);
+		List<Integer> data = tokens.getData();
+		assertEquals(0, data.size() % 5);
+		// decoded back to absolute places: "line:character length type modifiers"
+		List<String> decoded = new java.util.ArrayList<>();
+		int line = 0, character = 0;
+		for (int i = 0; i < data.size(); i += 5) {
+			character = data.get(i) == 0 ? character + data.get(i + 1) : data.get(i + 1);
+			line += data.get(i);
+			decoded.add(line + ":" + character + " " + data.get(i + 2) + " " + data.get(i + 3) + " " + data.get(i + 4));
+		}
+		Position drop = at("R_DROP ("), gnd = at("gnd\n");
+		// R_DROP declared: type 2 (class: a part), modifier bit 0 (declaration); at(...) is 1-based in the column
+		assertTrue(decoded.contains(drop.getLine() + ":" + (drop.getCharacter() - 1) + " 6 2 1"), decoded.toString());
+		assertTrue(decoded.contains(gnd.getLine() + ":" + (gnd.getCharacter() - 1) + " 3 0 1"), decoded.toString()); // net gnd declared
+	}
+
+	@Test
 	void anUnknownMethodGetsTheProtocolsError() throws Exception {
 		CompletableFuture<Object> answer = client.getRemoteEndpoint().request("bulwark/noSuchMethod", null);
 		try {

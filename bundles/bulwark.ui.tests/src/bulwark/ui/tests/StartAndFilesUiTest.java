@@ -43,6 +43,28 @@ class StartAndFilesUiTest {
 				ROOT.resolve("bundles/bulwark.ui.tests/target/screenshots/start.png"));
 	}
 
+	/** Each demo design opens with the markers its story promises (its comments say why each is there). */
+	@Test
+	void eachDemoDesignOpensWithItsMarkers() throws Exception {
+		var expected = java.util.Map.of(
+				"greenhouse-vent-input.bulwark", java.util.List.<String>of(),
+				"lab-indicator-seeded.bulwark", java.util.List.of("22 resistor-power"),
+				"marina-bilge-switch-tester.bulwark", java.util.List.of("24 requirement", "28 battery-charge", "28 reverse-path",
+						"41 base-emitter-reverse", "41 reverse-path", "48 forward-current"),
+				"stage-loom-checker.bulwark", java.util.List.of("19 requirement", "21 battery-charge", "21 reverse-path",
+						"28 resistor-power", "28 resistor-voltage", "28 reverse-path", "33 rating-missing", "37 resistor-power",
+						"37 reverse-path"));
+		for (var demo : expected.entrySet()) {
+			DesignEditor editor = bulwark.ui.Application.openFile(page(), ROOT.resolve("examples").resolve(demo.getKey()));
+			assertTrue(waitUntil(() -> editor.lastResult() != null), demo.getKey() + " was not checked");
+			// 1-based lines of the markers in the editor, as the ruler shows them
+			var marked = editor.findingAnnotations().stream().map(a -> (editor.lineOf(a) + 1) + " " + a.finding().rule())
+					.sorted().toList();
+			assertEquals(demo.getValue().stream().sorted().toList(), marked, demo.getKey());
+			page().closeEditor(editor, false);
+		}
+	}
+
 	@Test
 	void everyTemplatePassesTheDefaultPolicy() throws Exception {
 		Path dir = Files.createTempDirectory("bulwark-new");

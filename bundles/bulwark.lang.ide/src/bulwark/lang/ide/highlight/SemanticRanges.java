@@ -38,6 +38,11 @@ public final class SemanticRanges {
 
 	public static List<Range> of(Injector injector, String text, String file) {
 		XtextResource resource = InMemoryResource.load(injector, text, file);
+		return of(resource);
+	}
+
+	/** The names of a parsed resource, in text order. */
+	public static List<Range> of(XtextResource resource) {
 		if (resource.getParseResult() == null || resource.getParseResult().getRootNode() == null) {
 			return List.of();
 		}
