@@ -49,6 +49,7 @@ public class Application implements IApplication {
 						public void preWindowOpen() {
 							c.setInitialSize(new Point(1200, 760));
 							c.setShowStatusLine(true);
+							c.setShowProgressIndicator(true); // background jobs such as a tolerance run
 							c.setTitle("Bulwark");
 						}
 

@@ -24,6 +24,7 @@ public class ReviewPerspective implements IPerspectiveFactory {
 		right.addView(CasesView.ID);
 		right.addView(TopologyView.ID);
 		right.addView(ChangesView.ID);
+		right.addView(bulwark.ui.tolerance.ToleranceView.ID);
 		layout.addPlaceholder(bulwark.ui.start.StartView.ID, IPageLayout.LEFT, 0.5f, layout.getEditorArea());
 	}
 }

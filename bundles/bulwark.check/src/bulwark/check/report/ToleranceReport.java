@@ -158,7 +158,8 @@ public final class ToleranceReport {
 		return all;
 	}
 
-	private static String show(Figure f, double v) {
+	/** A figure's value as the reports show it: engineering units, hours, or a percentage of the rating. */
+	public static String show(Figure f, double v) {
 		if (f.unit().isEmpty()) {
 			return percent(v); // a utilisation
 		}
@@ -168,7 +169,7 @@ public final class ToleranceReport {
 		return Figures.engineering(v, f.unit());
 	}
 
-	private static String percent(double fraction) {
+	public static String percent(double fraction) {
 		return String.format(Locale.ROOT, "%.1f %%", 100 * fraction);
 	}
 

@@ -213,6 +213,25 @@ class ReviewViewsUiTest {
 	}
 
 	@Test
+	void aToleranceRunInTheBackground() throws Exception {
+		DesignEditor editor = Application.openFile(page(), MARINA);
+		var view = (bulwark.ui.tolerance.ToleranceView) page().showView(bulwark.ui.tolerance.ToleranceView.ID);
+		view.run(editor, 200);
+		assertTrue(waitUntil(() -> view.result() != null), "the tolerance run did not finish");
+		var rows = view.shownRows();
+		assertTrue(rows.stream().anyMatch(r -> r.figure().name().startsWith("threshold") && r.corners() != null
+				&& r.statistics() != null && r.corners().low() <= r.statistics().p50() && r.statistics().p50() <= r.corners().high()),
+				rows.toString()); // the samples lie inside the corners [extreme-value analysis bounds every sample]
+		assertEquals(200, view.result().monteCarlo().samples().size());
+		assertTrue(view.result().yields().stream().anyMatch(y -> y.requirement().startsWith("require threshold")));
+		Screenshot.save(PlatformUI.getWorkbench().getActiveWorkbenchWindow().getShell(),
+				ROOT.resolve("bundles/bulwark.ui.tests/target/screenshots/tolerance.png"));
+		Path report = java.nio.file.Files.createTempDirectory("bulwark-tolerance").resolve("tolerance.html");
+		view.save(report);
+		assertTrue(java.nio.file.Files.readString(report).contains("IEC 61010-1"));
+	}
+
+	@Test
 	void ticksGrowDenserAsTheAxisIsZoomed() {
 		// log10 positions: 1 Ω … 1 MΩ every decade; 1 kΩ … 3 kΩ in 1-2 steps plus every mantissa below 0.6 decade
 		assertEquals(java.util.List.of(0.0, 1.0, 2.0, 3.0, 4.0, 5.0, 6.0), bulwark.ui.sweep.AxisTicks.logarithmic(0, 6.0 - 1e-12));
