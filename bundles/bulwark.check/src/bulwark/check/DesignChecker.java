@@ -143,7 +143,7 @@ public final class DesignChecker {
 			FaultCase c = outcome.faultCase();
 			DcResult result = outcome.result();
 			if (result instanceof DcSolution solution) {
-				solved.add(new SolvedCase(c, solution));
+				solved.add(new SolvedCase(c, solution, outcome.pulseEnergy()));
 				caseResults.add(new CaseResult(c.name(), c.kind(), true, Stresses.of(compiled, c, solution, policy)));
 			} else {
 				solverFailed = true;

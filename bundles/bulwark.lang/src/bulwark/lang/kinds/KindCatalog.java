@@ -19,7 +19,8 @@ public final class KindCatalog {
 					SettingSpec.word("package", "the package, which sets the limiting element voltage",
 							RESISTOR_PACKAGES)),
 			List.of(new SettingSpec("power", Unit.WATT, false, "rated power"),
-					new SettingSpec("voltage", Unit.VOLT, false, "rated working voltage")));
+					new SettingSpec("voltage", Unit.VOLT, false, "rated working voltage"),
+					new SettingSpec("pulse", Unit.JOULE, false, "rated single-pulse energy, from the part's pulse load curve at about 50 µs")));
 	private static final KindSpec SOURCE = new KindSpec("source", List.of("plus", "minus"),
 			List.of(new SettingSpec("voltage", Unit.VOLT, true, "DC voltage of plus against minus"),
 					new SettingSpec("resistance", Unit.OHM, false, "internal resistance (0 Ω when omitted)")),

@@ -32,7 +32,7 @@ public class SyntaxErrorMessages extends SyntaxErrorMessageProvider {
 						? "'" + text + "' after " + number.getText() + " is only a prefix: write the unit too, for example "
 								+ number.getText() + " " + text + "Ω"
 						: "'" + text + "' after " + number.getText() + " is not a unit Bulwark knows; units are Ω (or ohm),"
-								+ " V, A, W, Ah, F, H, s, Hz, with the prefixes p n µ m k M G T";
+								+ " V, A, W, Ah, F, H, s, h, Hz, J, with the prefixes p n µ m k M G T";
 				return new SyntaxErrorMessage(message, IssueCodes.UNKNOWN_UNIT);
 			}
 			// a name that is a keyword ("net led", "net level"): say so, and how to write it

@@ -20,7 +20,9 @@ public enum Unit {
 	SECOND("time", Units.SECOND, "s"),
 	/** The hour, accepted for use with the SI (BIPM SI brochure, 9th ed., table 8); SI value in seconds. */
 	HOUR("time", Units.HOUR, "h"),
-	HERTZ("frequency", Units.HERTZ, "Hz");
+	HERTZ("frequency", Units.HERTZ, "Hz"),
+	/** A part's single-pulse energy rating (a surge). */
+	JOULE("energy", Units.JOULE, "J");
 
 	private final String quantity;
 	private final javax.measure.Unit<?> measure;

@@ -1,0 +1,84 @@
+package bulwark.check.rules;
+
+import java.util.Locale;
+import java.util.Optional;
+import java.util.function.Consumer;
+
+import bulwark.check.Concern;
+import bulwark.check.Finding;
+import bulwark.check.Locations;
+import bulwark.check.Severity;
+import bulwark.check.compile.Settings;
+import bulwark.check.policy.ReviewPolicy;
+import bulwark.check.stress.Limit;
+import bulwark.lang.design.DesignPackage;
+import bulwark.lang.design.Part;
+import bulwark.lang.design.PartKind;
+
+/**
+ * A resistor absorbs more energy in a surge than its single-pulse rating, derated by the review policy. The
+ * energy is ∫ p dt over the solved wave (SurgeRunner); the rating is what the part's pulse load curve allows
+ * for one pulse of about 50 µs, written as {@code rated pulse}. A resistor that absorbs energy in a surge
+ * but has no pulse rating gets a note (info), since its continuous power rating says nothing about a pulse.
+ */
+public final class SurgeEnergyRule implements Rule {
+	public static final String ID = "surge-energy";
+	private static final RuleInfo INFO = new RuleInfo(ID, Concern.POWER, Severity.ERROR,
+			"a resistor absorbs more energy in a surge than its derated single-pulse rating");
+	/** Energy below which an unrated resistor is not worth a note: a millijoule [common practice]. */
+	static final double NOTEWORTHY_JOULES = 1e-3;
+
+	@Override
+	public RuleInfo info() {
+		return INFO;
+	}
+
+	private record Worst(double joules, String surge) {
+	}
+
+	@Override
+	public void check(CheckContext context, Consumer<Finding> findings) {
+		for (Part part : context.design().parts().values()) {
+			if (part.getKind() != PartKind.RESISTOR) {
+				continue;
+			}
+			Worst worst = null;
+			for (SolvedCase c : context.cases()) {
+				Double e = c.pulseEnergy().get(part.getName());
+				if (e != null && (worst == null || e > worst.joules())) {
+					worst = new Worst(e, surgeName(c.faultCase().name()));
+				}
+			}
+			if (worst == null) {
+				continue;
+			}
+			Optional<Double> rated = Settings.rating(part, "pulse");
+			var where = Locations.of(part, DesignPackage.Literals.MEMBER__NAME);
+			if (rated.isEmpty()) {
+				if (worst.joules() >= NOTEWORTHY_JOULES) {
+					findings.accept(new Finding(ID, INFO.concern(), Severity.INFO, String.format(Locale.ROOT,
+							"%s absorbs %s in surge '%s' and has no pulse rating, so that is not judged: add 'rated pulse' "
+									+ "from its pulse load curve (its power rating is for continuous dissipation)",
+							part.getName(), Figures.engineering(worst.joules(), "J"), worst.surge()), part.getName(),
+							worst.surge(), where, worst.joules(), null, "J", false));
+				}
+				continue;
+			}
+			ReviewPolicy.Derating d = context.policy().derating(PartKind.RESISTOR, "pulse");
+			Limit limit = new Limit(rated.get(), "J", "its rated", d.factor(), d.source());
+			if (worst.joules() > limit.value()) {
+				findings.accept(new Finding(ID, INFO.concern(), INFO.severity(), String.format(Locale.ROOT,
+						"%s: energy %s in surge '%s', over %s, %.0f %% of the limit", part.getName(),
+						Figures.engineering(worst.joules(), "J"), worst.surge(), limit.describe(),
+						100 * worst.joules() / limit.value()), part.getName(), worst.surge(), where, worst.joules(),
+						limit.value(), "J", false));
+			}
+		}
+	}
+
+	/** The surge a case instant belongs to: "surge 1 kV behind 2 Ω, TIP + to COM −, at 1.6 µs" without the instant. */
+	static String surgeName(String caseName) {
+		int at = caseName.lastIndexOf(", at ");
+		return at < 0 ? caseName : caseName.substring(0, at);
+	}
+}
