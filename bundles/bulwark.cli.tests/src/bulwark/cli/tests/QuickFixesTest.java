@@ -56,6 +56,25 @@ class QuickFixesTest {
 	}
 
 	@Test
+	void raiseAPulseRatingForASurge(@TempDir Path dir) throws Exception {
+		Files.writeString(dir.resolve("surge.bulwark-policy"), "policy \"surge only\"\n  mains none\n  surge 1 kV behind 2 Ω\n");
+		Path design = dir.resolve("d.bulwark");
+		Files.writeString(design, """
+				design "a surge into a resistor"
+				policy "surge.bulwark-policy"
+				reference net gnd
+				net tip
+				terminal TIP at tip
+				terminal COM at gnd common
+				resistor R1 (a: tip, b: gnd) { value 100 Ω rated power 2 W rated voltage 2 kV rated pulse 200 mJ }
+				""");
+		Fix fix = only(fixes(design), "surge-energy");
+		// 342 mJ from the 1 kV wave behind 2 Ω (SurgeEnergyRuleTest's closed form), no derating: the 0.5 J step
+		assertEquals("raise R1's rated pulse 200 mJ → 500 mJ (171 % → 68 % of the limit)", fix.label());
+		assertTrue(fix.applyTo(Files.readString(design)).contains("rated pulse 500 mJ"));
+	}
+
+	@Test
 	void splitAResistorOverItsVoltage(@TempDir Path dir) throws Exception {
 		Path design = dir.resolve("d.bulwark");
 		Files.writeString(design, """

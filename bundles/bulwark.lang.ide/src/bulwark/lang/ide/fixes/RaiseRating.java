@@ -29,11 +29,13 @@ final class RaiseRating implements FixProvider {
 			"drain_source", new double[] { 30, 60, 100, 200, 400, 600, 800 },
 			"blocking", new double[] { 250, 400, 600, 1000 },
 			"collector", new double[] { 0.1, 0.2, 0.5, 1, 2 },
-			"drain", new double[] { 0.1, 0.2, 0.5, 1, 2, 5 });
+			"drain", new double[] { 0.1, 0.2, 0.5, 1, 2, 5 },
+			// single-pulse energy, J: thick-film chips to wirewound and carbon-composition parts
+			"pulse", new double[] { 0.05, 0.1, 0.2, 0.5, 1, 2, 5, 10, 20 });
 	/** Which rating each rule's finding is about, by the part's kind. */
 	private static final Map<String, String> RATING_OF_RULE = Map.of("resistor-power", "power", "device-power", "power",
 			"diode-reverse", "reverse", "forward-current", "forward", "capacitor-voltage", "voltage", "fuse-voltage",
-			"voltage", "protector-blocking", "blocking", "transistor-current", "collector");
+			"voltage", "protector-blocking", "blocking", "transistor-current", "collector", "surge-energy", "pulse");
 
 	@Override
 	public List<Fix> propose(FixContext context, Finding finding) {
