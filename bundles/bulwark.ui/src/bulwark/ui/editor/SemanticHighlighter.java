@@ -39,11 +39,14 @@ final class SemanticHighlighter implements ITextPresentationListener {
 	public void applyTextPresentation(TextPresentation presentation) {
 		IRegion extent = presentation.getExtent();
 		List<Range> now = ranges;
+		int from = extent.getOffset(), to = extent.getOffset() + extent.getLength();
 		for (Range r : now) {
-			if (r.offset() + r.length() <= extent.getOffset() || r.offset() >= extent.getOffset() + extent.getLength()) {
+			// only the part inside the repainted extent: a presentation takes no style outside it
+			int start = Math.max(r.offset(), from), end = Math.min(r.offset() + r.length(), to);
+			if (end <= start) {
 				continue;
 			}
-			StyleRange style = new StyleRange(r.offset(), r.length(), color(r.kind()), null,
+			StyleRange style = new StyleRange(start, end - start, color(r.kind()), null,
 					(r.declaration() ? SWT.BOLD : SWT.NORMAL) | (r.kind() == SemanticRanges.Kind.DEFINITION ? SWT.ITALIC : SWT.NORMAL));
 			presentation.mergeStyleRange(style);
 		}
