@@ -35,7 +35,7 @@ class StartAndFilesUiTest {
 			page().hideView(shown);
 		}
 		StartView start = (StartView) page().showView(StartView.ID);
-		assertTrue(DemoDesigns.list().size() >= 4, DemoDesigns.list().toString());
+		assertTrue(DemoDesigns.list().size() >= 5, DemoDesigns.list().toString());
 		assertTrue(DemoDesigns.list().stream().anyMatch(d -> d.title().equals("Bilge float-switch tester")));
 		// a link per demo and per template, "open", and three help pages
 		assertEquals(DemoDesigns.list().size() + Templates.ALL.size() + 1 + 3, start.linkCount());
@@ -51,6 +51,8 @@ class StartAndFilesUiTest {
 				"lab-indicator-seeded.bulwark", java.util.List.of("22 resistor-power"),
 				"marina-bilge-switch-tester.bulwark", java.util.List.of("24 requirement", "28 battery-charge", "28 reverse-path",
 						"41 base-emitter-reverse", "41 reverse-path", "48 forward-current"),
+				"track-section-checker.bulwark", java.util.List.of("28 battery-charge", "28 reverse-path", "35 resistor-power",
+						"35 reverse-path", "52 comparator-input", "52 reverse-path", "52 hysteresis"),
 				"stage-loom-checker.bulwark", java.util.List.of("19 requirement", "21 battery-charge", "21 reverse-path",
 						"28 resistor-power", "28 resistor-voltage", "28 reverse-path", "33 rating-missing", "37 resistor-power",
 						"37 reverse-path"));

@@ -27,7 +27,8 @@ import bulwark.ui.findings.FindingsHub;
 /**
  * The threshold sweep of the design being edited, drawn with SWT: the current into the resistance under test
  * against that resistance (both logarithmic), rising sweep solid, falling dashed, thick where the indicator is
- * on, each switching point marked. Moving the pointer reads the resistance under it and the currents of both
+ * on, each switching point marked, and the indicator's state as a band per sweep along the bottom (on where
+ * filled; where the bands differ is the hysteresis). Moving the pointer reads the resistance under it and the currents of both
  * sweeps there. The wheel zooms the resistance axis about the pointer, dragging zooms to the dragged span,
  * double-click shows the whole sweep again; "Zoom to the switching points" frames the hysteresis loop.
  */
@@ -156,7 +157,7 @@ public class SweepView extends ViewPart {
 		indicator = result.function().indicator();
 		setContentDescription(pair == null ? "No threshold sweep for this design."
 				: "Threshold sweep " + pair.from() + "–" + pair.to() + ", indicator " + indicator
-						+ " (thick where it is on; solid rising, dashed falling)");
+						+ " (thick, and banded along the bottom, where it is on; solid rising, dashed falling)");
 		readout.setText(pair == null ? "No threshold sweep: check a design whose indicator switches across its terminals."
 				: "Move the pointer over the plot to read the resistance and both sweeps' currents there.");
 		canvas.redraw();
@@ -217,6 +218,9 @@ public class SweepView extends ViewPart {
 			trace(gc, pair.falling(), falling, SWT.LINE_DASH, x, y, w, h);
 			mark(gc, pair.risingOhms(), rising, x, w, h, 0);
 			mark(gc, pair.fallingOhms(), falling, x, w, h, 16);
+			// the indicator's state, one band per sweep along the bottom: where they differ is the hysteresis
+			band(gc, pair.rising(), pair.risingOhms(), rising, x, w, TOP + h - 2 * BAND - 3);
+			band(gc, pair.falling(), pair.fallingOhms(), falling, x, w, TOP + h - BAND - 1);
 		} finally {
 			gc.setClipping((Rectangle) null);
 			rising.dispose();
@@ -234,6 +238,33 @@ public class SweepView extends ViewPart {
 		}
 		gc.setLineWidth(1);
 		gc.setLineStyle(SWT.LINE_SOLID);
+	}
+
+	/** Height of an indicator-state band, pixels. */
+	static final int BAND = 6;
+
+	/** Filled where the indicator is on; a segment that switches is filled up to the bisected switching point. */
+	private static void band(GC gc, List<SweepPoint> points, Double switchOhms, Color colour, double[] x, int w, int y) {
+		gc.setBackground(colour);
+		for (int i = 1; i < points.size(); i++) {
+			SweepPoint a = points.get(i - 1), b = points.get(i);
+			if (!a.on() && !b.on()) {
+				continue;
+			}
+			int x0 = px(a, x, w), x1 = px(b, x, w);
+			if (a.on() != b.on()) {
+				if (switchOhms == null || switchOhms < Math.min(a.ohms(), b.ohms()) || switchOhms > Math.max(a.ohms(), b.ohms())) {
+					continue; // a switch this sweep's bisection did not place here
+				}
+				int xs = LEFT + (int) ((Math.log10(switchOhms) - x[0]) / (x[1] - x[0]) * w);
+				if (a.on()) {
+					x1 = xs;
+				} else {
+					x0 = xs;
+				}
+			}
+			gc.fillRectangle(Math.min(x0, x1), y, Math.abs(x1 - x0) + 1, BAND);
+		}
 	}
 
 	private static void mark(GC gc, Double ohms, Color colour, double[] x, int w, int h, int dy) {
