@@ -36,6 +36,15 @@ final class CheckingStrategy implements IReconcilingStrategy, IReconcilingStrate
 	private IDocument document;
 	private IProgressMonitor monitor;
 	private Annotation[] shown = new Annotation[0];
+	/** One low-priority thread classifies names for every editor; only the newest text of each is parsed. */
+	private static final java.util.concurrent.ExecutorService SEMANTIC = java.util.concurrent.Executors
+			.newSingleThreadExecutor(r -> {
+				Thread t = new Thread(r, "bulwark semantic highlighting");
+				t.setDaemon(true);
+				t.setPriority(Thread.MIN_PRIORITY);
+				return t;
+			});
+	private volatile long semanticGeneration;
 
 	CheckingStrategy(DesignEditor editor, ISourceViewer viewer) {
 		this.editor = editor;
@@ -108,12 +117,19 @@ final class CheckingStrategy implements IReconcilingStrategy, IReconcilingStrate
 				}
 			});
 		}
-		// after the findings, which matter more: the names classified for highlighting
+		// the names classified for highlighting, on a thread of their own so that the next check never waits
 		if (!fileName().endsWith(".bulwark-policy")) {
-			List<SemanticRanges.Range> ranges = SemanticRanges.of(BulwarkUi.checker().loader().injector(), text, fileName());
-			if (!display.isDisposed()) {
-				display.asyncExec(() -> editor.semanticRangesArrived(text, ranges));
-			}
+			long generation = ++semanticGeneration;
+			String file = fileName();
+			SEMANTIC.execute(() -> {
+				if (generation != semanticGeneration || editor.isClosed()) {
+					return; // a newer text is on its way
+				}
+				List<SemanticRanges.Range> ranges = SemanticRanges.of(BulwarkUi.checker().loader().injector(), text, file);
+				if (!display.isDisposed()) {
+					display.asyncExec(() -> editor.semanticRangesArrived(text, ranges));
+				}
+			});
 		}
 	}
 

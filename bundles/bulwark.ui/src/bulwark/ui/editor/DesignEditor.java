@@ -100,6 +100,7 @@ public class DesignEditor extends TextEditor {
 		viewer.getDocument().addDocumentListener(new IDocumentListener() {
 			@Override
 			public void documentAboutToBeChanged(DocumentEvent event) {
+				semantic.edited(event.getOffset(), event.getLength(), event.getText() == null ? 0 : event.getText().length());
 			}
 
 			@Override

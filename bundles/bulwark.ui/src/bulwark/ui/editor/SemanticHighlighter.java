@@ -31,6 +31,22 @@ final class SemanticHighlighter implements ITextPresentationListener {
 		ranges = List.copyOf(newRanges);
 	}
 
+	/**
+	 * Keeps the ranges in step with an edit until the next parse replaces them: those after it move, those it
+	 * touches are dropped (they show lexically meanwhile), so no name is coloured at a stale offset.
+	 */
+	void edited(int offset, int removed, int inserted) {
+		List<Range> shifted = new java.util.ArrayList<>();
+		for (Range r : ranges) {
+			if (r.offset() + r.length() < offset) {
+				shifted.add(r);
+			} else if (r.offset() > offset + removed) {
+				shifted.add(new Range(r.offset() - removed + inserted, r.length(), r.kind(), r.declaration()));
+			}
+		}
+		ranges = List.copyOf(shifted);
+	}
+
 	List<Range> ranges() {
 		return ranges;
 	}
