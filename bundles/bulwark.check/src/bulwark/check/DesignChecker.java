@@ -44,6 +44,7 @@ public final class DesignChecker {
 	private final ReviewPolicy forcedPolicy;
 	private final PolicyFiles policies;
 	private final Duration budget;
+	private final List<Rule> rules;
 
 	public DesignChecker(DesignLoader loader) {
 		this(loader, null);
@@ -59,10 +60,23 @@ public final class DesignChecker {
 
 	/** @param budget the time one design's check may take before it is reported as not checked */
 	public DesignChecker(DesignLoader loader, ReviewPolicy policy, Duration budget) {
+		this(loader, policy, budget, RuleRegistry.all());
+	}
+
+	private DesignChecker(DesignLoader loader, ReviewPolicy policy, Duration budget, List<Rule> rules) {
 		this.loader = loader;
 		this.forcedPolicy = policy;
 		this.policies = new PolicyFiles(loader);
 		this.budget = budget;
+		this.rules = List.copyOf(rules);
+	}
+
+	/**
+	 * The same checker running the given rules instead of the registered ones: tests use it to prove that a
+	 * rule which crashes is seen as a failure, never as a pass.
+	 */
+	public DesignChecker withRules(List<Rule> replacement) {
+		return new DesignChecker(loader, forcedPolicy, budget, replacement);
 	}
 
 	/** The loader this checker parses with; quick fixes parse their copies with it. */
@@ -155,7 +169,7 @@ public final class DesignChecker {
 				? FunctionFigures.NONE
 				: FunctionAnalysis.of(compiled, solved.get(0).solution());
 		CheckContext context = CheckContext.of(compiled, solved, policy, function);
-		for (Rule rule : RuleRegistry.all()) {
+		for (Rule rule : rules) {
 			Budget.checkpoint("rule " + rule.info().id());
 			// a policy's severity replaces the rule's own; otherwise each finding keeps the one its rule gave it
 			Severity set = policy.severities().get(rule.info().id());

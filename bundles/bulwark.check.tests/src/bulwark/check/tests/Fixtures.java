@@ -61,14 +61,67 @@ final class Fixtures {
 		return underDefault;
 	}
 
-	/** Checks the design as written (see {@link #AS_WRITTEN}). */
+	/**
+	 * Rules whose findings say the check itself did not finish: a fault of Bulwark's own, a case that did not
+	 * solve, a budget run out. A fixture meeting one of them proves nothing about the rule it tests, so the
+	 * checks below fail the test on them unless it asks for them with {@link #checkAllowingTrouble}.
+	 */
+	static final Set<String> TROUBLE = Set.of("internal", "solver", "budget");
+
+	/** Checks the design as written (see {@link #AS_WRITTEN}); fails the test if the check was in trouble. */
 	static DesignResult check(String text) {
-		return checker().check(text, "fixture.bulwark", CancelIndicator.NullImpl);
+		return untroubled(checker().check(text, "fixture.bulwark", CancelIndicator.NullImpl));
 	}
 
 	/** Checks the design under the built-in review policy: generated abuse cases, derated ratings. */
 	static DesignResult checkUnderDefault(String text) {
-		return defaultChecker().check(text, "fixture.bulwark", CancelIndicator.NullImpl);
+		return untroubled(defaultChecker().check(text, "fixture.bulwark", CancelIndicator.NullImpl));
+	}
+
+	/** Checks the design as written and returns whatever came of it, trouble included. */
+	static DesignResult checkAllowingTrouble(String text) {
+		return checker().check(text, "fixture.bulwark", CancelIndicator.NullImpl);
+	}
+
+	/** Checks the design under the given policy and returns whatever came of it, trouble included. */
+	static DesignResult checkAllowingTrouble(String text, ReviewPolicy policy) {
+		return new DesignChecker(loader(), policy).check(text, "fixture.bulwark", CancelIndicator.NullImpl);
+	}
+
+	/** The result, after failing the test if any finding says the check did not finish (see {@link #TROUBLE}). */
+	static DesignResult untroubled(DesignResult result) {
+		for (Finding f : result.findings()) {
+			if (TROUBLE.contains(f.rule())) {
+				throw new AssertionError("the check did not finish (" + f.rule() + "): " + f.message());
+			}
+		}
+		return result;
+	}
+
+	/**
+	 * Asserts what a "does not trigger" fixture must prove: the design was checked (not refused, every case
+	 * solved, at least one case run) and no finding of the rule came of it.
+	 */
+	static void assertSilent(DesignResult result, String rule) {
+		untroubled(result);
+		if (result.status() == bulwark.check.Status.ERROR || result.policy() == null) {
+			throw new AssertionError("the design was not checked: " + result.findings());
+		}
+		if (result.cases().isEmpty() || !result.cases().stream().allMatch(c -> c.converged())) {
+			throw new AssertionError("not every case solved: " + result.cases());
+		}
+		List<Finding> of = result.findings().stream().filter(f -> f.rule().equals(rule)).toList();
+		if (!of.isEmpty()) {
+			throw new AssertionError("expected no " + rule + " finding, got " + of);
+		}
+	}
+
+	/** The text with {@code from} replaced by {@code to}; fails the test when {@code from} is not in it. */
+	static String replaced(String text, String from, String to) {
+		if (!text.contains(from)) {
+			throw new AssertionError("the fixture has no '" + from + "' to replace");
+		}
+		return text.replace(from, to);
 	}
 
 	/** A review policy from its text; fails the test when the text has errors. */
@@ -79,7 +132,7 @@ final class Fixtures {
 
 	/** Checks the design under the given policy. */
 	static DesignResult check(String text, ReviewPolicy policy) {
-		return new DesignChecker(loader(), policy).check(text, "fixture.bulwark", CancelIndicator.NullImpl);
+		return untroubled(checkAllowingTrouble(text, policy));
 	}
 
 	/** "line:rule" for each mark of the given rule in the text. */

@@ -56,7 +56,7 @@ class FunctionFiguresTest {
 		// in_plus, R2 1 MΩ from the output, 1.5 V on in_minus. Thevenin of the tip: Vt = 3·Rx/(Rx + 10 k),
 		// Rt = 10 k ∥ Rx. It switches where in_plus crosses 1.5 V: output low, in_plus = Vt·R2/(Rt + R1 + R2);
 		// output high (3 V), in_plus = (Vt·R2 + 3·(Rt + R1))/(Rt + R1 + R2) [closed form, superposition]
-		String text = HysteresisRuleTest.SCHMITT.replace(" #! hysteresis", "");
+		String text = Fixtures.replaced(HysteresisRuleTest.SCHMITT, " #! hysteresis", "");
 		PairFigures p = Fixtures.check(text).function().pairs().get(0);
 		double r1 = 100e3, r2 = 1e6;
 		DoubleUnaryOperator vt = rx -> 3 * rx / (rx + 10e3), rt = rx -> 10e3 * rx / (10e3 + rx);

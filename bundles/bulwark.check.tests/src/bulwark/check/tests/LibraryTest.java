@@ -67,13 +67,13 @@ class LibraryTest {
 	@Test
 	void aLibraryOutsideTheFolderIsRefused(@TempDir Path dir) throws IOException {
 		write(dir, "parts.bulwark", LIBRARY);
-		Path design = write(dir, "designs/d.bulwark", DESIGN.replace("lib/parts.bulwark", "../parts.bulwark"));
+		Path design = write(dir, "designs/d.bulwark", Fixtures.replaced(DESIGN, "lib/parts.bulwark", "../parts.bulwark"));
 		DesignResult r = Fixtures.checker().check(design);
 		assertEquals(Status.ERROR, r.status());
 		assertTrue(r.findings().stream().anyMatch(x -> x.message().contains("leaves the design's folder")),
 				r.findings().toString());
 		DesignResult absolute = Fixtures.checker().check(write(dir, "designs/e.bulwark",
-				DESIGN.replace("lib/parts.bulwark", dir.resolve("parts.bulwark").toString())));
+				Fixtures.replaced(DESIGN, "lib/parts.bulwark", dir.resolve("parts.bulwark").toString())));
 		assertTrue(absolute.findings().stream().anyMatch(x -> x.message().contains("must be relative")),
 				absolute.findings().toString());
 	}

@@ -16,7 +16,7 @@ class ResistorPowerRuleTest {
 	private static final String ID = ResistorPowerRule.ID;
 
 	/** 12 V across 150 Ω + 100 Ω: I = 48 mA, P(150 Ω) = I²R = 0.3456 W [closed form, Joule's law]. */
-	private static final String OVER = """
+	static final String OVER = """
 			design "power over rating"
 			reference net gnd
 			net bench
@@ -30,7 +30,7 @@ class ResistorPowerRuleTest {
 			""";
 
 	/** Same circuit with a 0.5 W dropping resistor: 0.3456 W is within its rating. */
-	private static final String WITHIN = OVER.replace("125 mW", "500 mW").replace(" #! resistor-power", "");
+	static final String WITHIN = Fixtures.replaced(Fixtures.replaced(OVER, "125 mW", "500 mW"), " #! resistor-power", "");
 
 	@Test
 	void triggersOnOverRatedResistor() {
@@ -56,7 +56,7 @@ class ResistorPowerRuleTest {
 	void silentWithinRating() {
 		DesignResult r = Fixtures.check(WITHIN);
 		assertEquals(Fixtures.expected(WITHIN, ID), Fixtures.actual(r, ID));
-		assertTrue(Fixtures.actual(r, ID).isEmpty());
+		Fixtures.assertSilent(r, ID);
 		assertEquals(Status.PASS, r.status(), r.findings().toString());
 	}
 

@@ -132,7 +132,7 @@ class ReviewPolicyTest {
 
 	@Test
 	void severityChangesApply() {
-		String unrated = ACROSS.replace(" rated power 2 W", "");
+		String unrated = Fixtures.replaced(ACROSS, " rated power 2 W", "");
 		DesignResult r = Fixtures.check(unrated, Fixtures.policy(POLICY));
 		assertEquals(Severity.ERROR, Fixtures.only(r, "rating-missing").severity());
 		assertEquals(Status.FAIL, r.status());
@@ -147,7 +147,7 @@ class ReviewPolicyTest {
 				&& f.message().contains("needs a justification")), strict.findings().toString());
 		assertFalse(Fixtures.only(strict, "resistor-power").waived());
 		// a policy that needs only a name accepts it
-		DesignResult lenient = Fixtures.check(waived, Fixtures.policy(POLICY.replace("derate resistor power to 50 %", "")));
+		DesignResult lenient = Fixtures.check(waived, Fixtures.policy(Fixtures.replaced(POLICY, "derate resistor power to 50 %", "")));
 		assertTrue(Fixtures.only(lenient, "resistor-power").waived(), lenient.findings().toString());
 	}
 
@@ -155,8 +155,7 @@ class ReviewPolicyTest {
 	void aDesignUsesThePolicyItNames(@TempDir Path dir) throws IOException {
 		Files.writeString(dir.resolve("team.bulwark-policy"), "policy \"team\"\n  mains none\n  level 12 V\n");
 		Path design = dir.resolve("d.bulwark");
-		Files.writeString(design, ACROSS.replace("design \"one resistor across\"",
-				"design \"one resistor across\"\npolicy \"team.bulwark-policy\""));
+		Files.writeString(design, Fixtures.replaced(ACROSS, "design \"one resistor across\"", "design \"one resistor across\"\npolicy \"team.bulwark-policy\""));
 		DesignResult r = Fixtures.defaultChecker().check(design);
 		assertEquals("team", r.policy());
 		assertEquals(4, r.cases().size(), r.cases().toString()); // open, shorted, 12 V both ways
@@ -167,8 +166,7 @@ class ReviewPolicyTest {
 		Path sub = Files.createDirectories(dir.resolve("designs"));
 		Files.writeString(dir.resolve("x.bulwark-policy"), "policy \"outside\"\n");
 		Path design = sub.resolve("d.bulwark");
-		Files.writeString(design, ACROSS.replace("design \"one resistor across\"",
-				"design \"one resistor across\"\npolicy \"../x.bulwark-policy\""));
+		Files.writeString(design, Fixtures.replaced(ACROSS, "design \"one resistor across\"", "design \"one resistor across\"\npolicy \"../x.bulwark-policy\""));
 		DesignResult r = Fixtures.defaultChecker().check(design);
 		assertEquals(Status.ERROR, r.status());
 		assertTrue(r.findings().get(0).message().contains("must be in the design's folder"), r.findings().toString());

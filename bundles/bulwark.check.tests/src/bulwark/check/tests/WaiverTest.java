@@ -31,7 +31,7 @@ class WaiverTest {
 
 	@Test
 	void staleAndUnknownWaiversAreReported() {
-		DesignResult r = Fixtures.check(OVER.replace("150 Ω", "1.5 kΩ")
+		DesignResult r = Fixtures.check(Fixtures.replaced(OVER, "150 Ω", "1.5 kΩ")
 				+ "waive \"resistor-power\" on R1 because \"x\" by \"y\" on \"2026-11-30\"\n"
 				+ "waive \"no-such-rule\" on R1 because \"x\" by \"y\" on \"2026-11-30\"\n");
 		assertTrue(r.findings().stream().anyMatch(f -> f.rule().equals("waiver") && f.message().contains("matches no finding")),

@@ -44,7 +44,7 @@ class LinearDcSolverTest {
 	@Test
 	void unbalancedWheatstoneBridge() {
 		// 10 V; arms 1 k/1 k and 1 k (top)/1.1 k (bottom): Vth = 5/21 V, Rth = 1023.8095 Ω,
-		// 100 Ω detector current 1/4720 A [closed form, sources.md]
+		// 100 Ω detector current 1/4720 A [closed form: Thevenin equivalent of the bridge]
 		Circuit.Builder b = Circuit.withReference("gnd");
 		int top = b.net("top"), left = b.net("left"), right = b.net("right");
 		b.add(VoltageSource.ideal("V1", top, 0, 10)).add(new Resistor("R1", top, left, 1e3))
@@ -56,8 +56,8 @@ class LinearDcSolverTest {
 		assertEquals(5.0 / 21.0, vth, rel(5.0 / 21.0) * 10);
 
 		DcSolution loaded = solve(bridge.plus(java.util.List.of(new Resistor("RD", right, left, 100))));
-		double expectedI = (5.0 / 21.0) / (1e3 * 1e3 / 2e3 + 1e3 * 1.1e3 / 2.1e3 + 100);
-		assertEquals(1.0 / 4720.0, expectedI, 1e-15); // the closed form recomputed agrees with sources.md
+		// (5/21 V) / (500 Ω + 1100/2.1 Ω + 100 Ω) = (5/21) / (23600/21) = 1/4720 A, worked by hand
+		double expectedI = 1.0 / 4720.0;
 		assertEquals(expectedI, loaded.device("RD").current(), rel(expectedI) * 10);
 	}
 
