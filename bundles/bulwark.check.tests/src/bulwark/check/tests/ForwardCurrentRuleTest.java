@@ -32,7 +32,7 @@ class ForwardCurrentRuleTest {
 		// one current through R1 and D1 [Kirchhoff's current law]: the LED's current is R1's voltage over 220 Ω
 		PartStress r1 = r.cases().get(0).parts().stream().filter(p -> p.part().equals("R1")).findFirst().orElseThrow();
 		assertEquals(r1.voltage() / 220, f.value(), 1e-12);
-		assertTrue(f.value() > 0.044 && f.value() < 0.048, "red LED forward voltage 1.63–2.03 V [sources.md]: " + f.value());
+		assertTrue(f.value() > 0.044 && f.value() < 0.048, "red LED forward voltage 1.63–2.03 V [docs/sources.md#leds]: " + f.value());
 		assertEquals(0.030, f.limit(), 0);
 	}
 

@@ -46,7 +46,7 @@ class FunctionFiguresTest {
 		// with the terminals shorted the cell also feeds the indicator: 30 mA + 3 µA
 		assertEquals(3 / (100 + 1e-3) + 3e-6, p.shortedBatteryAmps(), 1e-9);
 		// 3 V open: LEDs up to the yellow range's 2.18 V light (about (3 − 2.2)/100 Ω = 8 mA); green, blue,
-		// violet and white, up to 3.5–4 V [sources.md], do not [closed form, with each colour's highest voltage]
+		// violet and white, up to 3.5–4 V [docs/sources.md#leds], do not [closed form, with each colour's highest voltage]
 		assertEquals(java.util.List.of("red", "orange", "yellow"), p.lightsLeds());
 	}
 

@@ -18,7 +18,7 @@ class HysteresisRuleTest {
 	 * comparator's in_plus, R2 = 1 MΩ from its output back to in_plus, in_minus at 1.5 V from a divider.
 	 * When the output switches from 0 to 3 V, in_plus steps by VOH·R1'/(R1' + R2), R1' being R1 plus the
 	 * source resistance of the tip (the pull-up parallel to the resistance under test) [closed form, divider;
-	 * the non-inverting network of sources.md].
+	 * the non-inverting network of docs/sources.md#solver-oracles].
 	 */
 	static final String SCHMITT = """
 			design "continuity input"

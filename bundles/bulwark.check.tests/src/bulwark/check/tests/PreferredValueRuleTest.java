@@ -14,7 +14,7 @@ import bulwark.check.series.Iec60063;
 class PreferredValueRuleTest {
 	private static final String ID = PreferredValueRule.ID;
 
-	/** 333 kΩ ± 5 % is no E24 value; 330 kΩ is [IEC 60063 E24, sources.md]. */
+	/** 333 kΩ ± 5 % is no E24 value; 330 kΩ is [IEC 60063 E24, docs/sources.md#preferred-values]. */
 	private static final String COMPUTED = """
 			design "computed value"
 			reference net gnd

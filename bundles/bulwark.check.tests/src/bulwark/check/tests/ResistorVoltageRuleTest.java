@@ -14,8 +14,8 @@ class ResistorVoltageRuleTest {
 	private static final String ID = ResistorVoltageRule.ID;
 
 	/**
-	 * 357.8 V (253 V + 10 % peak, sources.md) straight across one 1 MΩ 0805 resistor: 357.8 V against the
-	 * 150 V limiting element voltage of 0805 [common practice, sources.md]; its power, 128 mW, is within its
+	 * 357.8 V (253 V + 10 % peak, docs/sources.md#mains-and-surges) straight across one 1 MΩ 0805 resistor: 357.8 V against the
+	 * 150 V limiting element voltage of 0805 [common practice, docs/sources.md#resistor-voltage]; its power, 128 mW, is within its
 	 * 250 mW, so only the voltage shows it.
 	 */
 	private static final String SINGLE = """

@@ -23,7 +23,7 @@ class ReversePathRuleTest {
 	/**
 	 * An LED behind 1 kΩ from the tip. With COM positive the LED's cathode is at +24 V and its anode reaches the
 	 * tip through R1, which blocks nothing: 24 V of reverse voltage against its rated 5 V derated to 70 %
-	 * (NASA EEE-INST-002, from memory) — 3.5 V.
+	 * (NASA EEE-INST-002 level, unconfirmed) — 3.5 V.
 	 */
 	private static final String EXPOSED = """
 			design "LED on the tip"

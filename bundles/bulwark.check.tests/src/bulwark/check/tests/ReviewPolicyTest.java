@@ -49,7 +49,7 @@ class ReviewPolicyTest {
 		ReviewPolicy p = Fixtures.policy(POLICY);
 		assertEquals("field instruments", p.title());
 		assertEquals(1, p.mains().size());
-		// IEC 60038: 230 V + 10 % = 253 V RMS, peak 253·√2 = 357.80 V [published + closed form, sources.md]
+		// IEC 60038: 230 V + 10 % = 253 V RMS, peak 253·√2 = 357.80 V [published + closed form, docs/sources.md#mains-and-surges]
 		assertEquals(357.80, p.mains().get(0).peakVolts(), 0.005);
 		assertEquals(List.of(48.0), p.levels());
 		assertEquals(0.5, p.derating(PartKind.RESISTOR, "power").factor(), 0);
@@ -63,7 +63,7 @@ class ReviewPolicyTest {
 
 	@Test
 	void builtInMainsAreTheIec60038PeaksWithTolerance() {
-		// 230 V and 120 V, +10 %: 357.8 V and 186.7 V peak [published + closed form, sources.md]
+		// 230 V and 120 V, +10 %: 357.8 V and 186.7 V peak [published + closed form, docs/sources.md#mains-and-surges]
 		assertEquals(253 * Math.sqrt(2), DefaultPolicy.MAINS.get(0).peakVolts(), 1e-9);
 		assertEquals(132 * Math.sqrt(2), DefaultPolicy.MAINS.get(1).peakVolts(), 1e-9);
 		assertEquals(186.68, DefaultPolicy.MAINS.get(1).peakVolts(), 0.005);

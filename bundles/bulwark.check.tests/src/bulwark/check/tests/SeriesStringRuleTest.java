@@ -14,9 +14,9 @@ class SeriesStringRuleTest {
 	private static final String ID = SeriesStringRule.ID;
 
 	/**
-	 * 357.8 V (253 V + 10 % peak, sources.md) across a string of 1 MΩ, 1.2 MΩ and 100 kΩ 0805 resistors: one
+	 * 357.8 V (253 V + 10 % peak, docs/sources.md#mains-and-surges) across a string of 1 MΩ, 1.2 MΩ and 100 kΩ 0805 resistors: one
 	 * current, so the shares follow the values [closed form, voltage divider]: R2 takes 357.8·1.2/2.3 = 186.7 V
-	 * and R1 155.6 V, both over the 150 V limiting element voltage of 0805 [common practice, sources.md];
+	 * and R1 155.6 V, both over the 150 V limiting element voltage of 0805 [common practice, docs/sources.md#resistor-voltage];
 	 * the finding is on R2, the worst, and says the sharing is unequal.
 	 */
 	private static final String STRING = """

@@ -25,7 +25,7 @@ public final class CaseRunner {
 	/** An open fuse: a gap that still lets the solver see both of its nets [closed form: 1 nA at 1 V]. */
 	static final double OPEN_FUSE_OHMS = 1e9;
 	/**
-	 * A tripped resettable fuse, as a resistance [memory: a tripped polymer fuse holds itself hot at about a
+	 * A tripped resettable fuse, as a resistance [unconfirmed: a tripped polymer fuse holds itself hot at about a
 	 * watt, which at a mains peak is of the order of 100 kΩ].
 	 */
 	static final double TRIPPED_RESETTABLE_OHMS = 1e5;

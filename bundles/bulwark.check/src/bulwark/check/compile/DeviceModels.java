@@ -13,13 +13,13 @@ import bulwark.lang.design.PartKind;
 
 /** The engine's device models for a part, from its parameters and the defaults the language documents. */
 final class DeviceModels {
-	/** Cold resistance of a fuse when the design gives none [memory: typical of small glass fuses]. */
+	/** Cold resistance of a fuse when the design gives none [unconfirmed: typical of small glass fuses]. */
 	static final double FUSE_COLD_OHMS = 0.1;
 	/** Activation current of an indicator when the design gives none [common practice: a visible LED]. */
 	static final double INDICATOR_ACTIVATION = 1e-3;
-	/** Trip delay of a protector when the design gives none [memory: typical of electronic current limiters]. */
+	/** Trip delay of a protector when the design gives none [unconfirmed: typical of electronic current limiters]. */
 	static final double PROTECTOR_DELAY = 1e-6;
-	/** Emission coefficient of an LED when the design gives none [memory: typical of visible LEDs]. */
+	/** Emission coefficient of an LED when the design gives none [unconfirmed: typical of visible LEDs]. */
 	static final double LED_EMISSION = 2;
 	/** Current at a zener's stated voltage when the design gives none [common practice: 5 mA test current]. */
 	static final double ZENER_KNEE = 5e-3;

@@ -37,9 +37,9 @@ public final class FunctionAnalysis {
 	static final double RELATIVE = 1e-3;
 	/** An LED under test is seen lit from this current [common practice: about 1 mA for an indicator LED]. */
 	public static final double LED_LIT = 1e-3;
-	/** Emission coefficient of an LED under test [memory: typical of visible LEDs, as DeviceModels]. */
+	/** Emission coefficient of an LED under test [unconfirmed: typical of visible LEDs, as DeviceModels]. */
 	static final double LED_EMISSION = 2;
-	/** Hours in a year of 365.25 days [sources.md]. */
+	/** Hours in a year of 365.25 days [docs/sources.md#batteries]. */
 	public static final double HOURS_PER_YEAR = 8766;
 
 	private FunctionAnalysis() {

@@ -9,7 +9,7 @@ import bulwark.lang.design.PartKind;
 /**
  * A bipolar transistor's base–emitter junction is reverse-biased beyond its rating. Small-signal parts
  * break down at about 5–6 V, and even brief breakdown degrades their current gain [common practice,
- * sources.md]; when the design gives no 'rated emitter_base', 5 V is assumed and the message says so.
+ * docs/sources.md#semiconductor-inputs]; when the design gives no 'rated emitter_base', 5 V is assumed and the message says so.
  */
 public final class BaseEmitterRule extends PartLimitRule {
 	public static final String ID = "base-emitter-reverse";

@@ -9,7 +9,7 @@ import bulwark.lang.design.PartKind;
 /**
  * A fault drives current into a battery's positive pin, charging it. Primary cells must not be charged
  * (they can vent or burst); when the design gives no 'rated charge', a primary cell is assumed to tolerate
- * 10 µA [memory, see Limits], and a battery marked 'type rechargeable' is checked only against a written
+ * 10 µA [unconfirmed, see Limits], and a battery marked 'type rechargeable' is checked only against a written
  * rating.
  */
 public final class BatteryChargeRule extends PartLimitRule {

@@ -9,7 +9,7 @@ import bulwark.lang.design.PartKind;
 /**
  * The current through a comparator input's clamp junctions exceeds what they are rated for. An input
  * driven past its rails must have its clamp current limited, 10 mA being the usual ceiling [common
- * practice, sources.md]; that is assumed when the design gives no 'rated clamp'.
+ * practice, docs/sources.md#semiconductor-inputs]; that is assumed when the design gives no 'rated clamp'.
  */
 public final class ClampCurrentRule extends PartLimitRule {
 	public static final String ID = "clamp-current";

@@ -8,7 +8,7 @@ import bulwark.lang.design.PartKind;
 
 /**
  * A comparator input goes beyond its supply rails by more than its absolute-maximum margin. CMOS inputs
- * allow about 0.3 V beyond either rail [common practice, sources.md]; that is assumed when the design
+ * allow about 0.3 V beyond either rail [common practice, docs/sources.md#semiconductor-inputs]; that is assumed when the design
  * gives no 'rated input_margin'.
  */
 public final class ComparatorInputRule extends PartLimitRule {

@@ -29,11 +29,11 @@ import bulwark.lang.units.Unit;
  * function figure it names (FunctionAnalysis), an error when missed. A battery-powered tester that states
  * none of threshold, test current and battery life is held to the trade's rules of thumb instead — a
  * threshold below about 5 Ω, at most about 20 mA into a short, a year on its battery [common practice,
- * sources.md] — as warnings. A figure that cannot be computed is said so, never passed silently.
+ * docs/sources.md#tester-inputs] — as warnings. A figure that cannot be computed is said so, never passed silently.
  */
 public final class RequirementRule implements Rule {
 	public static final String ID = "requirement";
-	/** Common-practice defaults for battery-powered testers [common practice, sources.md]. */
+	/** Common-practice defaults for battery-powered testers [common practice, docs/sources.md#tester-inputs]. */
 	static final double DEFAULT_THRESHOLD_OHMS = 5, DEFAULT_TEST_AMPS = 20e-3,
 			DEFAULT_LIFE_SECONDS = FunctionAnalysis.HOURS_PER_YEAR * 3600;
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.REQUIREMENT, Severity.ERROR,

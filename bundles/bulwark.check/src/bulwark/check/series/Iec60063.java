@@ -2,8 +2,8 @@ package bulwark.check.series;
 
 /**
  * IEC 60063 preferred numbers. E6, E12 and E24 are tables (they do not follow the rounding formula, which
- * gives 2.6, 3.2, 4.6, 8.3 …; sources.md [published]); E48, E96 and E192 are round(10^(i/n)) to three
- * figures [published], with E192's one published exception, 9.20 where the formula gives 9.19 [memory].
+ * gives 2.6, 3.2, 4.6, 8.3 …; docs/sources.md#preferred-values [published]); E48, E96 and E192 are round(10^(i/n)) to three
+ * figures [published], with E192's one published exception, 9.20 where the formula gives 9.19 [unconfirmed].
  * Each series belongs with a tolerance: E6 ±20 %, E12 ±10 %, E24 ±5 %, E48 ±2 %, E96 ±1 %, E192 ±0.5 % or
  * tighter [published, IEC 60063].
  */

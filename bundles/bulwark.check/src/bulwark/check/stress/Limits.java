@@ -14,14 +14,14 @@ import bulwark.lang.design.PartKind;
  * rating-missing reports the ratings a rule needs.
  */
 public final class Limits {
-	/** Assumed reverse base–emitter rating [common practice, sources.md: VEBO ≈ 5–6 V]. */
+	/** Assumed reverse base–emitter rating [common practice, docs/sources.md#semiconductor-inputs: VEBO ≈ 5–6 V]. */
 	public static final double ASSUMED_EMITTER_BASE = 5;
-	/** Assumed margin of a comparator input beyond its rails [common practice, sources.md: 0.3 V]. */
+	/** Assumed margin of a comparator input beyond its rails [common practice, docs/sources.md#semiconductor-inputs: 0.3 V]. */
 	public static final double ASSUMED_INPUT_MARGIN = 0.3;
-	/** Assumed input clamp current rating [common practice, sources.md: 10 mA]. */
+	/** Assumed input clamp current rating [common practice, docs/sources.md#semiconductor-inputs: 10 mA]. */
 	public static final double ASSUMED_CLAMP = 10e-3;
 	/**
-	 * Assumed charging current a primary cell tolerates [memory: primary-cell safety guidance asks for charging
+	 * Assumed charging current a primary cell tolerates [unconfirmed: primary-cell safety guidance asks for charging
 	 * to be prevented; a blocking diode's leakage, microamperes, is what designs then let through].
 	 */
 	public static final double ASSUMED_PRIMARY_CHARGE = 10e-6;

@@ -156,7 +156,7 @@ class QuickFixesTest {
 		Files.writeString(dir.resolve("p.bulwark-policy"), "policy \"p\"\n  mains none\n");
 		Fix fix = only(fixes(design), "hysteresis");
 		// step = VOH·R1/(R1 + R2) ≥ 2 × 10 mV with VOH = 3 V, R1 = 100 kΩ: R2 ≤ 14.9 MΩ, on E24 13 MΩ, which
-		// gives 3·100 k/13.1 M = 22.9 mV [closed form, sources.md's non-inverting network]
+		// gives 3·100 k/13.1 M = 22.9 mV [closed form, the non-inverting network of docs/sources.md#solver-oracles]
 		assertTrue(fix.label().startsWith("add R_HYST_U1 = 13 MΩ from U1's output to in_plus: about 22.9 mV"), fix.label());
 		DesignResult after = CHECKER.check(fix.applyTo(Files.readString(design)), design.toString(), CancelIndicator.NullImpl);
 		assertTrue(after.findings().stream().noneMatch(f -> f.rule().equals("hysteresis")), after.findings().toString());
@@ -244,7 +244,7 @@ class QuickFixesTest {
 	void preferredValuesOfIec60063() {
 		assertEquals(96, PreferredValues.series(96).length);
 		assertArrayEquals(new double[] { 1.0, 1.5, 2.2, 3.3, 4.7, 6.8 }, PreferredValues.series(6), 0);
-		// E24 is a table: 2.7, 3.0, 3.3 … 8.2, 9.1 where the formula would give 2.6, 3.2 … 8.3 [sources.md]
+		// E24 is a table: 2.7, 3.0, 3.3 … 8.2, 9.1 where the formula would give 2.6, 3.2 … 8.3 [docs/sources.md#preferred-values]
 		assertEquals(2.7, PreferredValues.series(24)[10], 0);
 		assertTrue(java.util.Arrays.stream(PreferredValues.series(192)).anyMatch(v -> v == 9.20));
 		assertEquals(1.02, PreferredValues.series(96)[1], 0); // round(100·10^(1/96)) / 100 [closed form]

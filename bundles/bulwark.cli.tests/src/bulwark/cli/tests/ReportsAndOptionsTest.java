@@ -43,16 +43,30 @@ class ReportsAndOptionsTest {
 	@Test
 	void shardsSplitTheDesignsOnce() {
 		String folder = CliRun.root().resolve("examples").toString();
-		String all = CliRun.of("check", "--fail-on", "never", folder).err();
-		assertTrue(all.contains("5 design(s) checked"), all);
-		int total = 0;
+		java.util.List<String> all = checkedFiles("check", "--fail-on", "never", "--format", "json", folder);
+		assertEquals(5, all.size(), all::toString);
+		java.util.List<String> fromShards = new java.util.ArrayList<>();
 		for (int k = 1; k <= 3; k++) {
-			String err = CliRun.of("check", "--fail-on", "never", "--shard", k + "/3", folder).err();
-			java.util.regex.Matcher m = java.util.regex.Pattern.compile("(\\d+) design\\(s\\) checked").matcher(err);
-			total += m.find() ? Integer.parseInt(m.group(1)) : 0;
+			java.util.List<String> share = checkedFiles("check", "--fail-on", "never", "--format", "json", "--shard",
+					k + "/3", folder);
+			assertTrue(share.size() == 1 || share.size() == 2, "shard " + k + "/3 of 5 holds 1 or 2: " + share);
+			fromShards.addAll(share);
 		}
-		assertEquals(5, total);
+		// every design in exactly one shard, none twice, none lost
+		assertEquals(new java.util.TreeSet<>(all), new java.util.TreeSet<>(fromShards));
+		assertEquals(all.size(), fromShards.size(), fromShards::toString);
 		assertEquals(3, CliRun.of("check", "--shard", "4/3", folder).exitCode());
+	}
+
+	/** The design files a JSON report lists, in report order. */
+	private static java.util.List<String> checkedFiles(String... args) {
+		CliRun run = CliRun.of(args);
+		java.util.List<String> files = new java.util.ArrayList<>();
+		java.util.regex.Matcher m = java.util.regex.Pattern.compile("\"file\": \"([^\"]+)\"").matcher(run.out());
+		while (m.find()) {
+			files.add(m.group(1));
+		}
+		return files;
 	}
 
 	@Test

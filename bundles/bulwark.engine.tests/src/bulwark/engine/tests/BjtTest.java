@@ -18,7 +18,7 @@ import bulwark.engine.dc.OperatingPoint;
 import bulwark.engine.device.BjtModel;
 import bulwark.engine.device.Physics;
 
-/** Transistor circuits against closed forms (shared/docs/sources.md, "Four-resistor BJT bias"). */
+/** Transistor circuits against closed forms (docs/sources.md#solver-oracles, "Four-resistor BJT bias"). */
 class BjtTest {
 	/**
 	 * The model keeps GMIN = 1 pS across each junction (common practice in circuit solvers); across the reverse-biased
@@ -66,7 +66,7 @@ class BjtTest {
 	@Test
 	void fourResistorBiasPoint() {
 		// IC = 1.289978207 mA, VBE = 0.6613732965 V with Is = 1e-14 A, VT(300 K), αF = 100/101, no Early
-		// effect [closed form, sources.md]; VC = 15 − IC·RC
+		// effect [closed form, docs/sources.md#solver-oracles]; VC = 15 − IC·RC
 		double ic = collectorCurrent(100);
 		assertEquals(1.289978207e-3, ic, 1e-12);
 		DcSolution s = biasCircuit(Polarity.NPN, BjtModel.SMALL_SIGNAL);

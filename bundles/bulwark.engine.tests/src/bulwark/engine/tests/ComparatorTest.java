@@ -20,7 +20,7 @@ import bulwark.engine.dc.DcSweep.Threshold;
 import bulwark.engine.dc.PreparedCircuit;
 import bulwark.engine.device.ComparatorModel;
 
-/** The behavioural comparator and the engine's up/down threshold sweeps (sources.md, "Comparator hysteresis"). */
+/** The behavioural comparator and the engine's up/down threshold sweeps (docs/sources.md#solver-oracles, "Comparator hysteresis"). */
 class ComparatorTest {
 	/** Thresholds come from a bisection to 1e-7 relative; the model's output resistance and finite gain
 	 *  move them by well under a millivolt. */
@@ -42,7 +42,7 @@ class ComparatorTest {
 	@Test
 	void risingAndFallingThresholdsOfTheHysteresisLoop() {
 		// rising Vref·(1 + R1/R2) = 2.75 V; falling (Vref·(R1 + R2) − VOH·R1)/R2 = 2.25 V; width VOH·R1/R2 = 0.5 V
-		// [closed form; standard Schmitt-trigger analysis, sources.md]
+		// [closed form; standard Schmitt-trigger analysis, docs/sources.md#solver-oracles]
 		double rising = VREF * (1 + R1 / R2);
 		double falling = (VREF * (R1 + R2) - VCC * R1) / R2;
 		Circuit c = schmitt(1);

@@ -15,7 +15,7 @@ import bulwark.engine.dc.DcSolver;
 import bulwark.engine.device.DiodeModel;
 import bulwark.engine.device.Physics;
 
-/** Diode circuits against closed forms (shared/docs/sources.md, "Solver oracles"). */
+/** Diode circuits against closed forms (docs/sources.md#solver-oracles). */
 class DiodeTest {
 	/** Newton stops within 1e-9 relative; the comparison allows a little more. */
 	private static final double RELATIVE = 1e-8;
@@ -36,13 +36,13 @@ class DiodeTest {
 
 	@Test
 	void thermalVoltageAt300K() {
-		// VT = kT/q with the SI 2019 exact constants: 25.851999786 mV at 300 K [published, sources.md]
+		// VT = kT/q with the SI 2019 exact constants: 25.851999786 mV at 300 K [published, docs/sources.md#solver-oracles]
 		assertEquals(25.851999786e-3, Physics.thermalVoltage(300), 1e-12);
 	}
 
 	@Test
 	void fiveVoltsThroughOneKilohm() {
-		// 5 V, 1 kΩ, Is = 1e-14 A, n = 1, 300 K → I = 4.30745637 mA, Vd = 0.69254363 V [closed form, sources.md]
+		// 5 V, 1 kΩ, Is = 1e-14 A, n = 1, 300 K → I = 4.30745637 mA, Vd = 0.69254363 V [closed form, docs/sources.md#solver-oracles]
 		double nvt = Physics.thermalVoltage(300);
 		double exact = LambertW.diodeCurrent(5, 1e3, 1e-14, nvt);
 		assertEquals(4.30745637e-3, exact, 1e-11); // our Lambert-W agrees with the published digits
@@ -67,7 +67,7 @@ class DiodeTest {
 	@Test
 	void sedraSmithIterativeProblem() {
 		// 1 V, 1 kΩ, Is = 1e-15 A, VT = 25 mV → I = 0.336456623 mA, Vd = 0.663543377 V
-		// [closed form; Sedra & Smith, Microelectronic Circuits, diode chapter problems, per sources.md]
+		// [closed form; Sedra & Smith, Microelectronic Circuits, diode chapter problems, per docs/sources.md#solver-oracles]
 		double kelvin = 0.025 * Physics.ELEMENTARY_CHARGE / Physics.BOLTZMANN; // the temperature where VT = 25 mV
 		DiodeModel model = new DiodeModel(1e-15, 1, 0, Double.POSITIVE_INFINITY, 1e-3, 1, kelvin);
 		double exact = LambertW.diodeCurrent(1, 1e3, 1e-15, 0.025);
@@ -80,7 +80,7 @@ class DiodeTest {
 	@Test
 	void sedraSmithWorkedExample() {
 		// 5 V, 1 kΩ, a diode of 1 mA at 0.7 V with 0.1 V per decade: Is = 1e-10 A, n·VT = 0.1/ln 10
-		// → I = 4.2373 mA, Vd = 0.76271 V [closed form; example number from memory, sources.md]
+		// → I = 4.2373 mA, Vd = 0.76271 V [closed form; example attribution unconfirmed, docs/sources.md#solver-oracles]
 		double nvt = 0.1 / Math.log(10);
 		double n = nvt / Physics.thermalVoltage(300);
 		DiodeModel model = DiodeModel.SILICON.withSaturation(1e-10, n);
@@ -120,7 +120,7 @@ class DiodeTest {
 
 	@Test
 	void mainsPeakInBothPolarities() {
-		// 253 V + 10 % … the IEC 60038 upper supply, 357.8 V peak [published + closed form, sources.md],
+		// 253 V + 10 % … the IEC 60038 upper supply, 357.8 V peak [published + closed form, docs/sources.md#mains-and-surges],
 		// across 100 kΩ and a silicon diode, both ways; then into a 100 V breakdown diode.
 		double peak = 253 * Math.sqrt(2);
 		assertEquals(357.80, peak, 0.01);

@@ -31,7 +31,7 @@ class FloatingIslandTest {
 		DcResult r = new DcSolver().solve(b.build());
 		DcSolution s = assertInstanceOf(DcSolution.class, r, () -> "expected a solution, got " + r);
 		// no path leaves the island, so no current flows and every net of it sits at the cell's 3 V
-		// [closed form: KCL on the island; SPICE2's VNTOL of 1 µV bounds the answer, Nagel, ERL M520]
+		// [closed form: KCL on the island; the 1 µV voltage tolerance of Nagel, ERL memo M520, bounds the answer]
 		assertEquals(3, s.voltage("anode"), 1e-6);
 		assertEquals(3, s.voltage("probe"), 1e-5);
 		assertEquals(3, s.voltage("tip"), 1e-5);

@@ -14,7 +14,7 @@ import bulwark.engine.dc.DcResult;
 import bulwark.engine.dc.DcSolution;
 import bulwark.engine.dc.DcSolver;
 
-/** Linear networks against closed-form values (shared/docs/sources.md, "Solver oracles"). */
+/** Linear networks against closed-form values (docs/sources.md#solver-oracles). */
 class LinearDcSolverTest {
 
 	private static DcSolution solve(Circuit c) {
@@ -29,7 +29,7 @@ class LinearDcSolverTest {
 		b.add(VoltageSource.ideal("V1", in, 0, 12)).add(new Resistor("R1", in, out, 10e3))
 				.add(new Resistor("R2", out, 0, 20e3));
 		DcSolution open = solve(b.build());
-		// Divider 12 V, 10 k over 20 k: 12·20/30 = 8 V [closed form, sources.md]
+		// Divider 12 V, 10 k over 20 k: 12·20/30 = 8 V [closed form, docs/sources.md#solver-oracles]
 		double expectedV = 12.0 * 20e3 / (10e3 + 20e3);
 		assertEquals(expectedV, open.voltage("out"), rel(expectedV));
 

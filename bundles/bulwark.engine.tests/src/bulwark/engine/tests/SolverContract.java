@@ -76,6 +76,28 @@ abstract class SolverContract {
 	}
 
 	@Test
+	void equationsWithoutASolutionAreNoConvergence() {
+		Circuit.Builder b = Circuit.withReference("gnd");
+		int in = b.net("in"), n = b.net("n");
+		b.add(VoltageSource.ideal("V1", in, 0, 5)).add(new Resistor("R1", in, 0, 1e3));
+		b.add(UnsolvableDevices.noSolution("X1", n, 0));
+		SolveFailure f = assertInstanceOf(SolveFailure.class, solve(b.build()));
+		assertEquals(Reason.NO_CONVERGENCE, f.reason(), f::message);
+		assertEquals("n", f.place(), f::message);
+	}
+
+	@Test
+	void emptyEquationIsASingularMatrixAtItsNet() {
+		Circuit.Builder b = Circuit.withReference("gnd");
+		int in = b.net("in"), n = b.net("n");
+		b.add(VoltageSource.ideal("V1", in, 0, 5)).add(new Resistor("R1", in, 0, 1e3));
+		b.add(UnsolvableDevices.claimsAPathButStampsNothing("X1", n, 0));
+		SolveFailure f = assertInstanceOf(SolveFailure.class, solve(b.build()));
+		assertEquals(Reason.SINGULAR_MATRIX, f.reason(), f::message);
+		assertEquals("n", f.place(), f::message);
+	}
+
+	@Test
 	void emptyCircuitIsAFailure() {
 		assertEquals(Reason.EMPTY_CIRCUIT,
 				assertInstanceOf(SolveFailure.class, solve(Circuit.withReference("gnd").build())).reason());

@@ -63,7 +63,7 @@ class TransientTest {
 	@Test
 	void combinationWaveHasTheStandardShape() {
 		// IEC 61000-4-5 1.2/50 µs open-circuit voltage into 1 MΩ: front time T1 = 1.67·(t90 − t30) = 1.2 µs ± 30 %,
-		// time to half value from the virtual origin 50 µs ± 20 % (IEC 60060-1 definitions) [published, sources.md]
+		// time to half value from the virtual origin 50 µs ± 20 % (IEC 60060-1 definitions) [published, docs/sources.md#mains-and-surges]
 		Circuit.Builder b = Circuit.withReference("gnd");
 		int g = b.net("gen"), out = b.net("out");
 		b.add(new VoltageSource("SURGE", g, 0, new CombinationWave(1000, 1e-6), 0)).add(new Resistor("RS", g, out, 2))

@@ -19,8 +19,8 @@ public final class DcSolver {
 	/** Iterations after which each Newton step is halved, to break out of oscillation. */
 	static final int DAMPING_AFTER = 60;
 	/**
-	 * Iterations after which the update may settle within SPICE2's own tolerances (VNTOL 1 µV, ABSTOL 1 pA;
-	 * Nagel, ERL memo M520, 1975) instead of ours, the residual still having to be small. A net joined to the
+	 * Iterations after which the update may settle within the looser tolerances of Nagel's program (1 µV, 1 pA;
+	 * ERL memo M520, 1975) instead of ours, the residual still having to be small. A net joined to the
 	 * rest only through junctions at zero bias (a pair of antiparallel diodes with a floating probe behind
 	 * them) is fixed by conductances of 1e-12 S against 0.1 S within its island: rounding moves it by tens of
 	 * microvolts each step, so our nanovolt update test can never settle although KCL holds.

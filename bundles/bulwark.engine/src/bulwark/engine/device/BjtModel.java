@@ -25,7 +25,7 @@ public record BjtModel(double saturationCurrent, double forwardBeta, double reve
 
 	/**
 	 * A generic small-signal silicon transistor: Is = 10 fA, βF = 100, βR = 1, BVebo = 6 V (reverse
-	 * base–emitter breakdown of small-signal parts is about 5–6 V [common practice, sources.md]).
+	 * base–emitter breakdown of small-signal parts is about 5–6 V [common practice, docs/sources.md#semiconductor-inputs]).
 	 */
 	public static final BjtModel SMALL_SIGNAL = new BjtModel(1e-14, 100, 1, 1, 1, 6, 1e-3, Physics.DEFAULT_TEMPERATURE);
 

@@ -10,7 +10,7 @@ package bulwark.engine.device;
  * behind an output resistance, a quiescent supply current, and the output current drawn from the upper
  * rail when sourcing and returned to the lower rail when sinking. An open-drain output only sinks, through
  * its on-resistance, when vin+ < vin−. [Behavioural form of our own; the clamp-to-rail input structure
- * and its absolute-maximum margin are common practice for CMOS inputs, sources.md.]
+ * and its absolute-maximum margin are common practice for CMOS inputs, docs/sources.md#semiconductor-inputs.]
  *
  * @param gain A, V/V
  * @param outputOhms output resistance (push-pull) or on-resistance (open drain), Ω
@@ -21,7 +21,7 @@ package bulwark.engine.device;
 public record ComparatorModel(double gain, double outputOhms, double quiescentAmps, boolean openDrain,
 		DiodeModel clamp) {
 
-	/** A generic CMOS comparator: A = 1e5, 50 Ω push-pull output, 10 µA quiescent. [memory: typical values] */
+	/** A generic CMOS comparator: A = 1e5, 50 Ω push-pull output, 10 µA quiescent. [unconfirmed: typical values] */
 	public static final ComparatorModel GENERIC = new ComparatorModel(1e5, 50, 10e-6, false, DiodeModel.SILICON);
 
 	public ComparatorModel {

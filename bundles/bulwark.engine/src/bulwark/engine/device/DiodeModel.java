@@ -23,7 +23,7 @@ public record DiodeModel(double saturationCurrent, double emission, double serie
 
 	/**
 	 * A generic small-signal silicon junction: Is = 10 fA, n = 1, no series resistance, no breakdown,
-	 * 300 K. [memory: textbook-typical values, not a particular part]
+	 * 300 K. [unconfirmed: textbook-typical values, not a particular part]
 	 */
 	public static final DiodeModel SILICON = new DiodeModel(1e-14, 1, 0, Double.POSITIVE_INFINITY, 1e-3, 1,
 			Physics.DEFAULT_TEMPERATURE);

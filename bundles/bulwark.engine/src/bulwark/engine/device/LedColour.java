@@ -2,7 +2,7 @@ package bulwark.engine.device;
 
 /**
  * Default forward voltages of indicator LEDs by colour at 20 mA, the middle of each published range
- * (sources.md, "LED forward voltage ranges by colour" [published, encyclopaedic]): red 1.63–2.03 V, orange
+ * (docs/sources.md#leds, "LED forward voltage ranges by colour" [published, encyclopaedic]): red 1.63–2.03 V, orange
  * 2.03–2.10, yellow 2.10–2.18, green 1.9–4.0, blue 2.48–3.7, violet 2.76–4.0, white about 3.5.
  */
 public enum LedColour {

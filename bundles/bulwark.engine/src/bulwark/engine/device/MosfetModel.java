@@ -17,7 +17,7 @@ package bulwark.engine.device;
  * @param bodyDiode the source–drain body diode
  */
 public record MosfetModel(double threshold, double beta, double lambda, DiodeModel bodyDiode) {
-	/** A generic small-signal enhancement part: Vth 2 V, β 50 mA/V², λ 0.01/V. [memory: typical values] */
+	/** A generic small-signal enhancement part: Vth 2 V, β 50 mA/V², λ 0.01/V. [unconfirmed: typical values] */
 	public static final MosfetModel SMALL_SIGNAL = new MosfetModel(2, 50e-3, 0.01, DiodeModel.SILICON);
 
 	public MosfetModel {

@@ -42,7 +42,7 @@ class UnitParserTest {
 	@Test
 	void valuesToSiThroughTheUnitsLibrary() {
 		assertEquals(4700, Quantities.toSi(4.7, UnitParser.parse("kΩ").orElseThrow()), 1e-9);
-		// a CR2032's 225 mAh [sources.md] is 810 C; a year of 8766 h is 31 557 600 s [closed form]
+		// a CR2032's 225 mAh [docs/sources.md#batteries] is 810 C; a year of 8766 h is 31 557 600 s [closed form]
 		assertEquals(810, Quantities.toSi(225, UnitParser.parse("mAh").orElseThrow()), 1e-9);
 		assertEquals(31_557_600, Quantities.toSi(8766, UnitParser.parse("h").orElseThrow()), 1e-6);
 		assertEquals(2.2e-11, Quantities.toSi(22, UnitParser.parse("pF").orElseThrow()), 1e-24);

@@ -11,7 +11,7 @@ import bulwark.lang.units.Unit;
  * a source's and a battery's plus and minus.
  */
 public final class KindCatalog {
-	/** Resistor packages whose limiting element voltage Bulwark knows (sources.md, common practice). */
+	/** Resistor packages whose limiting element voltage Bulwark knows (docs/sources.md#resistor-voltage, common practice). */
 	public static final List<String> RESISTOR_PACKAGES = List.of("0402", "0603", "0805", "1206", "2512",
 			"axial_quarter", "axial_half");
 	private static final KindSpec RESISTOR = new KindSpec("resistor", List.of("a", "b"),

@@ -22,7 +22,7 @@ import bulwark.lang.design.PartKind;
 /**
  * Gives a comparator hysteresis: a feedback resistor R2 from its output to its non-inverting input, which
  * already has an input resistor R1 from the signal. When the output swings by VOH, the input steps by
- * VOH·R1/(R1 + R2) (the non-inverting network, sources.md [closed form]); for a step of at least twice the
+ * VOH·R1/(R1 + R2) (the non-inverting network, docs/sources.md#solver-oracles [closed form]); for a step of at least twice the
  * policy's minimum [common practice: a margin for tolerances], R2 ≤ R1·(VOH/step − 1), taken at or below
  * that on E24. With a feedback resistor already there, its value is lowered instead.
  */

@@ -19,7 +19,7 @@ import bulwark.lang.kinds.KindCatalog;
 /**
  * A resistor over its package's limiting element voltage moves to the smallest package, in the order of
  * the language's package list, whose limiting element voltage holds the worst voltage with the policy's
- * derating (typical values, sources.md [common practice]). Not offered when the design writes a rated
+ * derating (typical values, docs/sources.md#resistor-voltage [common practice]). Not offered when the design writes a rated
  * voltage: that is the part's own, for RaiseRating.
  */
 final class RaisePackage implements FixProvider {
