@@ -34,6 +34,7 @@ import bulwark.engine.dc.SolveFailure;
 import bulwark.lang.design.Design;
 import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Member;
+import bulwark.lang.library.Confinement;
 
 /**
  * The whole check of one design: language issues first; if the text is sound, every case is solved and
@@ -90,18 +91,8 @@ public final class DesignChecker {
 	}
 
 	public DesignResult check(Path file) {
-		String text;
-		try {
-			if (Files.size(file) > 4L * InputLimits.MAX_CHARACTERS) { // refuse before reading it into memory
-				return notChecked(file.toString(), "the file has " + Files.size(file) + " bytes; designs are limited to "
-						+ InputLimits.MAX_CHARACTERS + " characters", SourceLocation.NONE);
-			}
-			text = Files.readString(file, StandardCharsets.UTF_8);
-		} catch (Exception e) {
-			return notChecked(file.toString(),
-					"cannot read the file: " + e.getClass().getSimpleName() + ": " + e.getMessage(), SourceLocation.NONE);
-		}
-		return check(text, file.toString(), CancelIndicator.NullImpl);
+		Object read = read(file);
+		return read instanceof DesignResult refused ? refused : check((String) read, file.toString(), CancelIndicator.NullImpl);
 	}
 
 	public DesignResult check(String text, String file, CancelIndicator cancel) {
@@ -110,6 +101,61 @@ public final class DesignChecker {
 			return notChecked(file, refused.get().message(), refused.get().location());
 		}
 		return check(loader.load(text, file, cancel));
+	}
+
+	/**
+	 * The stages every use of a design shares, up to a compiled design under its policy: what solving one case,
+	 * a tolerance run and the check itself start from.
+	 */
+	public Preparation prepare(Path file) {
+		Object read = read(file);
+		return read instanceof DesignResult refused ? new Preparation.Stopped(refused)
+				: prepare((String) read, file.toString(), CancelIndicator.NullImpl);
+	}
+
+	/** As {@link #prepare(Path)}, for a design's text as an editor holds it. */
+	public Preparation prepare(String text, String file, CancelIndicator cancel) {
+		Optional<Finding> refused = InputLimits.check(text);
+		if (refused.isPresent()) {
+			return new Preparation.Stopped(notChecked(file, refused.get().message(), refused.get().location()));
+		}
+		return prepare(loader.load(text, file, cancel));
+	}
+
+	/** The language's findings, then the policy, then the compiled design; stopped at the first that fails. */
+	public Preparation prepare(LoadedDesign loaded) {
+		List<Finding> findings = new ArrayList<>();
+		boolean languageErrors = false;
+		for (Issue issue : loaded.issues()) {
+			Finding f = LanguageFindings.of(issue);
+			languageErrors |= f.severity() == Severity.ERROR;
+			findings.add(f);
+		}
+		Design design = loaded.design();
+		String title = design == null ? null : design.getTitle();
+		if (languageErrors || design == null) {
+			return new Preparation.Stopped(new DesignResult(loaded.file(), title, Status.ERROR, findings, List.of()));
+		}
+		PolicyChoice choice = policyFor(design, loaded.file());
+		if (choice.policy() == null) {
+			findings.addAll(choice.problems());
+			return new Preparation.Stopped(new DesignResult(loaded.file(), title, Status.ERROR, findings, List.of()));
+		}
+		return new Preparation.Ready(new PreparedDesign(loaded, choice.policy(), DesignCompiler.compile(design), findings));
+	}
+
+	/** A design file's text, or (a result of status error) why it is not read. */
+	private static Object read(Path file) {
+		try {
+			if (Files.size(file) > 4L * InputLimits.MAX_CHARACTERS) { // refuse before reading it into memory
+				return notChecked(file.toString(), "the file has " + Files.size(file) + " bytes; designs are limited to "
+						+ InputLimits.MAX_CHARACTERS + " characters", SourceLocation.NONE);
+			}
+			return Files.readString(file, StandardCharsets.UTF_8);
+		} catch (Exception e) {
+			return notChecked(file.toString(),
+					"cannot read the file: " + e.getClass().getSimpleName() + ": " + e.getMessage(), SourceLocation.NONE);
+		}
 	}
 
 	/**
@@ -131,25 +177,16 @@ public final class DesignChecker {
 	}
 
 	private DesignResult checkWithinBudget(LoadedDesign loaded) {
-		List<Finding> findings = new ArrayList<>();
-		boolean languageErrors = false;
-		for (Issue issue : loaded.issues()) {
-			Finding f = LanguageFindings.of(issue);
-			languageErrors |= f.severity() == Severity.ERROR;
-			findings.add(f);
+		Preparation prepared = prepare(loaded);
+		if (prepared instanceof Preparation.Stopped stopped) {
+			return stopped.result();
 		}
+		PreparedDesign ready = ((Preparation.Ready) prepared).design();
+		List<Finding> findings = new ArrayList<>(ready.findings());
 		Design design = loaded.design();
-		String title = design == null ? null : design.getTitle();
-		if (languageErrors || design == null) {
-			return new DesignResult(loaded.file(), title, Status.ERROR, findings, List.of());
-		}
-		PolicyChoice choice = policyFor(design, loaded.file());
-		if (choice.policy() == null) {
-			findings.addAll(choice.problems());
-			return new DesignResult(loaded.file(), title, Status.ERROR, findings, List.of());
-		}
-		ReviewPolicy policy = choice.policy();
-		CompiledDesign compiled = DesignCompiler.compile(design);
+		String title = design.getTitle();
+		ReviewPolicy policy = ready.policy();
+		CompiledDesign compiled = ready.compiled();
 		List<SolvedCase> solved = new ArrayList<>();
 		List<CaseResult> caseResults = new ArrayList<>();
 		boolean solverFailed = false;
@@ -202,23 +239,19 @@ public final class DesignChecker {
 		}
 		SourceLocation where = Locations.of(design, DesignPackage.Literals.DESIGN__POLICY);
 		Path folder = Path.of(file).toAbsolutePath().getParent();
-		Path named;
-		try {
-			named = folder.resolve(design.getPolicy()).normalize();
-		} catch (RuntimeException e) {
-			return refused(where, "'" + design.getPolicy() + "' is not a file name");
-		}
-		if (Path.of(design.getPolicy()).isAbsolute() || !named.startsWith(folder)) {
+		Path relative = Confinement.relativeName(design.getPolicy());
+		Confinement.Place place = relative == null ? null : Confinement.within(folder, relative);
+		if (place == null || place.verdict() == Confinement.Verdict.CLIMBS_OUT) {
 			return refused(where, "the review policy must be in the design's folder or below it, not '"
 					+ design.getPolicy() + "'");
 		}
-		try {
-			if (Files.exists(named) && !named.toRealPath().startsWith(folder.toRealPath())) {
-				return refused(where, "the review policy '" + design.getPolicy() + "' links outside the design's folder");
-			}
-		} catch (java.io.IOException e) {
-			return refused(where, "cannot read the review policy '" + design.getPolicy() + "': " + e.getMessage());
+		if (place.verdict() == Confinement.Verdict.LINKS_OUT) {
+			return refused(where, "the review policy '" + design.getPolicy() + "' links outside the design's folder");
 		}
+		if (place.verdict() == Confinement.Verdict.UNREADABLE) {
+			return refused(where, "cannot read the review policy '" + design.getPolicy() + "': " + place.problem());
+		}
+		Path named = place.file();
 		PolicyFiles.Resolution r = policies.read(named);
 		if (r.policy().isPresent()) {
 			return new PolicyChoice(r.policy().get(), List.of());

@@ -28,6 +28,7 @@ import bulwark.check.report.JUnitReport;
 import bulwark.check.report.JsonReport;
 import bulwark.check.report.SarifReport;
 import bulwark.check.report.TextReport;
+import bulwark.check.rules.RulePages;
 
 /** Checks a list of design files and writes the report; shared by the check and demo commands. */
 final class Checks {
@@ -53,13 +54,12 @@ final class Checks {
 			err.println("bulwark: no design files (*" + DesignFiles.EXTENSION + ") found in " + paths);
 			return ExitCodes.USAGE;
 		}
-		LibraryFolders.apply(options.library);
 		if (!(options.budget > 0)) {
 			err.println("bulwark: --budget takes a number of seconds above 0");
 			return ExitCodes.USAGE;
 		}
 		java.time.Duration budget = java.time.Duration.ofMillis(Math.round(options.budget * 1000));
-		DesignChecker checker = Language.checker(null, budget);
+		DesignChecker checker = Language.checker(null, budget, options.library);
 		if (options.policy != null) {
 			PolicyFiles.Resolution policy = checker.policies().read(options.policy);
 			if (policy.policy().isEmpty()) {
@@ -67,7 +67,7 @@ final class Checks {
 				err.flush();
 				return ExitCodes.NOT_CHECKED;
 			}
-			checker = Language.checker(policy.policy().get(), budget);
+			checker = Language.checker(policy.policy().get(), budget, options.library);
 		}
 		List<DesignResult> results = checkAll(checker, files, options.jobs, progress(files.size(), err));
 		StringWriter report = new StringWriter();
@@ -187,7 +187,8 @@ final class Checks {
 			HtmlReport.write(results, Version.get(), Safety.CAUTION, w);
 			break;
 		case sarif:
-			SarifReport.write(results, Version.get(), Safety.CAUTION, ExplainCommand::page, w);
+			SarifReport.write(results, Version.get(), Safety.CAUTION,
+					rule -> RulePages.page(checker.loader().installation(), rule).orElse(null), w);
 			break;
 		case junit:
 			try {

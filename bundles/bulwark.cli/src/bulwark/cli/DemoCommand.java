@@ -20,14 +20,14 @@ final class DemoCommand implements Callable<Integer> {
 
 	@Override
 	public Integer call() throws Exception {
-		Path examples = Path.of(System.getProperty("bulwark.home", "."), "examples").toAbsolutePath().normalize();
+		Path examples = Language.installation().examples();
 		Path here = Path.of("").toAbsolutePath();
 		if (examples.startsWith(here)) {
 			examples = here.relativize(examples); // shorter lines when run from the Bulwark folder
 		}
 		if (!Files.isDirectory(examples)) {
 			spec.commandLine().getErr().println("bulwark: demo designs not found at " + examples
-					+ " (set -Dbulwark.home to the Bulwark folder)");
+					+ " (run it with the bulwark launcher of the installation)");
 			return ExitCodes.USAGE;
 		}
 		spec.commandLine().getErr().println(Safety.CAUTION);

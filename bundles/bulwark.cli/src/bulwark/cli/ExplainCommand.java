@@ -1,13 +1,11 @@
 package bulwark.cli;
 
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
 
 import bulwark.check.rules.Rule;
+import bulwark.check.rules.RulePages;
 import bulwark.check.rules.RuleRegistry;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Parameters;
@@ -27,25 +25,15 @@ final class ExplainCommand implements Callable<Integer> {
 		var out = spec.commandLine().getOut();
 		var err = spec.commandLine().getErr();
 		boolean known = RuleRegistry.all().stream().anyMatch(r -> r.info().id().equals(rule));
-		Path file = Path.of(System.getProperty("bulwark.home", "."), "docs", "rules", rule + ".md");
-		if (!known || !Files.isRegularFile(file)) {
+		java.util.Optional<String> page = known ? RulePages.page(Language.installation(), rule) : java.util.Optional.empty();
+		if (page.isEmpty()) {
 			err.println("bulwark: no rule '" + rule + "'; the rules are: "
 					+ RuleRegistry.all().stream().map(Rule::info).map(i -> i.id()).collect(Collectors.joining(", ")));
 			return ExitCodes.USAGE;
 		}
-		out.print(render(Files.readString(file, StandardCharsets.UTF_8)));
+		out.print(render(page.get()));
 		out.flush();
 		return ExitCodes.CLEAN;
-	}
-
-	/** The explanation page of a rule (Markdown), or null when there is none. */
-	static String page(String rule) {
-		Path file = Path.of(System.getProperty("bulwark.home", "."), "docs", "rules", rule + ".md");
-		try {
-			return Files.isRegularFile(file) ? Files.readString(file, StandardCharsets.UTF_8) : null;
-		} catch (java.io.IOException e) {
-			return null;
-		}
 	}
 
 	/** Markdown for a terminal: headings underlined, code blocks indented, emphasis marks dropped. */

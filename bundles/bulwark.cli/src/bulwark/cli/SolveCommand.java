@@ -1,8 +1,6 @@
 package bulwark.cli;
 
 import java.io.PrintWriter;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
@@ -11,16 +9,11 @@ import java.util.stream.Collectors;
 
 import com.google.gson.stream.JsonWriter;
 
-import bulwark.check.Finding;
-import bulwark.check.LanguageFindings;
-import bulwark.check.Severity;
+import bulwark.check.Preparation;
+import bulwark.check.PreparedDesign;
 import bulwark.check.compile.CaseOutcome;
 import bulwark.check.compile.CaseRunner;
 import bulwark.check.compile.CompiledDesign;
-import bulwark.check.compile.DesignCompiler;
-import bulwark.check.policy.DefaultPolicy;
-import bulwark.check.load.LoadedDesign;
-import bulwark.check.report.TextReport;
 import bulwark.check.rules.Figures;
 import bulwark.engine.dc.DcSolution;
 import bulwark.engine.dc.OperatingPoint;
@@ -54,22 +47,15 @@ final class SolveCommand implements Callable<Integer> {
 	public Integer call() throws Exception {
 		PrintWriter out = spec.commandLine().getOut();
 		PrintWriter err = spec.commandLine().getErr();
-		String text;
-		try {
-			text = Files.readString(file, StandardCharsets.UTF_8);
-		} catch (Exception e) {
-			err.println("bulwark: cannot read " + file + ": " + e.getMessage());
+		Preparation prepared = Language.checker().prepare(file);
+		if (prepared instanceof Preparation.Stopped stopped) {
+			Stopping.explain(stopped, err);
 			return ExitCodes.NOT_CHECKED;
 		}
-		LoadedDesign loaded = Language.loader().load(text, file.toString(), null);
-		List<Finding> errors = loaded.issues().stream().map(LanguageFindings::of)
-				.filter(f -> f.severity() == Severity.ERROR).collect(Collectors.toList());
-		if (!errors.isEmpty() || loaded.design() == null) {
-			errors.forEach(f -> err.println(TextReport.line(file.toString(), f)));
-			return ExitCodes.NOT_CHECKED;
-		}
-		CompiledDesign compiled = DesignCompiler.compile(loaded.design());
-		List<CaseOutcome> outcomes = CaseRunner.run(compiled, DefaultPolicy.POLICY);
+		PreparedDesign design = ((Preparation.Ready) prepared).design();
+		CompiledDesign compiled = design.compiled();
+		// the cases of the design's own policy, as its check solves them
+		List<CaseOutcome> outcomes = CaseRunner.run(compiled, design.policy());
 		CaseOutcome chosen = caseName == null ? outcomes.get(0)
 				: outcomes.stream().filter(o -> o.faultCase().name().equals(caseName)).findFirst().orElse(null);
 		if (chosen == null) {

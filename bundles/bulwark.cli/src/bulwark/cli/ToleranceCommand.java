@@ -3,21 +3,15 @@ package bulwark.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 
 import bulwark.check.DesignChecker;
-import bulwark.check.Finding;
-import bulwark.check.LanguageFindings;
-import bulwark.check.Severity;
-import bulwark.check.load.LoadedDesign;
+import bulwark.check.Preparation;
+import bulwark.check.PreparedDesign;
 import bulwark.check.policy.PolicyFiles;
 import bulwark.check.policy.ReviewPolicy;
-import bulwark.check.report.TextReport;
 import bulwark.check.tolerance.MonteCarlo;
 import bulwark.check.tolerance.Progress;
 import bulwark.check.tolerance.ToleranceAnalysis;
@@ -64,40 +58,25 @@ final class ToleranceCommand implements Callable<Integer> {
 			err.println("bulwark: --samples takes 0 or more");
 			return ExitCodes.USAGE;
 		}
-		String text;
-		try {
-			text = Files.readString(file, StandardCharsets.UTF_8);
-		} catch (IOException e) {
-			err.println("bulwark: cannot read " + file + ": " + e.getMessage());
-			return ExitCodes.NOT_CHECKED;
-		}
-		LoadedDesign loaded = Language.loader().load(text, file.toString(), null);
-		List<Finding> errors = loaded.issues().stream().map(LanguageFindings::of)
-				.filter(f -> f.severity() == Severity.ERROR).toList();
-		if (!errors.isEmpty() || loaded.design() == null) {
-			errors.forEach(f -> err.println(TextReport.line(file.toString(), f)));
-			return ExitCodes.NOT_CHECKED;
-		}
 		DesignChecker checker = Language.checker();
-		ReviewPolicy chosen;
 		if (policy != null) {
 			PolicyFiles.Resolution r = checker.policies().read(policy);
 			if (r.policy().isEmpty()) {
 				r.problems().forEach(f -> err.println("bulwark: " + f.message()));
 				return ExitCodes.NOT_CHECKED;
 			}
-			chosen = r.policy().get();
-		} else {
-			DesignChecker.PolicyChoice c = checker.policyFor(loaded.design(), file.toString());
-			if (c.policy() == null) {
-				c.problems().forEach(f -> err.println(TextReport.line(file.toString(), f)));
-				return ExitCodes.NOT_CHECKED;
-			}
-			chosen = c.policy();
+			checker = Language.checker(r.policy().get());
 		}
+		Preparation prepared = checker.prepare(file);
+		if (prepared instanceof Preparation.Stopped stopped) {
+			Stopping.explain(stopped, err);
+			return ExitCodes.NOT_CHECKED;
+		}
+		PreparedDesign design = ((Preparation.Ready) prepared).design();
+		ReviewPolicy chosen = design.policy();
 		MonteCarlo.Distribution distribution = MonteCarlo.Distribution
 				.valueOf(chosen.distribution().toUpperCase(Locale.ROOT));
-		ToleranceAnalysis.Result result = ToleranceAnalysis.run(loaded.design(), chosen, samples, seed, distribution,
+		ToleranceAnalysis.Result result = ToleranceAnalysis.run(design.loaded().design(), chosen, samples, seed, distribution,
 				progress(err));
 		StringWriter report = new StringWriter();
 		switch (format) {

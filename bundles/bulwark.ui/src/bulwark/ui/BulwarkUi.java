@@ -3,12 +3,20 @@ package bulwark.ui;
 import bulwark.check.DesignChecker;
 import bulwark.check.load.DesignLoader;
 import bulwark.lang.ide.BulwarkIdeSetup;
+import bulwark.lang.install.Installation;
 
 /** The workbench's one language injector and checker, created on first use (the injector takes a second). */
 public final class BulwarkUi {
+	/** The installation the workbench was launched from, read once. */
+	private static final Installation INSTALLATION = Installation.fromLaunch();
 	private static volatile DesignChecker checker;
 
 	private BulwarkUi() {
+	}
+
+	/** Where the workbench's documents and demo designs are, and its library folders. */
+	public static Installation installation() {
+		return INSTALLATION;
 	}
 
 	/**
@@ -33,7 +41,7 @@ public final class BulwarkUi {
 			synchronized (BulwarkUi.class) {
 				c = checker;
 				if (c == null) {
-					c = new DesignChecker(new DesignLoader(new BulwarkIdeSetup().createInjectorAndDoEMFRegistration()));
+					c = new DesignChecker(new DesignLoader(new BulwarkIdeSetup().createInjectorAndDoEMFRegistration(), INSTALLATION));
 					checker = c;
 				}
 			}

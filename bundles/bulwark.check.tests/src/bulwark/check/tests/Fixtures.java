@@ -41,9 +41,19 @@ final class Fixtures {
 
 	static synchronized DesignLoader loader() {
 		if (loader == null) {
-			loader = new DesignLoader(new BulwarkStandaloneSetup().createInjectorAndDoEMFRegistration());
+			loader = new DesignLoader(new BulwarkStandaloneSetup().createInjectorAndDoEMFRegistration(), installation(List.of()));
 		}
 		return loader;
+	}
+
+	/** The repository as the installation, with the given library folders. */
+	static bulwark.lang.install.Installation installation(List<java.nio.file.Path> libraryFolders) {
+		return new bulwark.lang.install.Installation(root(), libraryFolders);
+	}
+
+	/** A checker of designs as written whose {@code use} also searches the given library folders. */
+	static DesignChecker checkerWithLibraries(List<java.nio.file.Path> libraryFolders) {
+		return new DesignChecker(new DesignLoader(loader().injector(), installation(libraryFolders)), AS_WRITTEN);
 	}
 
 	static synchronized DesignChecker checker() {

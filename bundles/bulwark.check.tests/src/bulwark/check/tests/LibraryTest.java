@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -13,7 +14,7 @@ import org.junit.jupiter.api.io.TempDir;
 import bulwark.check.DesignResult;
 import bulwark.check.Finding;
 import bulwark.check.Status;
-import bulwark.lang.library.LibraryPath;
+
 
 /** Part definitions from library files: found beside the design or on the library path, never outside. */
 class LibraryTest {
@@ -91,18 +92,13 @@ class LibraryTest {
 	@Test
 	void theLibraryPathIsSearchedToo(@TempDir Path dir) throws IOException {
 		write(dir, "shared/lib/parts.bulwark", LIBRARY);
-		String before = System.getProperty(LibraryPath.PROPERTY);
-		System.setProperty(LibraryPath.PROPERTY, dir.resolve("shared").toString());
-		try {
-			DesignResult r = Fixtures.checker().check(write(dir, "designs/d.bulwark", DESIGN));
-			assertEquals(Status.FAIL, r.status(), r.findings().toString());
-		} finally {
-			if (before == null) {
-				System.clearProperty(LibraryPath.PROPERTY);
-			} else {
-				System.setProperty(LibraryPath.PROPERTY, before);
-			}
-		}
+		Path design = write(dir, "designs/d.bulwark", DESIGN);
+		DesignResult r = Fixtures.checkerWithLibraries(List.of(dir.resolve("shared"))).check(design);
+		assertEquals(Status.FAIL, r.status(), r.findings().toString());
+		// without the folder on the library path the same design cannot find its parts
+		DesignResult without = Fixtures.checker().check(design);
+		assertTrue(without.findings().stream().anyMatch(x -> x.message().contains("no library file")),
+				without.findings().toString());
 	}
 
 	@Test

@@ -21,6 +21,8 @@ import bulwark.lang.design.Design;
 import bulwark.lang.design.Document;
 import bulwark.lang.design.Library;
 import bulwark.lang.design.Policy;
+import bulwark.lang.install.Installation;
+import bulwark.lang.library.LibraryPath;
 
 /**
  * Parses and validates a design or a review policy with the language runtime. Each call uses a fresh resource set, so
@@ -28,9 +30,17 @@ import bulwark.lang.design.Policy;
  */
 public final class DesignLoader {
 	private final Injector injector;
+	private final Installation installation;
 
-	public DesignLoader(Injector injector) {
+	/** @param installation where {@code use}d files are searched after the design's own folder */
+	public DesignLoader(Injector injector, Installation installation) {
 		this.injector = injector;
+		this.installation = installation;
+	}
+
+	/** The installation designs are loaded for: its library folders, its documents. */
+	public Installation installation() {
+		return installation;
 	}
 
 	/** The language injector it parses with; completion asks the same one. */
@@ -75,6 +85,7 @@ public final class DesignLoader {
 
 	private Parsed parse(String text, String file, String extension, CancelIndicator cancel) {
 		XtextResourceSet resourceSet = injector.getInstance(XtextResourceSet.class);
+		LibraryPath.attach(resourceSet, installation.libraryFolders());
 		URI uri = URI.createFileURI(file.endsWith(extension) ? file : file + extension);
 		XtextResource resource = (XtextResource) injector.getInstance(IResourceFactory.class).createResource(uri);
 		resourceSet.getResources().add(resource);

@@ -6,16 +6,18 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Optional;
 
-/** A rule's explanation page, docs/rules/ID.md under the installation (the system property bulwark.home). */
+import bulwark.lang.install.Installation;
+
+/** A rule's explanation page, docs/rules/ID.md of the installation: the one reader of it. */
 public final class RulePages {
 	private RulePages() {
 	}
 
-	public static Optional<String> page(String rule) {
-		if (!rule.matches("[a-z]+(-[a-z]+)*")) {
+	public static Optional<String> page(Installation installation, String rule) {
+		if (rule == null || !rule.matches("[a-z]+(-[a-z]+)*")) {
 			return Optional.empty();
 		}
-		Path file = Path.of(System.getProperty("bulwark.home", "."), "docs", "rules", rule + ".md");
+		Path file = installation.rulePage(rule);
 		try {
 			return Files.isRegularFile(file) ? Optional.of(Files.readString(file, StandardCharsets.UTF_8)) : Optional.empty();
 		} catch (IOException e) {
@@ -24,8 +26,8 @@ public final class RulePages {
 	}
 
 	/** The page's "What" section, one paragraph: what the rule finds. */
-	public static Optional<String> what(String rule) {
-		return page(rule).map(text -> {
+	public static Optional<String> what(Installation installation, String rule) {
+		return page(installation, rule).map(text -> {
 			int start = text.indexOf("## What");
 			if (start < 0) {
 				return null;

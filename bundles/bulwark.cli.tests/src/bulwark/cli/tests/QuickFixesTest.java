@@ -25,7 +25,8 @@ import bulwark.lang.ide.fixes.QuickFixes;
 /** Quick fixes compute their values, and are offered only when a full re-check proves them. */
 class QuickFixesTest {
 	private static final DesignChecker CHECKER = new DesignChecker(
-			new DesignLoader(new BulwarkStandaloneSetup().createInjectorAndDoEMFRegistration()));
+			new DesignLoader(new BulwarkStandaloneSetup().createInjectorAndDoEMFRegistration(),
+					bulwark.lang.install.Installation.fromLaunch()));
 
 	private static Map<Finding, List<Fix>> fixes(Path file) throws Exception {
 		String text = Files.readString(file);

@@ -15,7 +15,7 @@ public class LibraryImportResolver extends ImportUriResolver {
 		if (written == null || object.eResource() == null) {
 			return null;
 		}
-		return LibraryPath.locate(object.eResource().getURI(), written).file()
+		return LibraryPath.locate(object.eResource(), written).file()
 				.map(p -> URI.createFileURI(p.toString()).toString()).orElse(null);
 	}
 }

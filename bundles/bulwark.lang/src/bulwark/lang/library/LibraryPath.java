@@ -1,25 +1,27 @@
 package bulwark.lang.library;
 
-import java.io.File;
-import java.io.IOException;
 import java.nio.file.Files;
-import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
+import org.eclipse.emf.common.notify.impl.AdapterImpl;
 import org.eclipse.emf.common.util.URI;
+import org.eclipse.emf.ecore.resource.Resource;
+import org.eclipse.emf.ecore.resource.ResourceSet;
+import org.eclipse.emf.ecore.util.EcoreUtil;
+
+import bulwark.lang.install.Installation;
 
 /**
  * Where a {@code use "…"} finds its file: relative to the file that says it, else in a folder of the library
- * path (the system property {@value #PROPERTY}, folders separated as the platform separates paths). Never
- * outside those folders — no absolute names, no {@code ..} that climbs out, no link that points out.
+ * path. Never outside those folders (see {@link Confinement}). The library path belongs to the resource set
+ * the design is loaded into ({@link #attach}); a resource set without one (an editor's, the language
+ * server's) searches the folders of {@link Installation#fromLaunch()}.
  */
 public final class LibraryPath {
-	public static final String PROPERTY = "bulwark.library";
-
-	/** The file found, or why there is none. */
+	/** The found file, or why there is none. */
 	public record Located(Optional<Path> file, String problem) {
 		static Located found(Path p) {
 			return new Located(Optional.of(p), null);
@@ -30,62 +32,80 @@ public final class LibraryPath {
 		}
 	}
 
+	/** The library folders of one resource set. */
+	private static final class Folders extends AdapterImpl {
+		final List<Path> folders;
+
+		Folders(List<Path> folders) {
+			this.folders = List.copyOf(folders);
+		}
+
+		@Override
+		public boolean isAdapterForType(Object type) {
+			return type == Folders.class;
+		}
+	}
+
 	private LibraryPath() {
 	}
 
-	public static List<Path> folders() {
-		List<Path> folders = new ArrayList<>();
-		for (String f : System.getProperty(PROPERTY, "").split(File.pathSeparator)) {
-			if (!f.isBlank()) {
-				folders.add(Path.of(f).toAbsolutePath().normalize());
-			}
-		}
-		return folders;
+	/** Gives a resource set its library folders, searched in order after the design's own folder. */
+	public static void attach(ResourceSet resources, List<Path> folders) {
+		resources.eAdapters().removeIf(a -> a instanceof Folders);
+		resources.eAdapters().add(new Folders(folders));
 	}
 
-	/** Locates what a file (by its resource URI) names in a {@code use}. */
-	public static Located locate(URI context, String written) {
+	/** The library folders a resource is loaded with. */
+	public static List<Path> folders(Resource context) {
+		ResourceSet set = context == null ? null : context.getResourceSet();
+		if (set != null && EcoreUtil.getAdapter(set.eAdapters(), Folders.class) instanceof Folders f) {
+			return f.folders;
+		}
+		return Installation.fromLaunch().libraryFolders();
+	}
+
+	/** Locates what a resource names in a {@code use}. */
+	public static Located locate(Resource context, String written) {
 		if (written == null || written.isBlank()) {
 			return Located.refused("name the library file, for example use \"lib/generic-parts.bulwark\"");
 		}
-		Path relative;
-		try {
-			relative = Path.of(written);
-		} catch (InvalidPathException e) {
-			return Located.refused("'" + written + "' is not a file name");
+		Path relative = Confinement.relativeName(written);
+		if (relative == null) {
+			return Located.refused(written.contains(":") || written.startsWith("~") || looksAbsolute(written)
+					? "'" + written + "' must be relative to the design's folder or the library path"
+					: "'" + written + "' is not a file name");
 		}
-		if (relative.isAbsolute() || written.contains(":") || written.startsWith("~")) {
-			return Located.refused("'" + written + "' must be relative to the design's folder or the library path");
-		}
+		URI uri = context == null ? null : context.getURI();
 		List<Path> roots = new ArrayList<>();
-		if (context != null && context.isFile()) {
-			Path own = Path.of(context.toFileString()).toAbsolutePath().normalize().getParent();
+		if (uri != null && uri.isFile()) {
+			Path own = Path.of(uri.toFileString()).toAbsolutePath().normalize().getParent();
 			if (own != null) {
 				roots.add(own);
 			}
 		}
-		roots.addAll(folders());
+		roots.addAll(folders(context));
 		boolean escapes = false;
 		for (Path root : roots) {
-			Path candidate = root.resolve(relative).normalize();
-			if (!candidate.startsWith(root)) {
-				escapes = true;
-				continue;
+			Confinement.Place place = Confinement.within(root, relative);
+			switch (place.verdict()) {
+			case CLIMBS_OUT -> escapes = true;
+			case LINKS_OUT, UNREADABLE -> {
+				return Located.refused(place.problem());
 			}
-			if (Files.isRegularFile(candidate)) {
-				try {
-					if (!candidate.toRealPath().startsWith(root.toRealPath())) {
-						return Located.refused("'" + written + "' links to a file outside " + root);
-					}
-				} catch (IOException e) {
-					return Located.refused("cannot read '" + written + "': " + e.getMessage());
+			case INSIDE -> {
+				if (Files.isRegularFile(place.file())) {
+					return Located.found(place.file());
 				}
-				return Located.found(candidate);
+			}
 			}
 		}
 		if (escapes) {
 			return Located.refused("'" + written + "' leaves the design's folder; libraries stay in it or on the library path");
 		}
 		return Located.refused("no library file '" + written + "' in " + roots);
+	}
+
+	private static boolean looksAbsolute(String written) {
+		return written.startsWith("/") || written.startsWith("\\");
 	}
 }

@@ -24,7 +24,7 @@ public class LibraryValidator extends AbstractDeclarativeValidator {
 		if (use.eResource() == null) {
 			return;
 		}
-		LibraryPath.Located l = LibraryPath.locate(use.eResource().getURI(), use.getImportURI());
+		LibraryPath.Located l = LibraryPath.locate(use.eResource(), use.getImportURI());
 		if (l.file().isEmpty()) {
 			error(l.problem(), use, DesignPackage.Literals.USE__IMPORT_URI,
 					l.problem().startsWith("no library") ? IssueCodes.LIBRARY_NOT_FOUND : IssueCodes.LIBRARY_OUTSIDE);

@@ -92,7 +92,7 @@ final class PartHover implements ITextHover {
 			if (part.equals(f.part())) {
 				text.append('\n').append(f.severity().id()).append(f.waived() ? " (waived) " : " ").append(f.rule())
 						.append(": ").append(f.message());
-				bulwark.check.rules.RulePages.what(f.rule())
+				bulwark.check.rules.RulePages.what(bulwark.ui.BulwarkUi.installation(), f.rule())
 						.ifPresent(w -> text.append("\n    (").append(f.rule()).append(": ").append(w.replace('\n', ' ')).append(')'));
 			}
 		}

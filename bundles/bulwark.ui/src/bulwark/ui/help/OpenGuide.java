@@ -22,7 +22,7 @@ public class OpenGuide extends AbstractHandler {
 	@Override
 	public Object execute(ExecutionEvent event) throws ExecutionException {
 		String page = event.getCommand().getId().substring(PREFIX.length());
-		Path file = Path.of(System.getProperty("bulwark.home", "."), "docs", page + ".md");
+		Path file = bulwark.ui.BulwarkUi.installation().guidePage(page);
 		var window = HandlerUtil.getActiveWorkbenchWindowChecked(event);
 		if (!Files.isRegularFile(file)) {
 			MessageDialog.openInformation(window.getShell(), "Bulwark help",

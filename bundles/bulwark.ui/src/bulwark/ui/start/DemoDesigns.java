@@ -19,7 +19,7 @@ public final class DemoDesigns {
 	}
 
 	public static Path folder() {
-		return Path.of(System.getProperty("bulwark.home", "."), "examples").toAbsolutePath().normalize();
+		return bulwark.ui.BulwarkUi.installation().examples();
 	}
 
 	/** The demos in file-name order; none when the folder is missing. */

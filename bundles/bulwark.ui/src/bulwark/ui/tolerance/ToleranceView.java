@@ -32,8 +32,9 @@ import org.eclipse.ui.part.ViewPart;
 import org.eclipse.xtext.util.CancelIndicator;
 
 import bulwark.check.DesignChecker;
+import bulwark.check.Preparation;
+import bulwark.check.PreparedDesign;
 import bulwark.check.io.AtomicFile;
-import bulwark.check.load.LoadedDesign;
 import bulwark.check.report.ToleranceReport;
 import bulwark.check.tolerance.Corners;
 import bulwark.check.tolerance.Figure;
@@ -162,15 +163,13 @@ public class ToleranceView extends ViewPart {
 		String text = editor.getDocumentProvider().getDocument(editor.getEditorInput()).get();
 		String file = editor.file().toString();
 		DesignChecker checker = BulwarkUi.checker();
-		LoadedDesign loaded = checker.loader().load(text, file, CancelIndicator.NullImpl);
-		DesignChecker.PolicyChoice policy = loaded.design() == null ? null : checker.policyFor(loaded.design(), file);
-		if (loaded.design() == null || loaded.issues().stream().anyMatch(i -> i.getSeverity() == org.eclipse.xtext.diagnostics.Severity.ERROR)
-				|| policy.policy() == null) {
+		if (!(checker.prepare(text, file, CancelIndicator.NullImpl) instanceof Preparation.Ready ready)) {
 			status.setText("The design has errors (see the Findings view); fix them before a tolerance run.");
 			return;
 		}
+		PreparedDesign design = ready.design();
 		MonteCarlo.Distribution distribution = MonteCarlo.Distribution
-				.valueOf(policy.policy().distribution().toUpperCase(Locale.ROOT));
+				.valueOf(design.policy().distribution().toUpperCase(Locale.ROOT));
 		result = null;
 		resultFile = file;
 		run.setEnabled(false);
@@ -184,7 +183,7 @@ public class ToleranceView extends ViewPart {
 			protected IStatus run(IProgressMonitor monitor) {
 				monitor.beginTask(getName(), 1000);
 				int[] reported = { 0 };
-				ToleranceAnalysis.Result r = ToleranceAnalysis.run(loaded.design(), policy.policy(), sampleCount, 1,
+				ToleranceAnalysis.Result r = ToleranceAnalysis.run(design.loaded().design(), design.policy(), sampleCount, 1,
 						distribution, new Progress() {
 							@Override
 							public synchronized void done(int finished, int total) {

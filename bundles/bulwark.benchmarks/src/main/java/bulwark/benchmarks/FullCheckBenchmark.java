@@ -40,7 +40,8 @@ public class FullCheckBenchmark {
 
 	@Setup
 	public void setUp() throws IOException {
-		checker = new DesignChecker(new DesignLoader(new BulwarkStandaloneSetup().createInjectorAndDoEMFRegistration()));
+		checker = new DesignChecker(new DesignLoader(new BulwarkStandaloneSetup().createInjectorAndDoEMFRegistration(),
+				bulwark.lang.install.Installation.fromLaunch()));
 		try (InputStream in = FullCheckBenchmark.class.getResourceAsStream("four-channel-input.bulwark")) {
 			design = new String(in.readAllBytes(), StandardCharsets.UTF_8);
 		}

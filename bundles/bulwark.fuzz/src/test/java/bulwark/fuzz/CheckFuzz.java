@@ -38,7 +38,8 @@ class CheckFuzz {
 	/** The seed of every property here; change it (and say so in the commit) to explore other designs. */
 	static final String SEED = "20261202";
 	private static final DesignChecker CHECKER = new DesignChecker(
-			new DesignLoader(new BulwarkStandaloneSetup().createInjectorAndDoEMFRegistration()));
+			new DesignLoader(new BulwarkStandaloneSetup().createInjectorAndDoEMFRegistration(),
+					bulwark.lang.install.Installation.fromLaunch()));
 	private static final List<String> KINDS = List.of("resistor", "source", "battery", "diode", "zener", "led", "npn",
 			"pnp", "nmos", "pmos", "comparator", "capacitor", "inductor", "potentiometer", "protector", "fuse",
 			"indicator");

@@ -39,7 +39,7 @@ public final class BulwarkLanguageServer {
 		// the plain runtime (which registers the EMF package) parses for the checker; the language's services
 		// for the editor come from a second injector with the IDE and server modules mixed in
 		Injector runtime = new BulwarkStandaloneSetup().createInjectorAndDoEMFRegistration();
-		Checks checks = new Checks(new DesignChecker(new DesignLoader(runtime)));
+		Checks checks = new Checks(new DesignChecker(new DesignLoader(runtime, bulwark.lang.install.Installation.fromLaunch())));
 		Injector language = Guice.createInjector(
 				Modules2.mixin(new BulwarkRuntimeModule(), new BulwarkIdeModule(), new BulwarkServerModule(checks)));
 		IResourceServiceProvider provider = language.getInstance(IResourceServiceProvider.class);

@@ -26,7 +26,8 @@ public class Checks {
 
 	/** With a checker of its own (tests, and a server started without one). */
 	public Checks() {
-		this(new DesignChecker(new DesignLoader(new BulwarkStandaloneSetup().createInjector())));
+		this(new DesignChecker(new DesignLoader(new BulwarkStandaloneSetup().createInjector(),
+				bulwark.lang.install.Installation.fromLaunch())));
 	}
 
 	/** With the checker the server made from the language's plain runtime. */

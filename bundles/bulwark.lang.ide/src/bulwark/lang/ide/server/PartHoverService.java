@@ -59,7 +59,7 @@ public class PartHoverService extends HoverService {
 		}
 		String findings = checked.result().findings().stream().filter(f -> word.equals(f.part()))
 				.map(f -> "- **" + f.severity().id() + "** " + f.rule() + ": " + f.message()
-						+ RulePages.what(f.rule()).map(w -> "\n\n  *" + f.rule() + "*: " + w.replace("\n", " ")).orElse(""))
+						+ RulePages.what(checks.checker().loader().installation(), f.rule()).map(w -> "\n\n  *" + f.rule() + "*: " + w.replace("\n", " ")).orElse(""))
 				.collect(Collectors.joining("\n"));
 		String body = "**" + word + "**, worst stress per rating\n\n" + md + (findings.isEmpty() ? "" : "\n" + findings);
 		return new Hover(new MarkupContent(MarkupKind.MARKDOWN, body),
