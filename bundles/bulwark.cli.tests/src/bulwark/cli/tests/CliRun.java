@@ -10,7 +10,6 @@ import bulwark.cli.BulwarkCommand;
 record CliRun(int exitCode, String out, String err) {
 
 	static CliRun of(String... args) {
-		System.setProperty("bulwark.home", root().toString()); // where the launcher points: the rules' explanations
 		StringWriter out = new StringWriter();
 		StringWriter err = new StringWriter();
 		int code = BulwarkCommand.run(args, new PrintWriter(out), new PrintWriter(err));

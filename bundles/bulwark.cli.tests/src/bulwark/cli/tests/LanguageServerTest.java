@@ -57,7 +57,6 @@ class LanguageServerTest {
 
 	@BeforeAll
 	static void start() throws Exception {
-		System.setProperty("bulwark.home", CliRun.root().toString()); // where the rules' explanations are
 		dir = Files.createTempDirectory("bulwark-lsp");
 		Files.copy(CliRun.root().resolve("examples/teaching-lab.bulwark-policy"), dir.resolve("teaching-lab.bulwark-policy"));
 		Path lab = dir.resolve("lab.bulwark");

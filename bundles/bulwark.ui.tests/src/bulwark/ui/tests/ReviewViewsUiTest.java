@@ -153,7 +153,6 @@ class ReviewViewsUiTest {
 
 	@Test
 	void helpOpensTheUserGuide() throws Exception {
-		System.setProperty("bulwark.home", ROOT.toString());
 		org.eclipse.ui.handlers.IHandlerService handlers = PlatformUI.getWorkbench().getActiveWorkbenchWindow()
 				.getService(org.eclipse.ui.handlers.IHandlerService.class);
 		handlers.executeCommand("bulwark.ui.help.user-guide", null);

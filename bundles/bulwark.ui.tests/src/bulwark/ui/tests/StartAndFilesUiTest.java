@@ -28,7 +28,6 @@ import bulwark.ui.start.Templates;
 class StartAndFilesUiTest {
 	@Test
 	void theStartPageOffersTheDemosTemplatesAndHelp() throws Exception {
-		System.setProperty("bulwark.home", ROOT.toString()); // where the launcher points: the demo designs
 		// opened afresh: the page lists what the installation holds when it is created
 		var shown = page().findView(StartView.ID);
 		if (shown != null) {

@@ -34,7 +34,6 @@ class SarifSchemaTest {
 	}
 
 	private static String sarif(String... paths) {
-		System.setProperty("bulwark.home", ROOT.toString());
 		StringWriter out = new StringWriter(), err = new StringWriter();
 		String[] args = new String[paths.length + 3];
 		args[0] = "check";
