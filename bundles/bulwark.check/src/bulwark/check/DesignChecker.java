@@ -194,8 +194,9 @@ public final class DesignChecker {
 			FaultCase c = outcome.faultCase();
 			DcResult result = outcome.result();
 			if (result instanceof DcSolution solution) {
-				solved.add(new SolvedCase(c, solution, outcome.pulseEnergy()));
-				caseResults.add(new CaseResult(c.name(), c.kind(), true, Stresses.of(compiled, c, solution, policy)));
+				solved.add(new SolvedCase(c, solution, outcome.pulseEnergy(), outcome.averagePower()));
+				caseResults.add(new CaseResult(c.name(), c.kind(), true,
+						Stresses.of(compiled, c, solution, outcome.averagePower(), policy)));
 			} else {
 				solverFailed = true;
 				caseResults.add(new CaseResult(c.name(), c.kind(), false, List.of()));

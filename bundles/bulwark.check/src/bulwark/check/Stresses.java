@@ -23,7 +23,8 @@ final class Stresses {
 	private Stresses() {
 	}
 
-	static List<PartStress> of(CompiledDesign design, FaultCase c, DcSolution solution, ReviewPolicy policy) {
+	static List<PartStress> of(CompiledDesign design, FaultCase c, DcSolution solution,
+			java.util.Map<String, Double> averagePower, ReviewPolicy policy) {
 		List<PartStress> result = new ArrayList<>();
 		for (Part part : design.parts().values()) {
 			OperatingPoint p = solution.device(part.getName());
@@ -31,8 +32,9 @@ final class Stresses {
 			String limiting = null;
 			for (Measure m : StressCatalog.of(part.getKind())) {
 				Optional<Limit> limit = Limits.of(part, m, policy);
-				if (limit.isPresent() && m.appliesIn(c, part.getName())) {
-					double u = m.of(p) / limit.get().value();
+				double figure = m.judged(c, p, averagePower, part.getName());
+				if (limit.isPresent() && !Double.isNaN(figure)) {
+					double u = figure / limit.get().value();
 					if (utilisation == null || u > utilisation) {
 						utilisation = u;
 						limiting = m.rating();

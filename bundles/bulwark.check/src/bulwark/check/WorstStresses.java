@@ -27,14 +27,13 @@ final class WorstStresses {
 			for (Measure m : StressCatalog.of(part.getKind())) {
 				double worst = Double.NEGATIVE_INFINITY;
 				String at = null;
+				String what = m.what();
 				for (SolvedCase c : cases) {
-					if (!m.appliesIn(c.faultCase(), part.getName())) {
-						continue;
-					}
-					double v = m.of(c.solution().device(part.getName()));
-					if (v > worst) {
+					double v = c.figure(m, part.getName());
+					if (!Double.isNaN(v) && v > worst) {
 						worst = v;
 						at = c.faultCase().name();
+						what = m.what(c.faultCase());
 					}
 				}
 				if (at == null) {
@@ -42,7 +41,7 @@ final class WorstStresses {
 				}
 				Optional<Limit> limit = Limits.of(part, m, policy);
 				double value = worst;
-				result.add(new WorstStress(part.getName(), m.rating(), m.what(), m.unit(), value, at,
+				result.add(new WorstStress(part.getName(), m.rating(), what, m.unit(), value, at,
 						limit.map(Limit::rated).orElse(null), limit.map(Limit::factor).orElse(null),
 						limit.map(l -> value / l.value()).orElse(null)));
 			}

@@ -102,7 +102,9 @@ class DeviceKindsTest {
 		assertEquals(Status.PASS, r.status(), r.findings().toString());
 		assertEquals(20e-3, part(r, "D1").current(), 20e-3 * 1e-6);
 		assertEquals(2.95 / 1e3, part(r, "RW").current(), 1e-9); // the inductor is a short at DC
-		assertEquals(0, part(r, "C1").current(), 0); // the capacitor is open at DC
+		// at DC only the capacitor's leakage conducts: its default for 100 nF is 100 MΩ·µF / 0.1 µF = 1 GΩ,
+		// so 2.95 V drives 2.95 nA [closed form, docs/sources.md#unconfirmed for the leakage]
+		assertEquals(2.95 / 1e9, part(r, "C1").current(), 1e-15);
 	}
 
 	@Test

@@ -12,6 +12,7 @@ import bulwark.engine.circuit.Device;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.circuit.VoltageSource;
 import bulwark.engine.source.CombinationWave;
+import bulwark.engine.source.Sine;
 import bulwark.lang.design.Action;
 import bulwark.lang.design.Apply;
 import bulwark.lang.design.Case;
@@ -25,10 +26,10 @@ import bulwark.lang.units.Quantities;
 /**
  * The cases a design is checked under: the normal condition (terminals open, then each terminal shorted to
  * the common one), the designer's own cases, and the abuse the review policy names — across every pair of
- * terminals, each mains system at its highest peak and each DC level, in both polarities — and every
- * battery put in backwards, and each surge the policy names (IEC 61000-4-5 combination wave, both
- * polarities, solved as a transient). Mains is applied as DC at its peak from an ideal source: the steady worst
- * instant of the sine, with nothing of the supply's impedance to help.
+ * terminals, each mains system as its sine at the highest amplitude (both polarities are in its cycle) and
+ * each DC level in both polarities — and every battery put in backwards, and each surge the policy names
+ * (IEC 61000-4-5 combination wave, both polarities, solved as a transient). Mains comes from an ideal source,
+ * with nothing of the supply's impedance to help; MainsRunner solves it over the cycle.
  */
 public final class CaseGenerator {
 	private CaseGenerator() {
@@ -59,10 +60,7 @@ public final class CaseGenerator {
 					continue;
 				}
 				for (ReviewPolicy.MainsSystem mains : policy.mains()) {
-					String what = String.format(Locale.ROOT, "%s mains peak (%s)",
-							Figures.engineering(mains.nominalVolts(), "V"), Figures.engineering(mains.peakVolts(), "V"));
-					cases.add(abuse(design, what, a, b, mains.peakVolts()));
-					cases.add(abuse(design, what, b, a, mains.peakVolts()));
+					cases.add(mains(design, mains, a, b));
 				}
 				for (ReviewPolicy.SurgeLevel surge : policy.surges()) {
 					String what = "surge " + Figures.engineering(surge.peakVolts(), "V") + " behind "
@@ -115,6 +113,20 @@ public final class CaseGenerator {
 		return new FaultCase(what + ", " + plus.getName() + " + to " + minus.getName() + " −", FaultCase.ABUSE,
 				List.of(VoltageSource.ideal(pairSource(first, second), net(design, first), net(design, second), signed)),
 				Map.of(), plus.getName(), minus.getName());
+	}
+
+	/**
+	 * Mains across one pair: an ideal sine of the system's highest amplitude and its frequency, on the same
+	 * nets in the same order as the pair's other cases, positive at the first terminal in its first half-cycle.
+	 */
+	private static FaultCase mains(CompiledDesign design, ReviewPolicy.MainsSystem mains, Terminal a, Terminal b) {
+		Terminal first = order(a, b) ? a : b, second = first == a ? b : a;
+		String what = String.format(Locale.ROOT, "%s %s mains (%s peak)", Figures.engineering(mains.nominalVolts(), "V"),
+				Figures.engineering(mains.hertz(), "Hz"), Figures.engineering(mains.peakVolts(), "V"));
+		return new FaultCase(what, FaultCase.MAINS,
+				List.of(new VoltageSource(pairSource(first, second), net(design, first), net(design, second),
+						new Sine(0, mains.peakVolts(), mains.hertz(), 0), 0)),
+				Map.of(), first.getName(), second.getName());
 	}
 
 	/** A 1.2/50 µs combination wave from its generator impedance, positive at {@code plus}. */

@@ -48,6 +48,8 @@ public final class CaseRunner {
 			}
 			if (c.isSurge()) {
 				outcomes.addAll(SurgeRunner.run(design, c, circuit, solver));
+			} else if (c.isMains()) {
+				outcomes.addAll(MainsRunner.run(design, c, circuit, solver));
 			} else {
 				outcomes.add(openFuses(solver, c, circuit, solver.solve(circuit)));
 			}

@@ -87,8 +87,9 @@ public final class DesignCompiler {
 						DeviceModels.mosfet(part, values)));
 				break;
 			case CAPACITOR:
-				builder.add(new Capacitor(part.getName(), pin(builder, part, "a"), pin(builder, part, "b"),
-						required(values, part, "value")));
+				double farads = required(values, part, "value");
+				builder.add(new Capacitor(part.getName(), pin(builder, part, "a"), pin(builder, part, "b"), farads,
+						values.parameter(part, "leakage").orElse(DeviceModels.capacitorLeakage(farads))));
 				break;
 			case INDUCTOR:
 				builder.add(new Inductor(part.getName(), pin(builder, part, "a"), pin(builder, part, "b"),

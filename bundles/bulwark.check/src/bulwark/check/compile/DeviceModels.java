@@ -15,6 +15,13 @@ import bulwark.lang.design.PartKind;
 final class DeviceModels {
 	/** Cold resistance of a fuse when the design gives none [unconfirmed: typical of small glass fuses]. */
 	static final double FUSE_COLD_OHMS = 0.1;
+	/**
+	 * Insulation resistance of a capacitor when the design gives none: the lower of 10 GΩ and 100 MΩ·µF over
+	 * its capacitance [unconfirmed: the form ceramic-capacitor specifications give their minimum in; the figures
+	 * are recalled, docs/sources.md#unconfirmed]. It lets a net held only by capacitors solve at DC.
+	 */
+	static final double CAPACITOR_LEAKAGE_MAX_OHMS = 10e9;
+	static final double CAPACITOR_LEAKAGE_OHM_FARADS = 100e6 * 1e-6;
 	/** Activation current of an indicator when the design gives none [common practice: a visible LED]. */
 	static final double INDICATOR_ACTIVATION = 1e-3;
 	/** Trip delay of a protector when the design gives none [unconfirmed: typical of electronic current limiters]. */
@@ -73,5 +80,10 @@ final class DeviceModels {
 				values.parameter(part, "reverse_beta").orElse(base.reverseBeta()), base.forwardEmission(),
 				base.reverseEmission(), values.parameter(part, "breakdown").orElse(base.emitterBaseBreakdown()),
 				base.breakdownCurrent(), base.kelvin());
+	}
+
+	/** The default insulation resistance of a capacitor of this value, Ω. */
+	static double capacitorLeakage(double farads) {
+		return Math.min(CAPACITOR_LEAKAGE_MAX_OHMS, CAPACITOR_LEAKAGE_OHM_FARADS / farads);
 	}
 }

@@ -17,6 +17,11 @@ public record FaultCase(String name, String kind, List<Device> added, Map<String
 	public static final String ABUSE = "abuse";
 	/** A combination-wave surge, solved as a transient; its figures are taken at the instants of peak stress. */
 	public static final String SURGE = "surge";
+	/**
+	 * Mains across a pair of terminals as the sine it is, solved over its cycle; its figures are taken at the
+	 * instants of peak stress, power as the average over the cycle (see MainsRunner).
+	 */
+	public static final String MAINS = "mains";
 
 	public FaultCase {
 		added = List.copyOf(added);
@@ -31,9 +36,13 @@ public record FaultCase(String name, String kind, List<Device> added, Map<String
 		return new FaultCase("normal, terminals open", NORMAL, List.of());
 	}
 
-	/** Abuse at the terminals: a generated DC case, a reversed battery or a surge. */
+	/** Abuse at the terminals: a generated DC case, mains, a reversed battery or a surge. */
 	public boolean isAbuse() {
-		return ABUSE.equals(kind) || SURGE.equals(kind);
+		return ABUSE.equals(kind) || SURGE.equals(kind) || MAINS.equals(kind);
+	}
+
+	public boolean isMains() {
+		return MAINS.equals(kind);
 	}
 
 	public boolean isSurge() {
@@ -43,5 +52,11 @@ public record FaultCase(String name, String kind, List<Device> added, Map<String
 	/** The same case at one instant of its transient. */
 	public FaultCase at(String instant) {
 		return new FaultCase(name + ", at " + instant, kind, added, replaced, from, to);
+	}
+
+	/** The same case at one instant, named with the terminal positive then and the other. */
+	public FaultCase at(String instant, String plus, String minus) {
+		return new FaultCase(name + ", " + plus + " + to " + minus + " −, at " + instant, kind, added, replaced, plus,
+				minus);
 	}
 }

@@ -25,10 +25,21 @@ public record ReviewPolicy(String title, List<MainsSystem> mains, List<Double> l
 		severities = Map.copyOf(severities);
 	}
 
-	/** A mains system applied as DC at its highest peak: nominal RMS × (1 + tolerance) × √2. */
+	/**
+	 * A mains system: its nominal RMS voltage and supply tolerance. It is applied as a sine at its highest
+	 * amplitude, nominal × (1 + tolerance) × √2, at the frequency of its system.
+	 */
 	public record MainsSystem(double nominalVolts, double tolerancePercent) {
 		public double peakVolts() {
 			return nominalVolts * (1 + tolerancePercent / 100) * Math.sqrt(2);
+		}
+
+		/**
+		 * The frequency IEC 60038 gives systems of this voltage: 60 Hz for the 100–150 V systems (120/208 V,
+		 * 120/240 V), 50 Hz for the others (230/400 V) [published, docs/sources.md#mains-and-surges].
+		 */
+		public double hertz() {
+			return nominalVolts <= 150 ? 60 : 50;
 		}
 	}
 

@@ -65,7 +65,8 @@ public final class ReversePathRule implements Rule {
 			if (!fc.isAbuse() || fc.from() == null) {
 				continue;
 			}
-			List<Overstress> over = Overstress.in(context.design().parts().values(), fc, c.solution(), context.policy());
+			List<Overstress> over = Overstress.in(context.design().parts().values(), fc, c.solution(), c.averagePower(),
+					context.policy());
 			for (Overstress o : over) {
 				Reach previous = worst.get(o.part().getName());
 				if (previous != null && previous.over().utilisation() >= o.utilisation()) {
@@ -81,7 +82,8 @@ public final class ReversePathRule implements Rule {
 			Overstress o = r.over();
 			String message = String.format(Locale.ROOT,
 					"case '%s' reaches %s " + PATH_START + "%s" + PATH_END + "%s is %s, over %s, %.0f %% of the limit",
-					r.c().faultCase().name(), o.part().getName(), String.join(" → ", r.path()), o.measure().what(),
+					r.c().faultCase().name(), o.part().getName(), String.join(" → ", r.path()),
+					o.measure().what(r.c().faultCase()),
 					Figures.engineering(o.value(), o.measure().unit()), o.limit().describe(), 100 * o.utilisation());
 			findings.accept(new Finding(ID, INFO.concern(), INFO.severity(), message, o.part().getName(),
 					r.c().faultCase().name(), Locations.of(o.part(), DesignPackage.Literals.MEMBER__NAME), o.value(),

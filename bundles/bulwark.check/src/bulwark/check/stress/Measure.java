@@ -21,11 +21,35 @@ public record Measure(String rating, String what, String unit, ToDoubleFunction<
 		return stress.applyAsDouble(point);
 	}
 
-	/** Whether the stress counts for the part in the case. */
+	/** Whether the stress counts for the part at the solved instant of the case. */
 	public boolean appliesIn(FaultCase c, String part) {
-		if (c.isSurge() && rating.equals("power")) {
+		if (c.isSurge() && isPower()) {
 			return false; // continuous ratings do not judge a 50 µs pulse; see SurgeRunner
 		}
+		if (c.isMains() && isPower()) {
+			return false; // a power rating is thermal: judged on the cycle's average, not on an instant
+		}
 		return !(notWhenReplaced && c.replaced().containsKey(part));
+	}
+
+	/**
+	 * The figure the rating is judged on in this case, NaN when the case does not judge it: the value at the
+	 * solved instant, except a power rating under mains, judged on the part's power averaged over the cycle.
+	 */
+	public double judged(FaultCase c, OperatingPoint point, java.util.Map<String, Double> averagePower, String part) {
+		if (c.isMains() && isPower()) {
+			Double average = averagePower.get(part);
+			return average == null ? Double.NaN : Math.abs(average);
+		}
+		return appliesIn(c, part) ? of(point) : Double.NaN;
+	}
+
+	/** What the figure is called in the case: "power", or "average power over the cycle" under mains. */
+	public String what(FaultCase c) {
+		return c.isMains() && isPower() ? "average " + what + " over the cycle" : what;
+	}
+
+	private boolean isPower() {
+		return rating.equals("power");
 	}
 }

@@ -17,13 +17,14 @@ public record Overstress(Part part, Measure measure, double value, Limit limit) 
 	}
 
 	/** Every stress over its limit in the solution, for the given parts. */
-	public static List<Overstress> in(Iterable<Part> parts, FaultCase c, DcSolution solution, ReviewPolicy policy) {
+	public static List<Overstress> in(Iterable<Part> parts, FaultCase c, DcSolution solution,
+			java.util.Map<String, Double> averagePower, ReviewPolicy policy) {
 		List<Overstress> over = new ArrayList<>();
 		for (Part part : parts) {
 			for (Measure m : StressCatalog.of(part.getKind())) {
 				Optional<Limit> limit = Limits.of(part, m, policy);
-				if (limit.isPresent() && m.appliesIn(c, part.getName())) {
-					double v = m.of(solution.device(part.getName()));
+				double v = m.judged(c, solution.device(part.getName()), averagePower, part.getName());
+				if (limit.isPresent() && !Double.isNaN(v)) {
 					if (v > limit.get().value()) {
 						over.add(new Overstress(part, m, v, limit.get()));
 					}

@@ -72,8 +72,10 @@ public final class Evaluator {
 					continue;
 				}
 				for (CaseOutcome o : outcomes) {
-					if (m.appliesIn(o.faultCase(), part.getName())) {
-						worst = Math.max(worst, m.of(((DcSolution) o.result()).device(part.getName())) / limit.get().value());
+					double v = m.judged(o.faultCase(), ((DcSolution) o.result()).device(part.getName()), o.averagePower(),
+							part.getName());
+					if (!Double.isNaN(v)) {
+						worst = Math.max(worst, v / limit.get().value());
 					}
 				}
 			}

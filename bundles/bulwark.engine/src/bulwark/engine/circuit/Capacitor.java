@@ -5,19 +5,36 @@ import bulwark.engine.mna.Stamp;
 import bulwark.engine.mna.TransientStep;
 
 /**
- * A capacitor: open in an operating point; in a transient, its companion model for the step h,
+ * A capacitor with its leakage (insulation resistance) across it: in an operating point only the leakage
+ * conducts; in a transient, its companion model for the step h,
  * i = geq·v − (geq·vₙ + iₙ) with geq = 2C/h by the trapezoidal rule, or i = (C/h)·(v − vₙ) by backward
  * Euler (Nagel, ERL memo M520, 1975, §3; any circuit-simulation text).
  */
 public final class Capacitor extends TwoTerminal {
 	private final double farads;
+	private final double leakageSiemens;
 
+	/** An ideal capacitor: no leakage, open at DC. */
 	public Capacitor(String name, int a, int b, double farads) {
+		this(name, a, b, farads, Double.POSITIVE_INFINITY);
+	}
+
+	/** @param leakageOhms the insulation resistance across the capacitor; infinite for none */
+	public Capacitor(String name, int a, int b, double farads, double leakageOhms) {
 		super(name, a, b);
 		if (!(farads > 0) || Double.isInfinite(farads)) {
 			throw new IllegalArgumentException(name + ": capacitance must be positive and finite");
 		}
+		if (!(leakageOhms > 0)) {
+			throw new IllegalArgumentException(name + ": leakage resistance must be positive");
+		}
 		this.farads = farads;
+		this.leakageSiemens = 1 / leakageOhms;
+	}
+
+	/** The insulation resistance across the capacitor, Ω (infinite for none). */
+	public double leakageOhms() {
+		return 1 / leakageSiemens;
 	}
 
 	public double farads() {
@@ -31,7 +48,7 @@ public final class Capacitor extends TwoTerminal {
 
 	@Override
 	public boolean conductsAtDc() {
-		return false;
+		return leakageSiemens > 0; // through its leakage only
 	}
 
 	@Override
@@ -43,14 +60,14 @@ public final class Capacitor extends TwoTerminal {
 	public void stamp(Stamp s) {
 		TransientStep step = s.transientStep();
 		if (step == null) {
-			s.conductance(a, b, 0); // keeps the entries in the pattern; open at DC
+			s.conductance(a, b, leakageSiemens); // keeps the entries in the pattern; only the leakage at DC
 			s.current(a, b, 0);
 			return;
 		}
 		double[] h = s.history();
 		double geq = (step.trapezoidal() ? 2 : 1) * farads / step.step();
 		double offset = step.trapezoidal() ? -(geq * h[0] + h[1]) : -geq * h[0];
-		s.conductance(a, b, geq);
+		s.conductance(a, b, geq + leakageSiemens);
 		s.current(a, b, offset);
 	}
 
@@ -74,7 +91,8 @@ public final class Capacitor extends TwoTerminal {
 	@Override
 	public double[] pinCurrents(SolutionView x) {
 		TransientStep step = x.transientStep();
-		double i = step == null ? 0 : current(x.voltage(a) - x.voltage(b), x.history(), step);
+		double v = x.voltage(a) - x.voltage(b);
+		double i = (step == null ? 0 : current(v, x.history(), step)) + v * leakageSiemens;
 		return new double[] { i, -i };
 	}
 }

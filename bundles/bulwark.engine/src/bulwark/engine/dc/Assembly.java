@@ -76,6 +76,23 @@ final class Assembly implements Stamp, SolutionView {
 		return this;
 	}
 
+	/** A copy of every device's values at the last accepted point, to continue a run from. */
+	double[][] copyHistories() {
+		double[][] copy = new double[histories.length][];
+		for (int i = 0; i < copy.length; i++) {
+			copy[i] = histories[i].clone();
+		}
+		return copy;
+	}
+
+	/** Puts back what {@link #copyHistories()} took, as the values at the point a run continues from. */
+	void restoreHistories(double[][] saved, double atTime) {
+		for (int i = 0; i < histories.length; i++) {
+			System.arraycopy(saved[i], 0, histories[i], 0, histories[i].length);
+		}
+		time = atTime;
+	}
+
 	/** Lets every device record its values at an accepted point (the start of a transient, or a time step). */
 	void acceptPoint(double[] solution, TransientStep acceptedStep) {
 		x = solution;

@@ -17,6 +17,8 @@ public record SolveFailure(Reason reason, String place, String message) implemen
 		NO_CONVERGENCE,
 		/** A transient could not go on: Newton failed even at the smallest time step allowed. */
 		TIMESTEP_TOO_SMALL,
+		/** Under a periodic source, the state still changed from one period to the next after the most allowed. */
+		NO_STEADY_STATE,
 		/** The circuit has no device at all. */
 		EMPTY_CIRCUIT
 	}

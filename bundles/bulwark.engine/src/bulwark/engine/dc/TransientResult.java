@@ -13,12 +13,20 @@ public final class TransientResult {
 	private final List<DcSolution> points;
 	private final SolveFailure failure;
 	private final int rejectedSteps;
+	/** Every device's history at the last point, so that a run can go on from it; null when it failed. */
+	final double[][] endState;
 
 	TransientResult(List<Double> times, List<DcSolution> points, SolveFailure failure, int rejectedSteps) {
+		this(times, points, failure, rejectedSteps, null);
+	}
+
+	TransientResult(List<Double> times, List<DcSolution> points, SolveFailure failure, int rejectedSteps,
+			double[][] endState) {
 		this.times = Collections.unmodifiableList(times);
 		this.points = Collections.unmodifiableList(points);
 		this.failure = failure;
 		this.rejectedSteps = rejectedSteps;
+		this.endState = endState;
 	}
 
 	public boolean completed() {

@@ -33,30 +33,70 @@ public final class TransientSolver {
 
 	/** Runs from 0 to {@code stop} seconds with steps no longer than {@code maxStep}. */
 	public TransientResult run(PreparedCircuit prepared, double stop, double maxStep) {
-		if (!(stop > 0 && maxStep > 0)) {
+		return run(prepared, stop, maxStep, Math.min(maxStep, stop) / 64);
+	}
+
+	/**
+	 * As {@link #run(PreparedCircuit, double, double)}, with the first step given: a source that jumps at
+	 * t = 0 (a switch closing) is seen at t = 0+ only as closely as the first step allows.
+	 */
+	public TransientResult run(PreparedCircuit prepared, double stop, double maxStep, double firstStep) {
+		if (!(stop > 0 && maxStep > 0 && firstStep > 0)) {
+			throw new IllegalArgumentException("stop time and steps must be positive");
+		}
+		DcResult op = solver.solve(prepared);
+		if (!(op instanceof DcSolution start)) {
+			return new TransientResult(new ArrayList<>(), new ArrayList<>(), (SolveFailure) op, 0);
+		}
+		return integrate(prepared, start, 0, null, stop, maxStep, firstStep);
+	}
+
+	/**
+	 * Runs on from the end of an earlier completed run of the same prepared circuit to {@code stop}, every
+	 * device's state (capacitor voltages, inductor currents, a protector's time over its trip current) carried
+	 * over; the first step is backward Euler, as after a discontinuity. Long runs go in pieces this way
+	 * without keeping every point.
+	 */
+	public TransientResult continueFrom(PreparedCircuit prepared, TransientResult previous, double stop,
+			double maxStep) {
+		if (!previous.completed() || previous.endState == null) {
+			throw new IllegalArgumentException("only a completed run can be continued");
+		}
+		double from = previous.times().get(previous.times().size() - 1);
+		if (!(stop > from && maxStep > 0)) {
+			throw new IllegalArgumentException("the run must end after it starts, with a positive largest step");
+		}
+		return integrate(prepared, previous.points().get(previous.points().size() - 1), from, previous.endState, stop,
+				maxStep, Math.min(maxStep, stop - from) / 64);
+	}
+
+	/** Steps from an accepted point: the operating point (history null) or the end of an earlier run. */
+	private TransientResult integrate(PreparedCircuit prepared, DcSolution start, double from, double[][] history,
+			double stop, double maxStep, double firstStep) {
+		if (!(stop > from && maxStep > 0)) {
 			throw new IllegalArgumentException("stop time and largest step must be positive");
 		}
 		List<Double> times = new ArrayList<>();
 		List<DcSolution> points = new ArrayList<>();
-		DcResult op = solver.solve(prepared);
-		if (!(op instanceof DcSolution start)) {
-			return new TransientResult(times, points, (SolveFailure) op, 0);
-		}
 		Layout layout = prepared.layout;
 		Assembly assembly = new Assembly(layout);
 		boolean nonlinear = layout.circuit.devices().stream().anyMatch(Device::nonlinear);
-		assembly.acceptPoint(start.unknowns, null);
-		times.add(0.0);
+		if (history == null) {
+			assembly.acceptPoint(start.unknowns, null);
+		} else {
+			assembly.restoreHistories(history, from);
+		}
+		times.add(from);
 		points.add(start);
 		double[][] recent = { start.unknowns, null, null };
 		double[][] integrated = { integrated(layout, assembly, start.unknowns), null, null };
-		double[] recentTimes = { 0, Double.NaN, Double.NaN };
-		double t = 0;
-		double h = Math.min(maxStep, stop) / 64;
+		double[] recentTimes = { from, Double.NaN, Double.NaN };
+		double t = from;
+		double h = firstStep;
 		double smallest = maxStep * SMALLEST_STEP_FRACTION;
 		boolean first = true;
 		int rejected = 0;
-		while (t < stop * (1 - 1e-12)) {
+		while (t < stop - 1e-12 * stop) {
 			h = Math.min(Math.min(h, maxStep), stop - t);
 			TransientStep step = new TransientStep(t + h, h, !first);
 			DcSolver.Attempt a = solver.newton(layout, assembly, recent[0], 1, 0, nonlinear, step);
@@ -98,7 +138,7 @@ public final class TransientSolver {
 			first = false;
 			h *= grow;
 		}
-		return new TransientResult(times, points, null, rejected);
+		return new TransientResult(times, points, null, rejected, assembly.copyHistories());
 	}
 
 	/** What every reactive device integrates, at a solution (NaN for the others). */

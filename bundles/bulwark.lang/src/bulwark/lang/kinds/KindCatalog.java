@@ -86,7 +86,8 @@ public final class KindCatalog {
 
 	private static final List<String> TWO = List.of("a", "b");
 	private static final KindSpec CAPACITOR = new KindSpec("capacitor", TWO,
-			List.of(new SettingSpec("value", Unit.FARAD, true, "capacitance")),
+			List.of(new SettingSpec("value", Unit.FARAD, true, "capacitance"),
+					new SettingSpec("leakage", Unit.OHM, false, "insulation resistance across it")),
 			List.of(new SettingSpec("voltage", Unit.VOLT, false, "rated voltage")));
 	private static final KindSpec INDUCTOR = new KindSpec("inductor", TWO,
 			List.of(new SettingSpec("value", Unit.HENRY, true, "inductance")),

@@ -1,0 +1,139 @@
+package bulwark.check.tests;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+import org.junit.jupiter.api.Test;
+
+import bulwark.check.DesignResult;
+import bulwark.check.Status;
+import bulwark.check.WorstStress;
+import bulwark.check.policy.DefaultPolicy;
+import bulwark.check.policy.ReviewPolicy;
+
+/**
+ * Mains applied as the sine it is: 230 V + 10 % (IEC 60038) is 253 V RMS, 357.8 V at the crest, at 50 Hz
+ * [published + closed form, docs/sources.md#mains-and-surges]. Each figure below is worked by hand beside it.
+ */
+class MainsWaveformTest {
+	private static final double RMS = 253;
+	private static final double PEAK = 253 * Math.sqrt(2);
+	private static final double OMEGA = 2 * Math.PI * 50;
+
+	/** Only 230 V mains across the terminals; nothing derated, so the figures are the solved ones. */
+	private static final ReviewPolicy MAINS_ONLY = new ReviewPolicy("230 V mains only",
+			List.of(new ReviewPolicy.MainsSystem(230, 10)), List.of(), List.of(), Map.of(),
+			DefaultPolicy.POLICY.minimumHysteresisVolts(), Optional.empty(), Map.of(), true, true, "uniform");
+
+	private static final String HEAD = """
+			design "mains across the terminals"
+			reference net gnd
+			net tip
+			net mid
+			terminal TIP at tip
+			terminal COM at gnd common
+			""";
+
+	private static WorstStress worst(DesignResult r, String part, String rating) {
+		return r.stresses().stream().filter(s -> s.part().equals(part) && s.rating().equals(rating)).findFirst()
+				.orElseThrow(() -> new AssertionError("no " + rating + " figure for " + part + ": " + r.stresses()));
+	}
+
+	@Test
+	void aResistorAcrossMainsDissipatesTheRmsSquaredOverR() {
+		DesignResult r = Fixtures.check(HEAD + """
+				resistor R1 (a: tip, b: gnd) { value 100 kΩ rated power 2 W rated voltage 500 V }
+				resistor R2 (a: mid, b: gnd) { value 1 kΩ rated power 250 mW }
+				""", MAINS_ONLY);
+		// P = V_rms²/R = 253²/100 kΩ = 0.64009 W; the mean of sin² over 72 equal phases is exactly ½
+		WorstStress power = worst(r, "R1", "power");
+		assertEquals(RMS * RMS / 100e3, power.value(), 1e-9);
+		assertEquals("average power over the cycle", power.what());
+		// its voltage rating sees a crest, 357.8 V, at 5 ms or 15 ms (90° or 270°) of the cycle
+		WorstStress voltage = worst(r, "R1", "voltage");
+		assertEquals(PEAK, voltage.value(), 1e-6);
+		assertTrue(voltage.caseName().matches(".*(COM \\+ to TIP −, at 5 ms|TIP \\+ to COM −, at 15 ms)"),
+				voltage.caseName());
+		assertNotEquals(Status.ERROR, r.status(), r.findings().toString());
+	}
+
+	@Test
+	void behindADiodeOnlyHalfTheCycleDissipates() {
+		DesignResult r = Fixtures.check(HEAD + """
+				diode D1 (anode: tip, cathode: mid) { rated reverse 1000 V }
+				resistor R1 (a: mid, b: gnd) { value 100 kΩ rated power 2 W rated voltage 500 V }
+				""", MAINS_ONLY);
+		// conducting half-cycles only, less the diode's drop Vd: P = (1/2πR)·∫₀^π (Vp·sin θ − Vd)² dθ
+		// = (Vp²/4 − 2·Vp·Vd/π + Vd²/2)/R; for Vd from 0.5 V to 0.8 V, 0.31891 W down to 0.31823 W
+		// (ideal diode: V_rms²/2R = 0.32005 W) [closed form, integral of (Vp·sin θ − Vd)² over a half-cycle]
+		double p = worst(r, "R1", "power").value();
+		assertTrue(p > 0.3182 && p < 0.3190, "average power behind the diode " + p);
+		// the diode blocks the crest of the other half-cycle
+		assertEquals(PEAK, worst(r, "D1", "reverse").value(), 1.0);
+	}
+
+	/** A capacitive dropper: 1 kΩ in series with 220 nF across the terminals. */
+	private static final String DROPPER = HEAD + """
+			resistor R1 (a: tip, b: mid) { value 1 kΩ rated power 2 W rated voltage 500 V }
+			capacitor C1 (a: mid, b: gnd) { value 220 nF rated voltage 630 V }
+			""";
+
+	@Test
+	void aSeriesRcCarriesTheCurrentItsImpedanceAllows() {
+		DesignResult r = Fixtures.check(DROPPER, MAINS_ONLY);
+		assertNotEquals(Status.ERROR, r.status(), r.findings().toString());
+		// |Z| = √(R² + (1/ωC)²) with 1/ωC = 14 469 Ω at 50 Hz: I_rms = 253/14 503.6 = 17.44 mA,
+		// P(R1) = I_rms²·R = 0.3043 W [closed form, steady-state phasors]; the default leakage (454 MΩ) is negligible
+		double reactance = 1 / (OMEGA * 220e-9);
+		double irms = RMS / Math.hypot(1e3, reactance);
+		assertEquals(irms * irms * 1e3, worst(r, "R1", "power").value(), 0.01 * irms * irms * 1e3);
+		// the capacitor's crest in steady state: I_peak/ωC = 356.9 V; the switch-on reaches no higher, as the
+		// circuit is critically far from ringing (first order)
+		assertEquals(irms * Math.sqrt(2) * reactance, worst(r, "C1", "voltage").value(), 0.01 * PEAK);
+	}
+
+	@Test
+	void switchedOnAtTheCrestTheResistorMeetsTheWholeCrest() {
+		DesignResult r = Fixtures.check(DROPPER, MAINS_ONLY);
+		// a discharged capacitor is a short at t = 0+: the resistor takes the whole 357.8 V then, against 24.7 V
+		// (I_peak·R) in steady state [closed form, RC step response]; the first solved step, 20 ns, sees
+		// e^(−h/RC) = e^(−20 ns/220 µs) of it, and the crest of cos falls by less than 1e-9 in that time
+		WorstStress voltage = worst(r, "R1", "voltage");
+		assertEquals(PEAK * Math.exp(-20e-9 / 220e-6), voltage.value(), 1e-3 * PEAK);
+		assertTrue(voltage.caseName().contains("switched on at the crest"), voltage.caseName());
+	}
+
+	@Test
+	void aNetHeldOnlyByCapacitorsIsChecked() {
+		// mid is reached only through C1 and C2: without their leakage it has no DC path and nothing could be
+		// solved; with it, the check runs. Steady state: equal capacitors share the voltage, 178.9 V each at
+		// the crest [closed form, capacitive divider]
+		DesignResult r = Fixtures.check(HEAD + """
+				capacitor C1 (a: tip, b: mid) { value 100 nF rated voltage 630 V }
+				capacitor C2 (a: mid, b: gnd) { value 100 nF rated voltage 630 V }
+				resistor R1 (a: tip, b: gnd) { value 1 MΩ rated power 1 W rated voltage 500 V }
+				""", MAINS_ONLY);
+		assertNotEquals(Status.ERROR, r.status(), r.findings().toString());
+		assertEquals(PEAK / 2, worst(r, "C2", "voltage").value(), 0.02 * PEAK);
+	}
+
+	@Test
+	void theQuasiStaticSweepAndTheTransientAgreeWithoutMemory() {
+		// the same resistive divider, once alone (swept phase by phase) and once with 1 pF across it (which
+		// sends it through the transient to its steady state): at 50 Hz 1 pF is 3.2 GΩ, so both must agree
+		String plain = HEAD + """
+				resistor R1 (a: tip, b: mid) { value 47 kΩ rated power 2 W rated voltage 500 V }
+				resistor R2 (a: mid, b: gnd) { value 10 kΩ rated power 2 W rated voltage 500 V }
+				diode D1 (anode: mid, cathode: gnd) { rated reverse 1000 V }
+				""";
+		String withMemory = plain + "capacitor C1 (a: tip, b: gnd) { value 1 pF rated voltage 1000 V }\n";
+		double swept = worst(Fixtures.check(plain, MAINS_ONLY), "R1", "power").value();
+		double integrated = worst(Fixtures.check(withMemory, MAINS_ONLY), "R1", "power").value();
+		assertEquals(swept, integrated, 0.005 * swept);
+	}
+}

@@ -1,0 +1,275 @@
+package bulwark.check.compile;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.TreeSet;
+
+import bulwark.check.rules.Figures;
+import bulwark.check.stress.Measure;
+import bulwark.check.stress.StressCatalog;
+import bulwark.engine.circuit.Capacitor;
+import bulwark.engine.circuit.Device;
+import bulwark.engine.circuit.Inductor;
+import bulwark.engine.circuit.Fuse;
+import bulwark.engine.circuit.VoltageSource;
+import bulwark.engine.dc.DcResult;
+import bulwark.engine.dc.DcSolution;
+import bulwark.engine.dc.DcSolver;
+import bulwark.engine.dc.PeriodicSteadyState;
+import bulwark.engine.dc.PreparedCircuit;
+import bulwark.engine.dc.SolveFailure;
+import bulwark.engine.dc.TransientResult;
+import bulwark.engine.dc.TransientSolver;
+import bulwark.engine.source.Sine;
+import bulwark.engine.source.SwitchedSine;
+import bulwark.lang.design.Part;
+
+/**
+ * Solves a mains case as the sine it is, across its pair of terminals, over the cycle.
+ * <ul>
+ * <li>A circuit with no capacitor or inductor has no memory of the cycle, so a quasi-static sweep is exact:
+ * one operating point every {@link #PHASE_STEP_DEGREES}°, each continued from the last (the crests at 90°
+ * and 270° are among them). A protector's trip delay is not memory of the cycle: against a 50 Hz sine
+ * it is tripped within a microsecond of each rise; what passes during the delay of a fast rise is what the
+ * policy's surge cases examine.</li>
+ * <li>A circuit with capacitors or inductors is switched on at each crest from rest — where capacitors draw
+ * their inrush — and run for {@link #SWITCH_ON_PERIODS} periods; then, from the positive switch-on, whole
+ * periods are integrated until the state repeats ({@link PeriodicSteadyState}), at most
+ * {@link #MAX_PERIODS}. A case that does not settle is a failure with its reason, never a pass.</li>
+ * </ul>
+ * As for a surge, the instants that matter become outcomes of their own: for every part and every stress,
+ * the instant where it peaks, named with the terminal positive then. A power rating is thermal: it is judged
+ * on each part's power averaged over the steady cycle, carried by an outcome named for the cycle as a whole. A fuse whose RMS
+ * current over the steady cycle exceeds its rating (fuse ratings are RMS) opens, and the case is solved again
+ * with it open.
+ */
+final class MainsRunner {
+	/** Spacing of the quasi-static sweep: 72 points a cycle, crests included [closed form]. */
+	static final int PHASE_STEP_DEGREES = 5;
+	/** Largest step of a transient, as a fraction of the period; the error control shortens it. */
+	static final int STEPS_PER_PERIOD = 100;
+	/**
+	 * First step of a switch-on, as a fraction of the period: 20 ns at 50 Hz, so the instant after the switch
+	 * closes is seen within e^(−h/RC) of itself for any RC above a few microseconds.
+	 */
+	static final double FIRST_STEP = 1e-6;
+	/** Periods of the switch-on run: the inrush and its first recovery. */
+	static final int SWITCH_ON_PERIODS = 2;
+	/** Periods integrated at most after the switch-on to reach the steady state. */
+	static final int MAX_PERIODS = 200;
+
+	private MainsRunner() {
+	}
+
+	/** The waveform of a mains case's source: its amplitude and frequency. */
+	static Sine sine(FaultCase c) {
+		return (Sine) ((VoltageSource) c.added().get(0)).waveform();
+	}
+
+	static List<CaseOutcome> run(CompiledDesign design, FaultCase c, PreparedCircuit circuit, DcSolver solver) {
+		Map<String, Device> opened = new LinkedHashMap<>();
+		while (true) {
+			FaultCase named = opened.isEmpty() ? c
+					: new FaultCase(c.name() + ", " + String.join(", ", opened.keySet()) + " open", c.kind(), c.added(),
+							merged(c.replaced(), opened), c.from(), c.to());
+			boolean reactive = circuit.circuit().devices().stream()
+					.anyMatch(d -> d instanceof Capacitor || d instanceof Inductor);
+			Run run = reactive ? transientRun(design, named, circuit, solver) : quasiStatic(design, named, circuit, solver);
+			if (run.failed()) {
+				return run.outcomes;
+			}
+			boolean more = false;
+			for (Device d : circuit.circuit().devices()) {
+				if (d instanceof Fuse f && !opened.containsKey(f.name()) && rms(run.steady, f.name()) > f.ratedAmps()) {
+					Fuse open = new Fuse(f.name(), f.pins()[0], f.pins()[1],
+							f.resettable() ? CaseRunner.TRIPPED_RESETTABLE_OHMS : CaseRunner.OPEN_FUSE_OHMS, f.ratedAmps(),
+							f.resettable());
+					opened.put(f.name(), open);
+					circuit = circuit.with(f.name(), open);
+					more = true;
+				}
+			}
+			if (!more) {
+				return run.outcomes;
+			}
+		}
+	}
+
+	/** The outcomes of one waveform run and the steady cycle they came from (null when it failed). */
+	private record Run(List<CaseOutcome> outcomes, Cycle steady) {
+		boolean failed() {
+			return steady == null;
+		}
+	}
+
+	/**
+	 * Solved points over a stretch of the waveform with their times; {@code evenlySpaced} for a sweep's phases,
+	 * which cover one period and are averaged by their mean.
+	 */
+	private record Cycle(List<Double> times, List<DcSolution> points, double start, boolean evenlySpaced) {
+	}
+
+	private static Run quasiStatic(CompiledDesign design, FaultCase c, PreparedCircuit circuit, DcSolver solver) {
+		Sine sine = sine(c);
+		VoltageSource source = (VoltageSource) c.added().get(0);
+		List<Double> times = new ArrayList<>();
+		List<DcSolution> points = new ArrayList<>();
+		DcSolution previous = null;
+		double period = 1 / sine.hertz();
+		for (int degrees = 0; degrees < 360; degrees += PHASE_STEP_DEGREES) {
+			double t = period * degrees / 360.0;
+			double volts = sine.amplitude() * Math.sin(Math.toRadians(degrees));
+			PreparedCircuit at = circuit.with(source.name(),
+					VoltageSource.ideal(source.name(), source.pins()[0], source.pins()[1], volts));
+			DcResult r = previous == null ? solver.solve(at) : solver.solve(at, previous);
+			if (!(r instanceof DcSolution s)) {
+				return failed(c, String.format(Locale.ROOT, "%d°", degrees), (SolveFailure) r);
+			}
+			times.add(t);
+			points.add(s);
+			previous = s;
+		}
+		Cycle cycle = new Cycle(times, points, 0, true);
+		return new Run(instants(design, c, "", cycle, source, averagePower(design, cycle)), cycle);
+	}
+
+	private static Run transientRun(CompiledDesign design, FaultCase c, PreparedCircuit circuit, DcSolver solver) {
+		Sine sine = sine(c);
+		VoltageSource source = (VoltageSource) c.added().get(0);
+		double period = 1 / sine.hertz();
+		double maxStep = period / STEPS_PER_PERIOD;
+		TransientSolver transients = new TransientSolver(solver);
+		List<CaseOutcome> outcomes = new ArrayList<>();
+		Cycle steady = null;
+		for (double sign : new double[] { 1, -1 }) {
+			VoltageSource switched = new VoltageSource(source.name(), source.pins()[0], source.pins()[1],
+					new SwitchedSine(sign * sine.amplitude(), sine.hertz()), 0);
+			PreparedCircuit on = circuit.with(source.name(), switched);
+			TransientResult t = transients.run(on, SWITCH_ON_PERIODS * period, maxStep, period * FIRST_STEP);
+			String stage = "switched on at the crest";
+			if (!t.completed()) {
+				return failed(c, stage, t.failure());
+			}
+			Cycle first = new Cycle(t.times(), t.points(), 0, false);
+			outcomes.addAll(instants(design, c, ", " + stage, first, switched, Map.of()));
+			if (sign > 0) {
+				PeriodicSteadyState.Result r = new PeriodicSteadyState(transients).run(on, t, period, maxStep,
+						MAX_PERIODS);
+				if (!r.settled()) {
+					return failed(c, "steady state", r.failure());
+				}
+				TransientResult p = r.period();
+				steady = new Cycle(p.times(), p.points(), p.times().get(0), false);
+				String settled = String.format(Locale.ROOT, ", steady state after %d period(s)", r.periods());
+				outcomes.addAll(0, instants(design, c, settled, steady, switched, averagePower(design, steady)));
+			}
+		}
+		return new Run(outcomes, steady);
+	}
+
+	/** The case named with where it stopped, and why. */
+	private static Run failed(FaultCase c, String where, SolveFailure failure) {
+		return new Run(List.of(new CaseOutcome(new FaultCase(c.name() + ", " + where, c.kind(), c.added(),
+				c.replaced(), c.from(), c.to()), failure)), null);
+	}
+
+	/**
+	 * One outcome per instant where some stress of some part peaks over the cycle, and the source's crest;
+	 * then, when averages are given, one outcome for the cycle as a whole, named without an instant, which
+	 * carries them (its solution and polarity are the crest's, so it adds no instantaneous figure of its own;
+	 * a path to a part whose average power is over its limit is traced at the crest).
+	 */
+	private static List<CaseOutcome> instants(CompiledDesign design, FaultCase c, String stage, Cycle cycle,
+			VoltageSource source, Map<String, Double> averages) {
+		TreeSet<Integer> chosen = new TreeSet<>();
+		int crest = 0;
+		for (int i = 1; i < cycle.points.size(); i++) {
+			if (Math.abs(sourceVolts(cycle, source, i)) > Math.abs(sourceVolts(cycle, source, crest))) {
+				crest = i;
+			}
+		}
+		chosen.add(crest);
+		for (Part part : design.parts().values()) {
+			for (Measure m : StressCatalog.of(part.getKind())) {
+				if (!m.appliesIn(c, part.getName())) {
+					continue;
+				}
+				int best = 0;
+				for (int i = 1; i < cycle.points.size(); i++) {
+					if (m.of(cycle.points.get(i).device(part.getName())) > m
+							.of(cycle.points.get(best).device(part.getName()))) {
+						best = i;
+					}
+				}
+				chosen.add(best);
+			}
+		}
+		FaultCase staged = new FaultCase(c.name() + stage, c.kind(), c.added(), c.replaced(), c.from(), c.to());
+		List<CaseOutcome> outcomes = new ArrayList<>();
+		for (int i : chosen) {
+			boolean firstPositive = sourceVolts(cycle, source, i) >= 0;
+			String instant = Figures.engineering(cycle.times.get(i) - cycle.start, "s");
+			FaultCase at = firstPositive ? staged.at(instant, c.from(), c.to()) : staged.at(instant, c.to(), c.from());
+			outcomes.add(new CaseOutcome(at, cycle.points.get(i)));
+		}
+		if (!averages.isEmpty()) {
+			boolean firstPositive = sourceVolts(cycle, source, crest) >= 0;
+			FaultCase whole = new FaultCase(staged.name(), c.kind(), c.added(), c.replaced(),
+					firstPositive ? c.from() : c.to(), firstPositive ? c.to() : c.from());
+			outcomes.add(new CaseOutcome(whole, cycle.points.get(crest), Map.of(), averages));
+		}
+		return outcomes;
+	}
+
+	/** The source's EMF at the i-th point, positive when the case's first terminal is positive. */
+	private static double sourceVolts(Cycle cycle, VoltageSource source, int i) {
+		return cycle.points.get(i).device(source.name()).pinVoltages()[0]
+				- cycle.points.get(i).device(source.name()).pinVoltages()[1];
+	}
+
+	/**
+	 * Each part's power averaged over the cycle: the mean of equally spaced phases (exact for the trigonometric
+	 * content a sweep resolves), or the trapezoidal rule over a transient's accepted points, over the period.
+	 */
+	private static Map<String, Double> averagePower(CompiledDesign design, Cycle cycle) {
+		Map<String, Double> average = new LinkedHashMap<>();
+		for (Part part : design.parts().values()) {
+			average.put(part.getName(), mean(cycle, p -> p.device(part.getName()).power()));
+		}
+		return average;
+	}
+
+	/** RMS of a device's current over the cycle (its first pin's). */
+	private static double rms(Cycle cycle, String device) {
+		return Math.sqrt(mean(cycle, p -> {
+			double i = p.device(device).current();
+			return i * i;
+		}));
+	}
+
+	private static double mean(Cycle cycle, java.util.function.ToDoubleFunction<DcSolution> f) {
+		int n = cycle.points.size();
+		if (cycle.evenlySpaced) {
+			double sum = 0;
+			for (DcSolution p : cycle.points) {
+				sum += f.applyAsDouble(p);
+			}
+			return sum / n;
+		}
+		double integral = 0;
+		for (int i = 1; i < n; i++) {
+			integral += 0.5 * (f.applyAsDouble(cycle.points.get(i - 1)) + f.applyAsDouble(cycle.points.get(i)))
+					* (cycle.times.get(i) - cycle.times.get(i - 1));
+		}
+		return integral / (cycle.times.get(n - 1) - cycle.times.get(0));
+	}
+
+	private static Map<String, Device> merged(Map<String, Device> a, Map<String, Device> b) {
+		Map<String, Device> m = new LinkedHashMap<>(a);
+		m.putAll(b);
+		return m;
+	}
+}
