@@ -29,6 +29,12 @@ public final class Comparator extends MultiTerminal {
 		return new String[] { "in_plus", "in_minus", "out", "supply_plus", "supply_minus" };
 	}
 
+	/** The output and the supplies are joined by the output stage; an input only by its clamps' leakage. */
+	@Override
+	public int[][] firmlyJoinedPins() {
+		return new int[][] { { OUT, VP, VN } };
+	}
+
 	/** Half-width of the output's linear region, in units of the tanh argument (tanh(1) = 0.76). */
 	private static final double LINEAR_EDGE = 1;
 

@@ -49,6 +49,22 @@ public interface Device {
 		return true;
 	}
 
+	/**
+	 * Groups of pin indices (into {@link #pins()}) that the device joins at DC by more than a junction's
+	 * leakage; a pin in no group is held only by leakage (a CMOS comparator's input). By default a device
+	 * that conducts at DC joins all its pins.
+	 */
+	default int[][] firmlyJoinedPins() {
+		if (!conductsAtDc()) {
+			return new int[0][];
+		}
+		int[] all = new int[pins().length];
+		for (int i = 0; i < all.length; i++) {
+			all[i] = i;
+		}
+		return new int[][] { all };
+	}
+
 	/** Number of doubles a reactive device keeps from one accepted time point to the next. */
 	default int historySize() {
 		return 0;

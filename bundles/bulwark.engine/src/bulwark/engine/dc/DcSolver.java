@@ -2,6 +2,7 @@ package bulwark.engine.dc;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
+import java.util.Optional;
 
 import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Device;
@@ -81,7 +82,7 @@ public final class DcSolver {
 			return solution(layout, assembly, plain.x, plain.iterations, Strategy.NEWTON);
 		}
 		if (plain.singularAt >= 0 && !nonlinear) {
-			return singular(layout, plain.singularAt);
+			return TopologyCheck.heldOnlyByLeakage(circuit).orElse(singular(layout, plain.singularAt));
 		}
 		int spent = plain.iterations;
 
@@ -127,6 +128,10 @@ public final class DcSolver {
 		}
 		if (scale >= 1) {
 			return solution(layout, assembly, x, spent, Strategy.SOURCE_STEPPING);
+		}
+		Optional<SolveFailure> leakageOnly = TopologyCheck.heldOnlyByLeakage(circuit);
+		if (leakageOnly.isPresent()) {
+			return leakageOnly.get();
 		}
 		if (plain.singularAt >= 0) {
 			return singular(layout, plain.singularAt);
