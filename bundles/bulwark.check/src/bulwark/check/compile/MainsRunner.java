@@ -47,8 +47,12 @@ import bulwark.lang.design.Part;
  * with it open.
  */
 final class MainsRunner {
-	/** Spacing of the quasi-static sweep: 72 points a cycle, crests included [closed form]. */
-	static final int PHASE_STEP_DEGREES = 5;
+	/**
+	 * Spacing of the quasi-static sweep: 36 points a cycle, crests and zero crossings included; equally spaced
+	 * samples average sin² exactly [closed form], and a stress that peaks between two of them is within
+	 * 1 − cos 5° = 0.4 % of its peak there.
+	 */
+	static final int PHASE_STEP_DEGREES = 10;
 	/** Largest step of a transient, as a fraction of the period; the error control shortens it. */
 	static final int STEPS_PER_PERIOD = 100;
 	/**
@@ -198,9 +202,11 @@ final class MainsRunner {
 					continue;
 				}
 				int best = 0;
-				for (int i = 1; i < cycle.points.size(); i++) {
-					if (m.of(cycle.points.get(i).device(part.getName())) > m
-							.of(cycle.points.get(best).device(part.getName()))) {
+				double bestValue = Double.NEGATIVE_INFINITY;
+				for (int i = 0; i < cycle.points.size(); i++) {
+					double v = m.of(cycle.points.get(i).device(part.getName()));
+					if (v > bestValue) {
+						bestValue = v;
 						best = i;
 					}
 				}
@@ -235,34 +241,49 @@ final class MainsRunner {
 	 * content a sweep resolves), or the trapezoidal rule over a transient's accepted points, over the period.
 	 */
 	private static Map<String, Double> averagePower(CompiledDesign design, Cycle cycle) {
+		// one pass over each point's devices, rather than a look-up per part and point
+		int n = cycle.points.size();
+		Map<String, double[]> powers = new LinkedHashMap<>();
+		for (String part : design.parts().keySet()) {
+			powers.put(part, new double[n]);
+		}
+		for (int i = 0; i < n; i++) {
+			for (var d : cycle.points.get(i).devices().entrySet()) {
+				double[] p = powers.get(d.getKey());
+				if (p != null) {
+					p[i] = d.getValue().power();
+				}
+			}
+		}
 		Map<String, Double> average = new LinkedHashMap<>();
-		for (Part part : design.parts().values()) {
-			average.put(part.getName(), mean(cycle, p -> p.device(part.getName()).power()));
+		for (var e : powers.entrySet()) {
+			double[] p = e.getValue();
+			average.put(e.getKey(), mean(cycle, i -> p[i]));
 		}
 		return average;
 	}
 
 	/** RMS of a device's current over the cycle (its first pin's). */
 	private static double rms(Cycle cycle, String device) {
-		return Math.sqrt(mean(cycle, p -> {
-			double i = p.device(device).current();
+		return Math.sqrt(mean(cycle, k -> {
+			double i = cycle.points.get(k).device(device).current();
 			return i * i;
 		}));
 	}
 
-	private static double mean(Cycle cycle, java.util.function.ToDoubleFunction<DcSolution> f) {
+	/** The mean over the cycle of a figure given by point index. */
+	private static double mean(Cycle cycle, java.util.function.IntToDoubleFunction f) {
 		int n = cycle.points.size();
 		if (cycle.evenlySpaced) {
 			double sum = 0;
-			for (DcSolution p : cycle.points) {
-				sum += f.applyAsDouble(p);
+			for (int i = 0; i < n; i++) {
+				sum += f.applyAsDouble(i);
 			}
 			return sum / n;
 		}
 		double integral = 0;
 		for (int i = 1; i < n; i++) {
-			integral += 0.5 * (f.applyAsDouble(cycle.points.get(i - 1)) + f.applyAsDouble(cycle.points.get(i)))
-					* (cycle.times.get(i) - cycle.times.get(i - 1));
+			integral += 0.5 * (f.applyAsDouble(i - 1) + f.applyAsDouble(i)) * (cycle.times.get(i) - cycle.times.get(i - 1));
 		}
 		return integral / (cycle.times.get(n - 1) - cycle.times.get(0));
 	}

@@ -39,7 +39,29 @@ public final class Limits {
 	private record Rated(double value, String basis) {
 	}
 
+	/**
+	 * A part's ratings as read once: every case of a check asks for them again, and reading one parses its
+	 * quantity. Kept on the part itself, which lives as long as one check of its design.
+	 */
+	private static final class RatedCache extends org.eclipse.emf.common.notify.impl.AdapterImpl {
+		final java.util.Map<String, Optional<Rated>> byRating = new java.util.HashMap<>();
+
+		@Override
+		public boolean isAdapterForType(Object type) {
+			return type == RatedCache.class;
+		}
+	}
+
 	private static Optional<Rated> rated(Part part, Measure measure) {
+		RatedCache cache = (RatedCache) org.eclipse.emf.ecore.util.EcoreUtil.getAdapter(part.eAdapters(), RatedCache.class);
+		if (cache == null) {
+			cache = new RatedCache();
+			part.eAdapters().add(cache);
+		}
+		return cache.byRating.computeIfAbsent(measure.rating(), r -> read(part, measure));
+	}
+
+	private static Optional<Rated> read(Part part, Measure measure) {
 		String rating = measure.rating();
 		if (part.getKind() == PartKind.RESISTOR && rating.equals("voltage")) {
 			return ResistorRatings.limitingElementVoltage(part).map(v -> new Rated(v.volts(), v.basis()));
