@@ -50,7 +50,7 @@ class MainsWaveformTest {
 				resistor R1 (a: tip, b: gnd) { value 100 kΩ rated power 2 W rated voltage 500 V }
 				resistor R2 (a: mid, b: gnd) { value 1 kΩ rated power 250 mW }
 				""", MAINS_ONLY);
-		// P = V_rms²/R = 253²/100 kΩ = 0.64009 W; the mean of sin² over 72 equal phases is exactly ½
+		// P = V_rms²/R = 253²/100 kΩ = 0.64009 W; the mean of sin² over 36 equal phases is exactly ½
 		WorstStress power = worst(r, "R1", "power");
 		assertEquals(RMS * RMS / 100e3, power.value(), 1e-9);
 		assertEquals("average power over the cycle", power.what());

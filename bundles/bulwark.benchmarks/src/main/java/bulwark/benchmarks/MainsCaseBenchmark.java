@@ -27,7 +27,7 @@ import bulwark.lang.install.Installation;
 
 /**
  * The cost of one mains case by each method: a four-part design across one pair of terminals under 230 V
- * mains only, once resistive (the quasi-static sweep, 72 operating points) and once a capacitive dropper
+ * mains only, once resistive (the quasi-static sweep, 36 operating points) and once a capacitive dropper
  * (two switch-ons at the crest and the periods to the steady state). Each includes the design's open and
  * shorted cases and its rules, which a resistive-only run of the same size shows.
  */
