@@ -21,4 +21,18 @@ class FiguresTest {
 		assertEquals("5.14e-19 W", Figures.engineering(5.14e-19, "W"));
 		assertEquals("3.58 GΩ", Figures.engineering(3.58e9, "Ω"));
 	}
+
+	@Test
+	void aFigureOverItsLimitNeverReadsEqualToIt() {
+		// 10.036 mA against 10 mA: three figures would write both as "10 mA" and the share as "100 %"
+		assertEquals("10.04 mA", Figures.over(10.036e-3, 10e-3, "A"));
+		assertEquals("100.4", Figures.percentOf(10.036e-3, 10e-3));
+		// closer still, more figures; far over, the usual three
+		assertEquals("10.0004 mA", Figures.over(10.0004e-3, 10e-3, "A"));
+		assertEquals("100.004", Figures.percentOf(10.0004e-3, 10e-3));
+		assertEquals("346 mW", Figures.over(0.3456, 0.15, "W"));
+		assertEquals("230", Figures.percentOf(0.3456, 0.15));
+		// under the limit it reads under: 99.96 % is not "100"
+		assertEquals("99.96", Figures.percentOf(0.9996, 1));
+	}
 }

@@ -136,4 +136,27 @@ class MainsWaveformTest {
 		double integrated = worst(Fixtures.check(withMemory, MAINS_ONLY), "R1", "power").value();
 		assertEquals(swept, integrated, 0.005 * swept);
 	}
+
+	@Test
+	void aDesignerCaseMayApplyASine() {
+		// the designer's own 120 V at 60 Hz behind 1 kΩ, with no mains in the policy: R1 (10 kΩ) takes
+		// 10/11 of it, (120·10/11)²/10 kΩ = 1.19 W on average, and 120·√2·10/11 = 154.3 V at the crest
+		// [closed form, divider and mean of sin²]
+		String design = HEAD + """
+				resistor R1 (a: tip, b: gnd) { value 10 kΩ rated power 2 W rated voltage 500 V }
+				resistor R2 (a: mid, b: gnd) { value 1 kΩ rated power 250 mW }
+				case "bench transformer" { apply 120 V at 60 Hz behind 1 kΩ from TIP to COM }
+				""";
+		DesignResult r = Fixtures.check(design);
+		double share = 120.0 * 10 / 11;
+		WorstStress power = worst(r, "R1", "power");
+		assertEquals(share * share / 10e3, power.value(), 1e-6);
+		assertEquals("average power over the cycle", power.what());
+		assertEquals("bench transformer", power.caseName());
+		assertEquals(share * Math.sqrt(2), worst(r, "R1", "voltage").value(), 1e-6);
+		// a frequency in the wrong unit is refused where it is written
+		DesignResult wrong = Fixtures.checkAllowingTrouble(Fixtures.replaced(design, "at 60 Hz", "at 60 V"));
+		assertTrue(wrong.findings().stream().anyMatch(f -> f.message().contains("a sine's frequency")),
+				wrong.findings().toString());
+	}
 }

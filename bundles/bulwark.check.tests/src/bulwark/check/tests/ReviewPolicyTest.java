@@ -97,6 +97,24 @@ class ReviewPolicyTest {
 	}
 
 	@Test
+	void aMainsSystemMayNameItsFrequency() {
+		ReviewPolicy p = Fixtures.policy("""
+				policy "export"
+				  mains 230 V ± 10 % 60 Hz
+				  mains 120 V ± 10 %
+				""");
+		assertEquals(60, p.mains().get(0).hertz(), 0);
+		assertEquals(60, p.mains().get(1).hertz(), 0); // unnamed: the frequency of 120 V systems (IEC 60038)
+		DesignResult r = Fixtures.check(ACROSS, p);
+		assertTrue(r.cases().stream().anyMatch(c -> c.name().startsWith("230 V 60 Hz mains (358 V peak)")),
+				r.cases().toString());
+		PolicyFiles.Resolution wrong = new PolicyFiles(Fixtures.loader()).parse("policy \"x\"\n  mains 230 V 50 V\n",
+				"wrong.bulwark-policy");
+		assertTrue(wrong.problems().toString().contains("the mains frequency takes a frequency (Hz), not a voltage"),
+				wrong.problems().toString());
+	}
+
+	@Test
 	void everyPairOfTerminalsGetsEveryMainsSystemOverItsCycle() {
 		DesignResult r = Fixtures.checkUnderDefault(ACROSS);
 		List<String> names = r.cases().stream().map(CaseResult::name).toList();

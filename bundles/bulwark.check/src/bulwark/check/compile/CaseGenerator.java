@@ -50,7 +50,11 @@ public final class CaseGenerator {
 		}
 		for (Member m : design.design().getMembers()) {
 			if (m instanceof Case c) {
-				cases.add(new FaultCase(c.getName(), FaultCase.DESIGNER, devices(design.circuit(), c)));
+				Apply sine = c.getActions().stream().filter(a -> a instanceof Apply ap && ap.getFrequency() != null)
+						.map(a -> (Apply) a).findFirst().orElse(null);
+				cases.add(sine == null ? new FaultCase(c.getName(), FaultCase.DESIGNER, devices(design.circuit(), c))
+						: new FaultCase(c.getName(), FaultCase.DESIGNER_SINE, devices(design.circuit(), c), Map.of(),
+								sine.getFrom().getName(), sine.getTo().getName()));
 			}
 		}
 		for (int i = 0; i < terminals.size(); i++) {
@@ -162,7 +166,13 @@ public final class CaseGenerator {
 			String name = "case " + c.getName() + " #" + ++k;
 			int from = circuit.netIndex(action.getFrom().getNet().getName());
 			int to = circuit.netIndex(action.getTo().getNet().getName());
-			if (action instanceof Apply a) {
+			if (action instanceof Apply a && a.getFrequency() != null) {
+				// the RMS value of a sine, its amplitude √2 times that
+				double ohms = a.getResistance() == null ? 0 : Quantities.si(a.getResistance()).orElseThrow();
+				double amplitude = Quantities.si(a.getValue()).orElseThrow() * Math.sqrt(2);
+				added.add(new VoltageSource(name, from, to,
+						new Sine(0, amplitude, Quantities.si(a.getFrequency()).orElseThrow(), 0), ohms));
+			} else if (action instanceof Apply a) {
 				double ohms = a.getResistance() == null ? 0 : Quantities.si(a.getResistance()).orElseThrow();
 				added.add(new VoltageSource(name, from, to, Quantities.si(a.getValue()).orElseThrow(), ohms));
 			} else if (action instanceof Connect cn) {

@@ -22,6 +22,8 @@ public record FaultCase(String name, String kind, List<Device> added, Map<String
 	 * instants of peak stress, power as the average over the cycle (see MainsRunner).
 	 */
 	public static final String MAINS = "mains";
+	/** A designer's case with a sine among its actions, solved over its cycle as mains is. */
+	public static final String DESIGNER_SINE = "designer sine";
 
 	public FaultCase {
 		added = List.copyOf(added);
@@ -41,8 +43,9 @@ public record FaultCase(String name, String kind, List<Device> added, Map<String
 		return ABUSE.equals(kind) || SURGE.equals(kind) || MAINS.equals(kind);
 	}
 
+	/** Solved over a sine's cycle: mains, or a designer's case with a sine (see MainsRunner). */
 	public boolean isMains() {
-		return MAINS.equals(kind);
+		return MAINS.equals(kind) || DESIGNER_SINE.equals(kind);
 	}
 
 	public boolean isSurge() {

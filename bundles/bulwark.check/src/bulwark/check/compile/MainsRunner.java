@@ -68,9 +68,19 @@ final class MainsRunner {
 	private MainsRunner() {
 	}
 
+	/** The source of the case that carries its sine. */
+	static VoltageSource source(FaultCase c) {
+		for (Device d : c.added()) {
+			if (d instanceof VoltageSource v && v.waveform() instanceof Sine) {
+				return v;
+			}
+		}
+		throw new IllegalArgumentException("case '" + c.name() + "' has no sine to solve over");
+	}
+
 	/** The waveform of a mains case's source: its amplitude and frequency. */
 	static Sine sine(FaultCase c) {
-		return (Sine) ((VoltageSource) c.added().get(0)).waveform();
+		return (Sine) source(c).waveform();
 	}
 
 	static List<CaseOutcome> run(CompiledDesign design, FaultCase c, PreparedCircuit circuit, DcSolver solver) {
@@ -118,7 +128,7 @@ final class MainsRunner {
 
 	private static Run quasiStatic(CompiledDesign design, FaultCase c, PreparedCircuit circuit, DcSolver solver) {
 		Sine sine = sine(c);
-		VoltageSource source = (VoltageSource) c.added().get(0);
+		VoltageSource source = source(c);
 		List<Double> times = new ArrayList<>();
 		List<DcSolution> points = new ArrayList<>();
 		DcSolution previous = null;
@@ -127,7 +137,7 @@ final class MainsRunner {
 			double t = period * degrees / 360.0;
 			double volts = sine.amplitude() * Math.sin(Math.toRadians(degrees));
 			PreparedCircuit at = circuit.with(source.name(),
-					VoltageSource.ideal(source.name(), source.pins()[0], source.pins()[1], volts));
+					new VoltageSource(source.name(), source.pins()[0], source.pins()[1], volts, source.seriesOhms()));
 			DcResult r = previous == null ? solver.solve(at) : solver.solve(at, previous);
 			if (!(r instanceof DcSolution s)) {
 				return failed(c, String.format(Locale.ROOT, "%d°", degrees), (SolveFailure) r);
@@ -142,7 +152,7 @@ final class MainsRunner {
 
 	private static Run transientRun(CompiledDesign design, FaultCase c, PreparedCircuit circuit, DcSolver solver) {
 		Sine sine = sine(c);
-		VoltageSource source = (VoltageSource) c.added().get(0);
+		VoltageSource source = source(c);
 		double period = 1 / sine.hertz();
 		double maxStep = period / STEPS_PER_PERIOD;
 		TransientSolver transients = new TransientSolver(solver);
@@ -150,7 +160,7 @@ final class MainsRunner {
 		Cycle steady = null;
 		for (double sign : new double[] { 1, -1 }) {
 			VoltageSource switched = new VoltageSource(source.name(), source.pins()[0], source.pins()[1],
-					new SwitchedSine(sign * sine.amplitude(), sine.hertz()), 0);
+					new SwitchedSine(sign * sine.amplitude(), sine.hertz()), source.seriesOhms());
 			PreparedCircuit on = circuit.with(source.name(), switched);
 			TransientResult t = transients.run(on, SWITCH_ON_PERIODS * period, maxStep, period * FIRST_STEP);
 			String stage = "switched on at the crest";

@@ -60,7 +60,9 @@ public final class PolicyCompiler {
 				noMains = true;
 			} else if (e instanceof MainsSystem m) {
 				double tolerance = m.getTolerance() == null ? 0 : Double.parseDouble(m.getTolerance().getPercent());
-				mains.add(new ReviewPolicy.MainsSystem(si(m.getNominal()), tolerance));
+				double nominal = si(m.getNominal());
+				mains.add(m.getFrequency() == null ? new ReviewPolicy.MainsSystem(nominal, tolerance)
+						: new ReviewPolicy.MainsSystem(nominal, tolerance, si(m.getFrequency())));
 			} else if (e instanceof DcLevel l) {
 				levels.add(si(l.getValue()));
 			} else if (e instanceof Surge s) {

@@ -26,10 +26,15 @@ public record ReviewPolicy(String title, List<MainsSystem> mains, List<Double> l
 	}
 
 	/**
-	 * A mains system: its nominal RMS voltage and supply tolerance. It is applied as a sine at its highest
-	 * amplitude, nominal × (1 + tolerance) × √2, at the frequency of its system.
+	 * A mains system: its nominal RMS voltage, supply tolerance and frequency. It is applied as a sine at its
+	 * highest amplitude, nominal × (1 + tolerance) × √2.
 	 */
-	public record MainsSystem(double nominalVolts, double tolerancePercent) {
+	public record MainsSystem(double nominalVolts, double tolerancePercent, double hertz) {
+		/** A system at the frequency of systems of its voltage. */
+		public MainsSystem(double nominalVolts, double tolerancePercent) {
+			this(nominalVolts, tolerancePercent, frequencyOf(nominalVolts));
+		}
+
 		public double peakVolts() {
 			return nominalVolts * (1 + tolerancePercent / 100) * Math.sqrt(2);
 		}
@@ -38,7 +43,7 @@ public record ReviewPolicy(String title, List<MainsSystem> mains, List<Double> l
 		 * The frequency IEC 60038 gives systems of this voltage: 60 Hz for the 100–150 V systems (120/208 V,
 		 * 120/240 V), 50 Hz for the others (230/400 V) [published, docs/sources.md#mains-and-surges].
 		 */
-		public double hertz() {
+		public static double frequencyOf(double nominalVolts) {
 			return nominalVolts <= 150 ? 60 : 50;
 		}
 	}

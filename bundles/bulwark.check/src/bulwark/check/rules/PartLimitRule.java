@@ -58,8 +58,8 @@ abstract class PartLimitRule implements Rule {
 
 	/** "R2: power 346 mW in case 'x', over its rated 250 mW derated to 60 % (150 mW), 231 % of the limit". */
 	static String message(Part part, Measure measure, WorstCase worst, Limit limit) {
-		return String.format(Locale.ROOT, "%s: %s %s in case '%s', over %s, %.0f %% of the limit", part.getName(),
-				worst.what(), Figures.engineering(worst.value(), measure.unit()), worst.caseName(), limit.describe(),
-				100 * worst.value() / limit.value());
+		return String.format(Locale.ROOT, "%s: %s %s in case '%s', over %s, %s %% of the limit", part.getName(),
+				worst.what(), Figures.over(worst.value(), limit.value(), measure.unit()), worst.caseName(),
+				limit.describe(), Figures.percentOf(worst.value(), limit.value()));
 	}
 }

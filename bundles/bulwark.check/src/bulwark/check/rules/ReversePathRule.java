@@ -81,10 +81,11 @@ public final class ReversePathRule implements Rule {
 		for (Reach r : worst.values()) {
 			Overstress o = r.over();
 			String message = String.format(Locale.ROOT,
-					"case '%s' reaches %s " + PATH_START + "%s" + PATH_END + "%s is %s, over %s, %.0f %% of the limit",
+					"case '%s' reaches %s " + PATH_START + "%s" + PATH_END + "%s is %s, over %s, %s %% of the limit",
 					r.c().faultCase().name(), o.part().getName(), String.join(" → ", r.path()),
 					o.measure().what(r.c().faultCase()),
-					Figures.engineering(o.value(), o.measure().unit()), o.limit().describe(), 100 * o.utilisation());
+					Figures.over(o.value(), o.limit().value(), o.measure().unit()), o.limit().describe(),
+					Figures.percentOf(o.value(), o.limit().value()));
 			findings.accept(new Finding(ID, INFO.concern(), INFO.severity(), message, o.part().getName(),
 					r.c().faultCase().name(), Locations.of(o.part(), DesignPackage.Literals.MEMBER__NAME), o.value(),
 					o.limit().value(), o.measure().unit(), false));

@@ -68,9 +68,9 @@ public final class SurgeEnergyRule implements Rule {
 			Limit limit = new Limit(rated.get(), "J", "its rated", d.factor(), d.source());
 			if (worst.joules() > limit.value()) {
 				findings.accept(new Finding(ID, INFO.concern(), INFO.severity(), String.format(Locale.ROOT,
-						"%s: energy %s in surge '%s', over %s, %.0f %% of the limit", part.getName(),
-						Figures.engineering(worst.joules(), "J"), worst.surge(), limit.describe(),
-						100 * worst.joules() / limit.value()), part.getName(), worst.surge(), where, worst.joules(),
+						"%s: energy %s in surge '%s', over %s, %s %% of the limit", part.getName(),
+						Figures.over(worst.joules(), limit.value(), "J"), worst.surge(), limit.describe(),
+						Figures.percentOf(worst.joules(), limit.value())), part.getName(), worst.surge(), where, worst.joules(),
 						limit.value(), "J", false));
 			}
 		}

@@ -192,6 +192,10 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 	@Check
 	public void applyIsAVoltageBehindAResistance(Apply apply) {
 		quantityOf(apply.getValue(), Unit.VOLT, "apply", DesignPackage.Literals.APPLY__VALUE, true);
+		if (apply.getFrequency() != null) {
+			quantityOf(apply.getFrequency(), Unit.HERTZ, "a sine's frequency", DesignPackage.Literals.APPLY__FREQUENCY,
+					false);
+		}
 		if (apply.getResistance() != null) {
 			quantityOf(apply.getResistance(), Unit.OHM, "behind", DesignPackage.Literals.APPLY__RESISTANCE, false);
 		}

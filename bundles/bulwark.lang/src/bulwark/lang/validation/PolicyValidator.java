@@ -48,6 +48,7 @@ public class PolicyValidator extends AbstractDeclarativeValidator {
 	@Check
 	public void mains(MainsSystem mains) {
 		positive(mains.getNominal(), "mains", DesignPackage.Literals.MAINS_SYSTEM__NOMINAL, Unit.VOLT);
+		positive(mains.getFrequency(), "the mains frequency", DesignPackage.Literals.MAINS_SYSTEM__FREQUENCY, Unit.HERTZ);
 	}
 
 	@Check

@@ -5,6 +5,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 
+import bulwark.check.rules.HysteresisRule;
 import bulwark.check.Finding;
 import bulwark.check.compile.CompiledDesign;
 import bulwark.check.compile.DesignCompiler;
@@ -31,7 +32,7 @@ final class AddHysteresis implements FixProvider {
 
 	@Override
 	public List<Fix> propose(FixContext context, Finding finding) {
-		if (!finding.rule().equals("hysteresis") || finding.part() == null) {
+		if (!finding.rule().equals(HysteresisRule.ID) || finding.part() == null) {
 			return List.of();
 		}
 		Optional<Part> comparator = PartText.part(context.design(), finding.part());

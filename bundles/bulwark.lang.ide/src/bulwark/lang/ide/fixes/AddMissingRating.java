@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
+import bulwark.check.rules.RatingMissingRule;
 import bulwark.check.Finding;
 import bulwark.check.WorstStress;
 import bulwark.check.fix.Fix;
@@ -20,7 +21,7 @@ final class AddMissingRating implements FixProvider {
 
 	@Override
 	public List<Fix> propose(FixContext context, Finding finding) {
-		if (!finding.rule().equals("rating-missing") || finding.part() == null
+		if (!finding.rule().equals(RatingMissingRule.ID) || finding.part() == null
 				|| !finding.message().contains("power (resistor-power)")) {
 			return List.of();
 		}

@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
+import bulwark.check.rules.ReversePathRule;
 import bulwark.check.Finding;
 import bulwark.check.fix.Fix;
 import bulwark.check.fix.TextEdit;
@@ -24,7 +25,7 @@ final class BlockReversePath implements FixProvider {
 
 	@Override
 	public List<Fix> propose(FixContext context, Finding finding) {
-		if (!finding.rule().equals("reverse-path")) {
+		if (!finding.rule().equals(ReversePathRule.ID)) {
 			return List.of();
 		}
 		String message = finding.message();

@@ -5,6 +5,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
+import bulwark.check.rules.ClampCurrentRule;
+import bulwark.check.rules.ComparatorInputRule;
 import bulwark.check.Finding;
 import bulwark.check.fix.Fix;
 import bulwark.check.fix.TextEdit;
@@ -22,7 +24,7 @@ final class LimitClampCurrent implements FixProvider {
 
 	@Override
 	public List<Fix> propose(FixContext context, Finding finding) {
-		if (!finding.rule().equals("clamp-current") && !finding.rule().equals("comparator-input") || finding.part() == null) {
+		if (!finding.rule().equals(ClampCurrentRule.ID) && !finding.rule().equals(ComparatorInputRule.ID) || finding.part() == null) {
 			return List.of();
 		}
 		Optional<Part> found = PartText.part(context.design(), finding.part());

@@ -5,6 +5,8 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 
+import bulwark.check.rules.ResistorVoltageRule;
+import bulwark.check.rules.SeriesStringRule;
 import bulwark.check.Finding;
 import bulwark.check.compile.ResistorRatings;
 import bulwark.check.compile.Settings;
@@ -25,7 +27,7 @@ import bulwark.lang.kinds.KindCatalog;
 final class RaisePackage implements FixProvider {
 	@Override
 	public List<Fix> propose(FixContext context, Finding finding) {
-		if (!finding.rule().equals("resistor-voltage") && !finding.rule().equals("series-string") || finding.part() == null
+		if (!finding.rule().equals(ResistorVoltageRule.ID) && !finding.rule().equals(SeriesStringRule.ID) || finding.part() == null
 				|| finding.value() == null || finding.limit() == null) {
 			return List.of();
 		}

@@ -5,6 +5,16 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 
+import bulwark.check.rules.CapacitorVoltageRule;
+import bulwark.check.rules.DevicePowerRule;
+import bulwark.check.rules.DiodeReverseRule;
+import bulwark.check.rules.ForwardCurrentRule;
+import bulwark.check.rules.FuseVoltageRule;
+import bulwark.check.rules.ProtectorBlockingRule;
+import bulwark.check.rules.ResistorPowerRule;
+import bulwark.check.rules.SurgeEnergyRule;
+import bulwark.check.rules.TransistorCurrentRule;
+import bulwark.check.rules.TransistorVoltageRule;
 import bulwark.check.Finding;
 import bulwark.check.compile.Settings;
 import bulwark.check.fix.Fix;
@@ -33,9 +43,9 @@ final class RaiseRating implements FixProvider {
 			// single-pulse energy, J: thick-film chips to wirewound and carbon-composition parts
 			"pulse", new double[] { 0.05, 0.1, 0.2, 0.5, 1, 2, 5, 10, 20 });
 	/** Which rating each rule's finding is about, by the part's kind. */
-	private static final Map<String, String> RATING_OF_RULE = Map.of("resistor-power", "power", "device-power", "power",
-			"diode-reverse", "reverse", "forward-current", "forward", "capacitor-voltage", "voltage", "fuse-voltage",
-			"voltage", "protector-blocking", "blocking", "transistor-current", "collector", "surge-energy", "pulse");
+	private static final Map<String, String> RATING_OF_RULE = Map.of(ResistorPowerRule.ID, "power", DevicePowerRule.ID, "power",
+			DiodeReverseRule.ID, "reverse", ForwardCurrentRule.ID, "forward", CapacitorVoltageRule.ID, "voltage", FuseVoltageRule.ID,
+			"voltage", ProtectorBlockingRule.ID, "blocking", TransistorCurrentRule.ID, "collector", SurgeEnergyRule.ID, "pulse");
 
 	@Override
 	public List<Fix> propose(FixContext context, Finding finding) {
@@ -80,10 +90,10 @@ final class RaiseRating implements FixProvider {
 	}
 
 	private static String rating(String rule, PartKind kind) {
-		if (rule.equals("transistor-voltage")) {
+		if (rule.equals(TransistorVoltageRule.ID)) {
 			return kind == PartKind.NMOS || kind == PartKind.PMOS ? "drain_source" : "collector_emitter";
 		}
-		if (rule.equals("transistor-current")) {
+		if (rule.equals(TransistorCurrentRule.ID)) {
 			return kind == PartKind.NMOS || kind == PartKind.PMOS ? "drain" : "collector";
 		}
 		return RATING_OF_RULE.get(rule);

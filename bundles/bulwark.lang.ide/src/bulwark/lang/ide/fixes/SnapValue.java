@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
+import bulwark.check.rules.PreferredValueRule;
 import bulwark.check.Finding;
 import bulwark.check.fix.Fix;
 import bulwark.check.rules.Figures;
@@ -15,7 +16,7 @@ import bulwark.lang.design.Setting;
 final class SnapValue implements FixProvider {
 	@Override
 	public List<Fix> propose(FixContext context, Finding finding) {
-		if (!finding.rule().equals("preferred-value") || finding.limit() == null || finding.part() == null) {
+		if (!finding.rule().equals(PreferredValueRule.ID) || finding.limit() == null || finding.part() == null) {
 			return List.of();
 		}
 		Optional<Part> part = PartText.part(context.design(), finding.part());

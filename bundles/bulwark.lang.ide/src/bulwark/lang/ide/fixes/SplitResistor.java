@@ -9,6 +9,8 @@ import java.util.Optional;
 import org.eclipse.xtext.nodemodel.ICompositeNode;
 import org.eclipse.xtext.nodemodel.util.NodeModelUtils;
 
+import bulwark.check.rules.ResistorVoltageRule;
+import bulwark.check.rules.SeriesStringRule;
 import bulwark.check.Finding;
 import bulwark.check.compile.Settings;
 import bulwark.check.fix.Fix;
@@ -32,7 +34,7 @@ final class SplitResistor implements FixProvider {
 
 	@Override
 	public List<Fix> propose(FixContext context, Finding finding) {
-		if (!finding.rule().equals("resistor-voltage") && !finding.rule().equals("series-string") || finding.part() == null
+		if (!finding.rule().equals(ResistorVoltageRule.ID) && !finding.rule().equals(SeriesStringRule.ID) || finding.part() == null
 				|| finding.value() == null || finding.limit() == null) {
 			return List.of();
 		}
