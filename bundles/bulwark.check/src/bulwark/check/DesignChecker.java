@@ -190,13 +190,21 @@ public final class DesignChecker {
 		List<SolvedCase> solved = new ArrayList<>();
 		List<CaseResult> caseResults = new ArrayList<>();
 		boolean solverFailed = false;
+		List<WaveformTrace> waveforms = new ArrayList<>();
 		for (CaseOutcome outcome : CaseRunner.run(compiled, policy)) {
 			FaultCase c = outcome.faultCase();
 			DcResult result = outcome.result();
 			if (result instanceof DcSolution solution) {
 				solved.add(new SolvedCase(c, solution, outcome.pulseEnergy(), outcome.averagePower()));
-				caseResults.add(new CaseResult(c.name(), c.kind(), true,
-						Stresses.of(compiled, c, solution, outcome.averagePower(), policy)));
+				CaseResult cr = new CaseResult(c.name(), c.kind(), true,
+						Stresses.of(compiled, c, solution, outcome.averagePower(), policy));
+				caseResults.add(cr);
+				if (outcome.cycle() != null) {
+					// the part this waveform case stresses most, for plots
+					cr.parts().stream().filter(p -> p.utilisation() != null)
+							.max(Comparator.comparingDouble(PartStress::utilisation))
+							.ifPresent(p -> waveforms.add(WaveformTrace.of(c.name(), p.part(), outcome.cycle())));
+				}
 			} else {
 				solverFailed = true;
 				caseResults.add(new CaseResult(c.name(), c.kind(), false, List.of()));
@@ -220,7 +228,7 @@ public final class DesignChecker {
 				: all.stream().anyMatch(f -> f.severity() == Severity.ERROR && !f.waived()) ? Status.FAIL
 						: Status.PASS;
 		return new DesignResult(loaded.file(), title, status, all, caseResults, policy.title(),
-				WorstStresses.of(compiled, solved, policy), function);
+				WorstStresses.of(compiled, solved, policy), function, waveforms);
 	}
 
 	/** The review policy a design is checked under, or (policy null) the problems that stop its use. */

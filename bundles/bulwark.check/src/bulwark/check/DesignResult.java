@@ -6,15 +6,22 @@ import bulwark.check.function.FunctionFigures;
 
 /**
  * Everything the check found about one design file: its findings, each case's figures, the review policy
- * it was checked under (null when it was not checked), each part's worst stress per rating, and the function
- * figures at the terminals.
+ * it was checked under (null when it was not checked), each part's worst stress per rating, the function
+ * figures at the terminals, and for each waveform case the trace of the part it stresses most.
  */
 public record DesignResult(String file, String title, Status status, List<Finding> findings, List<CaseResult> cases,
-		String policy, List<WorstStress> stresses, FunctionFigures function) {
+		String policy, List<WorstStress> stresses, FunctionFigures function, List<WaveformTrace> waveforms) {
 	public DesignResult {
 		findings = List.copyOf(findings);
 		cases = List.copyOf(cases);
 		stresses = List.copyOf(stresses);
+		waveforms = List.copyOf(waveforms);
+	}
+
+	/** A result with no waveform cases. */
+	public DesignResult(String file, String title, Status status, List<Finding> findings, List<CaseResult> cases,
+			String policy, List<WorstStress> stresses, FunctionFigures function) {
+		this(file, title, status, findings, cases, policy, stresses, function, List.of());
 	}
 
 	/** A result with no stresses: a design that was not checked. */

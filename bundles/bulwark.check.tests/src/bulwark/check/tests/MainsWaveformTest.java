@@ -159,4 +159,35 @@ class MainsWaveformTest {
 		assertTrue(wrong.findings().stream().anyMatch(f -> f.message().contains("a sine's frequency")),
 				wrong.findings().toString());
 	}
+
+	@Test
+	void theMostStressedPartIsTracedOverTheCycleForThePlots() throws Exception {
+		DesignResult r = Fixtures.check(DROPPER, MAINS_ONLY);
+		bulwark.check.WaveformTrace t = r.waveforms().stream().findFirst()
+				.orElseThrow(() -> new AssertionError("no waveform for the mains case: " + r.cases()));
+		assertTrue(t.caseName().startsWith("230 V 50 Hz mains (358 V peak), steady state after"), t.caseName());
+		assertEquals(t.seconds().length, t.volts().length);
+		assertEquals(t.seconds().length, t.amps().length);
+		assertEquals(bulwark.check.WaveformTrace.SAMPLES, t.seconds().length);
+		// one period of 50 Hz from the cycle's start
+		assertEquals(0, t.seconds()[0], 0);
+		assertEquals(20e-3, t.seconds()[t.seconds().length - 1], 0.5e-3);
+		// the most stressed part is C1, at 57 % of its 630 V; its trace is the solution: its crest is the
+		// phasor's, I_rms·√2/ωC = 356.9 V [closed form, as above], within the 1 − cos 1.5° of resampling
+		assertEquals("C1", t.part());
+		double reactance = 1 / (OMEGA * 220e-9);
+		double expected = RMS / Math.hypot(1e3, reactance) * Math.sqrt(2) * reactance;
+		double crest = 0;
+		for (double v : t.volts()) {
+			crest = Math.max(crest, Math.abs(v));
+		}
+		assertEquals(expected, crest, 0.01 * expected);
+		java.io.StringWriter html = new java.io.StringWriter();
+		bulwark.check.report.HtmlReport.write(List.of(r), "test", "caution", html);
+		assertTrue(html.toString().contains("<title>waveform of " + t.part() + " in "), html.toString());
+		java.io.StringWriter json = new java.io.StringWriter();
+		bulwark.check.report.JsonReport.write(List.of(r), "test", "caution", json);
+		assertTrue(json.toString().contains("\"waveforms\": [") && json.toString().contains("\"volts\": ["),
+				json.toString());
+	}
 }

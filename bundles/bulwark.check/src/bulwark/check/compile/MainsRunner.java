@@ -235,7 +235,9 @@ final class MainsRunner {
 			boolean firstPositive = sourceVolts(cycle, source, crest) >= 0;
 			FaultCase whole = new FaultCase(staged.name(), c.kind(), c.added(), c.replaced(),
 					firstPositive ? c.from() : c.to(), firstPositive ? c.to() : c.from());
-			outcomes.add(new CaseOutcome(whole, cycle.points.get(crest), Map.of(), averages));
+			List<Double> fromStart = cycle.times.stream().map(t -> t - cycle.start).toList();
+			outcomes.add(new CaseOutcome(whole, cycle.points.get(crest), Map.of(), averages,
+					new SolvedCycle(fromStart, cycle.points)));
 		}
 		return outcomes;
 	}

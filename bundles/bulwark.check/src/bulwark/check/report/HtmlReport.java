@@ -11,6 +11,7 @@ import bulwark.check.CaseResult;
 import bulwark.check.DesignResult;
 import bulwark.check.Finding;
 import bulwark.check.PartStress;
+import bulwark.check.WaveformTrace;
 import bulwark.check.function.FunctionFigures;
 import bulwark.check.function.PairFigures;
 
@@ -73,6 +74,10 @@ public final class HtmlReport {
 			w.write(bars(worst, worstCase));
 		}
 		function(r.function(), w);
+		for (WaveformTrace t : r.waveforms()) {
+			w.write("<h4>" + escape(t.part()) + " over the cycle, " + escape(t.caseName()) + "</h4>\n");
+			w.write(WaveformPlot.svg(t));
+		}
 		if (!r.cases().isEmpty()) {
 			w.write("<h3>Cases</h3>\n<ul>");
 			for (CaseResult c : r.cases()) {

@@ -10,6 +10,7 @@ import bulwark.check.CaseResult;
 import bulwark.check.DesignResult;
 import bulwark.check.Finding;
 import bulwark.check.PartStress;
+import bulwark.check.WaveformTrace;
 import bulwark.check.WorstStress;
 import bulwark.check.fix.Fix;
 import bulwark.check.fix.TextEdit;
@@ -116,7 +117,28 @@ public final class JsonReport {
 		}
 		w.endArray();
 		function(w, r.function());
+		// each waveform case's most stressed part over the steady cycle: seconds from the cycle's start, volts
+		// across the part (its first pin against its second), amperes into its first pin
+		w.name("waveforms").beginArray();
+		for (WaveformTrace t : r.waveforms()) {
+			w.beginObject();
+			w.name("case").value(t.caseName());
+			w.name("part").value(t.part());
+			series(w.name("seconds"), t.seconds());
+			series(w.name("volts"), t.volts());
+			series(w.name("amps"), t.amps());
+			w.endObject();
+		}
+		w.endArray();
 		w.endObject();
+	}
+
+	private static void series(JsonWriter w, double[] values) throws IOException {
+		w.beginArray();
+		for (double v : values) {
+			number(w, v);
+		}
+		w.endArray();
 	}
 
 	private static void fix(JsonWriter w, Fix fix) throws IOException {
