@@ -196,7 +196,7 @@ public final class DesignChecker {
 			DcResult result = outcome.result();
 			if (result instanceof DcSolution solution) {
 				solved.add(new SolvedCase(c, solution, outcome.pulseEnergy(), outcome.averagePower()));
-				CaseResult cr = new CaseResult(c.name(), c.kind(), true,
+				CaseResult cr = new CaseResult(c.name(), c.kind().id(), true,
 						Stresses.of(compiled, c, solution, outcome.averagePower(), policy));
 				caseResults.add(cr);
 				if (outcome.cycle() != null) {
@@ -207,11 +207,11 @@ public final class DesignChecker {
 				}
 			} else {
 				solverFailed = true;
-				caseResults.add(new CaseResult(c.name(), c.kind(), false, List.of()));
+				caseResults.add(new CaseResult(c.name(), c.kind().id(), false, List.of()));
 				findings.add(solverFinding(compiled, c, (SolveFailure) result));
 			}
 		}
-		FunctionFigures function = solved.isEmpty() || !solved.get(0).faultCase().kind().equals(FaultCase.NORMAL)
+		FunctionFigures function = solved.isEmpty() || solved.get(0).faultCase().kind() != bulwark.check.compile.CaseKind.NORMAL
 				? FunctionFigures.NONE
 				: FunctionAnalysis.of(compiled, solved.get(0).solution());
 		CheckContext context = CheckContext.of(compiled, solved, policy, function);

@@ -43,7 +43,7 @@ public final class CaseGenerator {
 		if (common != null) {
 			for (Terminal t : terminals) {
 				if (t != common && t.getNet() != common.getNet()) {
-					cases.add(new FaultCase("normal, " + t.getName() + " shorted to " + common.getName(), FaultCase.NORMAL,
+					cases.add(new FaultCase("normal, " + t.getName() + " shorted to " + common.getName(), CaseKind.NORMAL,
 							List.of(VoltageSource.ideal(pairSource(t, common), net(design, t), net(design, common), 0))));
 				}
 			}
@@ -52,8 +52,8 @@ public final class CaseGenerator {
 			if (m instanceof Case c) {
 				Apply sine = c.getActions().stream().filter(a -> a instanceof Apply ap && ap.getFrequency() != null)
 						.map(a -> (Apply) a).findFirst().orElse(null);
-				cases.add(sine == null ? new FaultCase(c.getName(), FaultCase.DESIGNER, devices(design.circuit(), c))
-						: new FaultCase(c.getName(), FaultCase.DESIGNER_SINE, devices(design.circuit(), c), Map.of(),
+				cases.add(sine == null ? new FaultCase(c.getName(), CaseKind.DESIGNER, devices(design.circuit(), c))
+						: new FaultCase(c.getName(), CaseKind.DESIGNER_SINE, devices(design.circuit(), c), Map.of(),
 								sine.getFrom().getName(), sine.getTo().getName()));
 			}
 		}
@@ -86,7 +86,7 @@ public final class CaseGenerator {
 				// the same pins, the EMF turned round: what a cell put in backwards does
 				VoltageSource reversed = new VoltageSource(part.getName(), fitted.pins()[0], fitted.pins()[1],
 						-fitted.volts(), fitted.seriesOhms());
-				cases.add(new FaultCase("battery " + part.getName() + " reversed", FaultCase.ABUSE, List.of(),
+				cases.add(new FaultCase("battery " + part.getName() + " reversed", CaseKind.ABUSE, List.of(),
 						Map.of(part.getName(), reversed), null, null));
 			}
 		}
@@ -114,7 +114,7 @@ public final class CaseGenerator {
 	private static FaultCase abuse(CompiledDesign design, String what, Terminal plus, Terminal minus, double volts) {
 		Terminal first = order(plus, minus) ? plus : minus, second = first == plus ? minus : plus;
 		double signed = first == plus ? volts : -volts;
-		return new FaultCase(what + ", " + plus.getName() + " + to " + minus.getName() + " −", FaultCase.ABUSE,
+		return new FaultCase(what + ", " + plus.getName() + " + to " + minus.getName() + " −", CaseKind.ABUSE,
 				List.of(VoltageSource.ideal(pairSource(first, second), net(design, first), net(design, second), signed)),
 				Map.of(), plus.getName(), minus.getName());
 	}
@@ -127,7 +127,7 @@ public final class CaseGenerator {
 		Terminal first = order(a, b) ? a : b, second = first == a ? b : a;
 		String what = String.format(Locale.ROOT, "%s %s mains (%s peak)", Figures.engineering(mains.nominalVolts(), "V"),
 				Figures.engineering(mains.hertz(), "Hz"), Figures.engineering(mains.peakVolts(), "V"));
-		return new FaultCase(what, FaultCase.MAINS,
+		return new FaultCase(what, CaseKind.MAINS,
 				List.of(new VoltageSource(pairSource(first, second), net(design, first), net(design, second),
 						new Sine(0, mains.peakVolts(), mains.hertz(), 0), 0)),
 				Map.of(), first.getName(), second.getName());
@@ -138,7 +138,7 @@ public final class CaseGenerator {
 			ReviewPolicy.SurgeLevel surge) {
 		Terminal first = order(plus, minus) ? plus : minus, second = first == plus ? minus : plus;
 		double signed = first == plus ? surge.peakVolts() : -surge.peakVolts();
-		return new FaultCase(what + ", " + plus.getName() + " + to " + minus.getName() + " −", FaultCase.SURGE,
+		return new FaultCase(what + ", " + plus.getName() + " + to " + minus.getName() + " −", CaseKind.SURGE,
 				List.of(new VoltageSource("surge " + first.getName() + " " + second.getName(), net(design, first),
 						net(design, second), new CombinationWave(signed, 0), surge.sourceOhms())),
 				Map.of(), plus.getName(), minus.getName());

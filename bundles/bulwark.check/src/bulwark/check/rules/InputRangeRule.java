@@ -42,7 +42,7 @@ public final class InputRangeRule implements Rule {
 			String at = null, pinAt = null;
 			double volts = 0, top = 0;
 			for (SolvedCase c : context.cases()) {
-				if (!c.faultCase().kind().equals(FaultCase.NORMAL)) {
+				if (c.faultCase().kind() != bulwark.check.compile.CaseKind.NORMAL) {
 					continue;
 				}
 				OperatingPoint p = c.solution().device(part.getName());
