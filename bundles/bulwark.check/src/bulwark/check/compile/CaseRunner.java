@@ -84,8 +84,7 @@ public final class CaseRunner {
 			for (Device d : circuit.circuit().devices()) {
 				if (d instanceof Fuse f && !opened.containsKey(f.name())
 						&& Math.abs(s.device(f.name()).current()) > f.ratedAmps()) {
-					Fuse open = new Fuse(f.name(), f.pins()[0], f.pins()[1],
-							f.resettable() ? TRIPPED_RESETTABLE_OHMS : OPEN_FUSE_OHMS, f.ratedAmps(), f.resettable());
+					Fuse open = opened(f);
 					opened.put(f.name(), open);
 					circuit = circuit.with(f.name(), open);
 					more = true;
@@ -96,13 +95,20 @@ public final class CaseRunner {
 			}
 			result = solver.solve(circuit);
 		}
-		if (opened.isEmpty()) {
-			return new CaseOutcome(c, result);
-		}
+		return new CaseOutcome(opened.isEmpty() ? c : withOpened(c, opened), result);
+	}
+
+	/** A fuse that has opened: a tripped resettable one holds itself hot, any other is a gap. */
+	static Fuse opened(Fuse f) {
+		return new Fuse(f.name(), f.pins()[0], f.pins()[1], f.resettable() ? TRIPPED_RESETTABLE_OHMS : OPEN_FUSE_OHMS,
+				f.ratedAmps(), f.resettable());
+	}
+
+	/** The case with these fuses opened, named for them ("…, F1 open"). */
+	static FaultCase withOpened(FaultCase c, Map<String, Device> opened) {
 		Map<String, Device> replaced = new LinkedHashMap<>(c.replaced());
 		replaced.putAll(opened);
-		FaultCase after = new FaultCase(c.name() + ", " + String.join(", ", opened.keySet()) + " open", c.kind(),
-				c.added(), replaced, c.from(), c.to());
-		return new CaseOutcome(after, result);
+		return new FaultCase(c.name() + ", " + String.join(", ", opened.keySet()) + " open", c.kind(), c.added(),
+				replaced, c.from(), c.to());
 	}
 }

@@ -86,9 +86,7 @@ final class MainsRunner {
 	static List<CaseOutcome> run(CompiledDesign design, FaultCase c, PreparedCircuit circuit, DcSolver solver) {
 		Map<String, Device> opened = new LinkedHashMap<>();
 		while (true) {
-			FaultCase named = opened.isEmpty() ? c
-					: new FaultCase(c.name() + ", " + String.join(", ", opened.keySet()) + " open", c.kind(), c.added(),
-							merged(c.replaced(), opened), c.from(), c.to());
+			FaultCase named = opened.isEmpty() ? c : CaseRunner.withOpened(c, opened);
 			boolean reactive = circuit.circuit().devices().stream()
 					.anyMatch(d -> d instanceof Capacitor || d instanceof Inductor);
 			Run run = reactive ? transientRun(design, named, circuit, solver) : quasiStatic(design, named, circuit, solver);
@@ -98,9 +96,7 @@ final class MainsRunner {
 			boolean more = false;
 			for (Device d : circuit.circuit().devices()) {
 				if (d instanceof Fuse f && !opened.containsKey(f.name()) && rms(run.steady, f.name()) > f.ratedAmps()) {
-					Fuse open = new Fuse(f.name(), f.pins()[0], f.pins()[1],
-							f.resettable() ? CaseRunner.TRIPPED_RESETTABLE_OHMS : CaseRunner.OPEN_FUSE_OHMS, f.ratedAmps(),
-							f.resettable());
+					Fuse open = CaseRunner.opened(f);
 					opened.put(f.name(), open);
 					circuit = circuit.with(f.name(), open);
 					more = true;
@@ -298,11 +294,5 @@ final class MainsRunner {
 			integral += 0.5 * (f.applyAsDouble(i - 1) + f.applyAsDouble(i)) * (cycle.times.get(i) - cycle.times.get(i - 1));
 		}
 		return integral / (cycle.times.get(n - 1) - cycle.times.get(0));
-	}
-
-	private static Map<String, Device> merged(Map<String, Device> a, Map<String, Device> b) {
-		Map<String, Device> m = new LinkedHashMap<>(a);
-		m.putAll(b);
-		return m;
 	}
 }
