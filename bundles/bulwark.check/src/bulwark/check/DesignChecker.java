@@ -12,11 +12,11 @@ import java.util.Optional;
 import org.eclipse.xtext.util.CancelIndicator;
 import org.eclipse.xtext.validation.Issue;
 
-import bulwark.check.compile.CaseOutcome;
+import bulwark.check.cases.CaseOutcome;
 import bulwark.check.compile.CaseRunner;
 import bulwark.check.compile.CompiledDesign;
 import bulwark.check.compile.DesignCompiler;
-import bulwark.check.compile.FaultCase;
+import bulwark.check.cases.FaultCase;
 import bulwark.check.function.FunctionAnalysis;
 import bulwark.check.function.FunctionFigures;
 import bulwark.check.load.DesignLoader;
@@ -27,14 +27,26 @@ import bulwark.check.policy.ReviewPolicy;
 import bulwark.check.rules.CheckContext;
 import bulwark.check.rules.Rule;
 import bulwark.check.rules.RuleRegistry;
-import bulwark.check.rules.SolvedCase;
-import bulwark.engine.dc.DcResult;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.SolveFailure;
+import bulwark.check.cases.SolvedCase;
+import bulwark.engine.solve.DcResult;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.SolveFailure;
 import bulwark.lang.design.Design;
 import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Member;
 import bulwark.lang.library.Confinement;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Severity;
+import bulwark.check.finding.SourceLocation;
+import bulwark.check.finding.Locations;
+import bulwark.check.finding.LanguageFindings;
+import bulwark.check.load.InputLimits;
+import bulwark.check.cases.CaseResult;
+import bulwark.check.cases.PartStress;
+import bulwark.check.finding.CheckerRules;
+import bulwark.check.finding.RuleInfo;
+import bulwark.check.budget.Budget;
 
 /**
  * The whole check of one design: language issues first; if the text is sound, every case is solved and
@@ -67,7 +79,7 @@ public final class DesignChecker {
 	private DesignChecker(DesignLoader loader, ReviewPolicy policy, Duration budget, List<Rule> rules) {
 		this.loader = loader;
 		this.forcedPolicy = policy;
-		this.policies = new PolicyFiles(loader);
+		this.policies = new PolicyFiles(loader, RuleRegistry.ids());
 		this.budget = budget;
 		this.rules = List.copyOf(rules);
 	}
@@ -167,9 +179,9 @@ public final class DesignChecker {
 		try {
 			return checkWithinBudget(loaded);
 		} catch (Budget.OverBudget e) {
-			return notChecked(loaded.file(), "budget", "not checked: " + e.getMessage());
+			return notChecked(loaded.file(), CheckerRules.BUDGET, "not checked: " + e.getMessage());
 		} catch (RuntimeException e) {
-			return notChecked(loaded.file(), "internal", "not checked: Bulwark met a fault of its own (" + e
+			return notChecked(loaded.file(), CheckerRules.INTERNAL, "not checked: Bulwark met a fault of its own (" + e
 					+ "); please report it with the design");
 		} finally {
 			Budget.stop();
@@ -211,7 +223,7 @@ public final class DesignChecker {
 				findings.add(solverFinding(compiled, c, (SolveFailure) result));
 			}
 		}
-		FunctionFigures function = solved.isEmpty() || solved.get(0).faultCase().kind() != bulwark.check.compile.CaseKind.NORMAL
+		FunctionFigures function = solved.isEmpty() || solved.get(0).faultCase().kind() != bulwark.check.cases.CaseKind.NORMAL
 				? FunctionFigures.NONE
 				: FunctionAnalysis.of(compiled, solved.get(0).solution());
 		CheckContext context = CheckContext.of(compiled, solved, policy, function);
@@ -267,14 +279,14 @@ public final class DesignChecker {
 		}
 		List<Finding> problems = new ArrayList<>();
 		for (Finding f : r.problems()) {
-			problems.add(Finding.plain(f.rule(), f.concern(), f.severity(), f.message(), null, where));
+			problems.add(f.at(where));
 		}
 		return new PolicyChoice(null, problems);
 	}
 
 	private static PolicyChoice refused(SourceLocation where, String message) {
 		return new PolicyChoice(null,
-				List.of(Finding.plain("policy", Concern.STRUCTURE, Severity.ERROR, message, null, where)));
+				List.of(Finding.of(CheckerRules.POLICY, message).at(where)));
 	}
 
 	/**
@@ -294,7 +306,7 @@ public final class DesignChecker {
 		}
 		String title = loaded.policy() == null ? null : loaded.policy().getTitle();
 		if (loaded.policy() != null && findings.stream().noneMatch(f -> f.severity() == Severity.ERROR)) {
-			bulwark.check.policy.PolicyCompiler.compile(loaded.policy(), findings::add);
+			bulwark.check.policy.PolicyCompiler.compile(loaded.policy(), RuleRegistry.ids(), findings::add);
 		}
 		boolean errors = findings.stream().anyMatch(f -> f.severity() == Severity.ERROR) || loaded.policy() == null;
 		return new DesignResult(file, title, errors ? Status.ERROR : Status.PASS, findings, List.of());
@@ -302,14 +314,13 @@ public final class DesignChecker {
 
 	/** A design refused before it was read: one finding saying why, status error. */
 	/** A design whose check stopped: one solver finding saying why, status error. */
-	private static DesignResult notChecked(String file, String rule, String reason) {
-		return new DesignResult(file, null, Status.ERROR,
-				List.of(Finding.plain(rule, Concern.SOLVER, Severity.ERROR, reason, null, SourceLocation.NONE)), List.of());
+	private static DesignResult notChecked(String file, RuleInfo rule, String reason) {
+		return new DesignResult(file, null, Status.ERROR, List.of(Finding.of(rule, reason)), List.of());
 	}
 
 	static DesignResult notChecked(String file, String reason, SourceLocation where) {
 		return new DesignResult(file, null, Status.ERROR,
-				List.of(Finding.plain("file", Concern.STRUCTURE, Severity.ERROR, reason, null, where)), List.of());
+				List.of(Finding.of(CheckerRules.FILE, reason).at(where)), List.of());
 	}
 
 	private static Finding solverFinding(CompiledDesign compiled, FaultCase c, SolveFailure failure) {
@@ -330,8 +341,7 @@ public final class DesignChecker {
 			}
 		}
 		String reason = failure.reason().name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ');
-		return new Finding("solver", Concern.SOLVER, Severity.ERROR,
-				"case '" + c.name() + "' could not be solved (" + reason + "): " + failure.message(), part, c.name(),
-				where, null, null, null, false);
+		return Finding.of(CheckerRules.SOLVER, "case '" + c.name() + "' could not be solved (" + reason + "): "
+				+ failure.message()).about(part, c.name(), where);
 	}
 }

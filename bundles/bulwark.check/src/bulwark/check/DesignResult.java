@@ -3,6 +3,9 @@ package bulwark.check;
 import java.util.List;
 
 import bulwark.check.function.FunctionFigures;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Severity;
+import bulwark.check.cases.CaseResult;
 
 /**
  * Everything the check found about one design file: its findings, each case's figures, the review policy

@@ -5,6 +5,7 @@ import java.util.List;
 import bulwark.check.compile.CompiledDesign;
 import bulwark.check.load.LoadedDesign;
 import bulwark.check.policy.ReviewPolicy;
+import bulwark.check.finding.Finding;
 
 /**
  * A design through the stages every use of it shares — read within the input limits, parsed and validated

@@ -5,15 +5,16 @@ import java.util.List;
 import java.util.Optional;
 
 import bulwark.check.compile.CompiledDesign;
-import bulwark.check.compile.FaultCase;
+import bulwark.check.cases.FaultCase;
 import bulwark.check.policy.ReviewPolicy;
 import bulwark.check.stress.Limit;
 import bulwark.check.stress.Limits;
 import bulwark.check.stress.Measure;
 import bulwark.check.stress.StressCatalog;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.OperatingPoint;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.OperatingPoint;
 import bulwark.lang.design.Part;
+import bulwark.check.cases.PartStress;
 
 /**
  * Every part's figures in one solved case, with its utilisation: the largest of its stresses over the

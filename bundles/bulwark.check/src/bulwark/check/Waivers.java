@@ -2,6 +2,7 @@ package bulwark.check;
 
 import java.util.ArrayList;
 import java.util.HashSet;
+import java.util.TreeSet;
 import java.util.List;
 import java.util.Set;
 
@@ -10,6 +11,11 @@ import bulwark.check.rules.Rule;
 import bulwark.check.rules.RuleRegistry;
 import bulwark.lang.design.Design;
 import bulwark.lang.design.Waiver;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Severity;
+import bulwark.check.finding.Locations;
+import bulwark.check.finding.CheckerRules;
 
 /**
  * Applies a design's waivers (those the review policy accepts: a reason and a name unless it says
@@ -18,7 +24,6 @@ import bulwark.lang.design.Waiver;
  * does not have, is itself reported, so that stale waivers do not pile up unseen.
  */
 final class Waivers {
-	static final String RULE = "waiver";
 
 	private Waivers() {
 	}
@@ -37,9 +42,9 @@ final class Waivers {
 			}
 			if (!lacking.isEmpty()) {
 				refused.add(w);
-				result.add(Finding.plain(RULE, Concern.STRUCTURE, Severity.ERROR, "the waiver of " + w.getRule()
-						+ " is not applied: the review policy '" + policy.title() + "' needs " + String.join(" and ", lacking),
-						null, Locations.of(w)));
+				result.add(Finding.of(CheckerRules.WAIVER, "the waiver of " + w.getRule()
+						+ " is not applied: the review policy '" + policy.title() + "' needs " + String.join(" and ", lacking))
+						.at(Locations.of(w)));
 			}
 		}
 		for (Finding f : findings) {
@@ -49,25 +54,24 @@ final class Waivers {
 			}
 			if (w != null) {
 				used.add(w);
-				result.add(new Finding(f.rule(), f.concern(), f.severity(), f.message() + " [waived by " + w.getWho()
-						+ " on " + w.getDate() + ": " + w.getJustification() + "]", f.part(), f.caseName(), f.location(),
-						f.value(), f.limit(), f.unit(), true));
+				result.add(f.waivedAs(f.message() + " [waived by " + w.getWho() + " on " + w.getDate() + ": "
+						+ w.getJustification() + "]"));
 			} else {
 				result.add(f);
 			}
 		}
-		Set<String> known = new HashSet<>();
+		Set<String> known = new TreeSet<>();
 		for (Rule r : RuleRegistry.all()) {
-			known.add(r.info().id());
+			known.add(r.info().id().text());
 		}
 		for (Waiver w : design.getWaivers()) {
 			if (!known.contains(w.getRule())) {
-				result.add(Finding.plain(RULE, Concern.STRUCTURE, Severity.WARNING, "the waiver names no rule Bulwark has: '"
-						+ w.getRule() + "' (rules: " + String.join(", ", known) + ")", null, Locations.of(w)));
+				result.add(Finding.of(CheckerRules.WAIVER, "the waiver names no rule Bulwark has: '" + w.getRule()
+						+ "' (rules: " + String.join(", ", known) + ")").withSeverity(Severity.WARNING).at(Locations.of(w)));
 			} else if (!used.contains(w) && !refused.contains(w)) {
-				result.add(Finding.plain(RULE, Concern.STRUCTURE, Severity.WARNING, "the waiver of " + w.getRule() + " on "
-						+ w.getPart().getName() + " matches no finding; remove it if the design no longer needs it",
-						w.getPart().getName(), Locations.of(w)));
+				result.add(Finding.of(CheckerRules.WAIVER, "the waiver of " + w.getRule() + " on " + w.getPart().getName()
+						+ " matches no finding; remove it if the design no longer needs it").withSeverity(Severity.WARNING)
+						.about(w.getPart().getName(), null, Locations.of(w)));
 			}
 		}
 		return result;
@@ -79,7 +83,7 @@ final class Waivers {
 
 	private static Waiver match(Design design, Finding f) {
 		for (Waiver w : design.getWaivers()) {
-			if (f.part() != null && w.getPart() != null && f.rule().equals(w.getRule())
+			if (f.part() != null && w.getPart() != null && f.rule().text().equals(w.getRule())
 					&& f.part().equals(w.getPart().getName())) {
 				return w;
 			}

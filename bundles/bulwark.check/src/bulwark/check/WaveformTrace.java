@@ -1,6 +1,6 @@
 package bulwark.check;
 
-import bulwark.check.compile.SolvedCycle;
+import bulwark.check.cases.SolvedCycle;
 
 /**
  * One part's voltage and current over the steady cycle of a waveform case — the part the case stresses most

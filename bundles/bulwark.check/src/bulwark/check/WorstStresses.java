@@ -6,7 +6,7 @@ import java.util.Optional;
 
 import bulwark.check.compile.CompiledDesign;
 import bulwark.check.policy.ReviewPolicy;
-import bulwark.check.rules.SolvedCase;
+import bulwark.check.cases.SolvedCase;
 import bulwark.check.stress.Limit;
 import bulwark.check.stress.Limits;
 import bulwark.check.stress.Measure;
@@ -29,7 +29,7 @@ final class WorstStresses {
 				String at = null;
 				String what = m.what();
 				for (SolvedCase c : cases) {
-					double v = c.figure(m, part.getName());
+					double v = m.judged(c, part.getName());
 					if (!Double.isNaN(v) && v > worst) {
 						worst = v;
 						at = c.faultCase().name();

@@ -18,7 +18,7 @@ import javax.xml.stream.XMLStreamException;
 
 import bulwark.check.DesignChecker;
 import bulwark.check.DesignResult;
-import bulwark.check.Severity;
+import bulwark.check.finding.Severity;
 import bulwark.check.Status;
 import bulwark.check.io.AtomicFile;
 import bulwark.lang.ide.fixes.QuickFixes;
@@ -204,9 +204,9 @@ final class Checks {
 	}
 
 	/** The verified quick fixes of each finding, worked out once per design when the report asks. */
-	private static java.util.function.BiFunction<DesignResult, bulwark.check.Finding, List<bulwark.check.fix.Fix>> fixes(
+	private static java.util.function.BiFunction<DesignResult, bulwark.check.finding.Finding, List<bulwark.check.fix.Fix>> fixes(
 			DesignChecker checker) {
-		java.util.Map<DesignResult, java.util.Map<bulwark.check.Finding, List<bulwark.check.fix.Fix>>> cache =
+		java.util.Map<DesignResult, java.util.Map<bulwark.check.finding.Finding, List<bulwark.check.fix.Fix>>> cache =
 				new java.util.IdentityHashMap<>();
 		return (r, f) -> cache.computeIfAbsent(r, d -> {
 			try {

@@ -4,10 +4,10 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.TreeSet;
 
-import bulwark.check.Concern;
+import bulwark.check.finding.Concern;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.Severity;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Severity;
 import bulwark.check.report.HtmlReport;
 
 /** The class summary of a classroom batch: a CSV for the gradebook and an HTML page linking each feedback page. */

@@ -24,11 +24,11 @@ final class ExplainCommand implements Callable<Integer> {
 	public Integer call() throws Exception {
 		var out = spec.commandLine().getOut();
 		var err = spec.commandLine().getErr();
-		boolean known = RuleRegistry.all().stream().anyMatch(r -> r.info().id().equals(rule));
-		java.util.Optional<String> page = known ? RulePages.page(Language.installation(), rule) : java.util.Optional.empty();
+		boolean known = RuleRegistry.all().stream().anyMatch(r -> r.info().id().text().equals(rule));
+		java.util.Optional<String> page = known ? RulePages.page(Language.installation(), bulwark.check.finding.RuleId.of(rule)) : java.util.Optional.empty();
 		if (page.isEmpty()) {
 			err.println("bulwark: no rule '" + rule + "'; the rules are: "
-					+ RuleRegistry.all().stream().map(Rule::info).map(i -> i.id()).collect(Collectors.joining(", ")));
+					+ RuleRegistry.all().stream().map(Rule::info).map(i -> i.id().text()).collect(Collectors.joining(", ")));
 			return ExitCodes.USAGE;
 		}
 		out.print(render(page.get()));

@@ -6,7 +6,7 @@ import java.util.List;
 
 import com.google.inject.Injector;
 
-import bulwark.check.Budget;
+import bulwark.check.budget.Budget;
 import bulwark.check.DesignChecker;
 import bulwark.check.load.DesignLoader;
 import bulwark.check.policy.ReviewPolicy;

@@ -11,13 +11,13 @@ import com.google.gson.stream.JsonWriter;
 
 import bulwark.check.Preparation;
 import bulwark.check.PreparedDesign;
-import bulwark.check.compile.CaseOutcome;
+import bulwark.check.cases.CaseOutcome;
 import bulwark.check.compile.CaseRunner;
 import bulwark.check.compile.CompiledDesign;
-import bulwark.check.rules.Figures;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.OperatingPoint;
-import bulwark.engine.dc.SolveFailure;
+import bulwark.check.figures.Figures;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.OperatingPoint;
+import bulwark.engine.solve.SolveFailure;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;

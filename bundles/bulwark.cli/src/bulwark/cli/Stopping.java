@@ -2,9 +2,9 @@ package bulwark.cli;
 
 import java.io.PrintWriter;
 
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.Preparation;
-import bulwark.check.Severity;
+import bulwark.check.finding.Severity;
 import bulwark.check.report.TextReport;
 
 /** Says why a design could not be prepared, one located line per error, as the check's report writes them. */

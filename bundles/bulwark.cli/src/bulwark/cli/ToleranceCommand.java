@@ -21,6 +21,7 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
+import bulwark.check.policy.Distribution;
 
 @Command(name = "tolerance", description = {
 		"Tolerance analysis: every toleranced part at its limits (corners), then Monte Carlo samples, for the "
@@ -74,8 +75,7 @@ final class ToleranceCommand implements Callable<Integer> {
 		}
 		PreparedDesign design = ((Preparation.Ready) prepared).design();
 		ReviewPolicy chosen = design.policy();
-		MonteCarlo.Distribution distribution = MonteCarlo.Distribution
-				.valueOf(chosen.distribution().toUpperCase(Locale.ROOT));
+		Distribution distribution = chosen.distribution();
 		ToleranceAnalysis.Result result = ToleranceAnalysis.run(design.loaded().design(), chosen, samples, seed, distribution,
 				progress(err));
 		StringWriter report = new StringWriter();

@@ -23,7 +23,7 @@ public final class BulwarkUi {
 	 * From now on, checks every design under this review policy file, whatever the designs name (the
 	 * workbench's --policy); a policy with errors is refused with them, and the checker stays as it was.
 	 */
-	public static java.util.List<bulwark.check.Finding> usePolicy(java.nio.file.Path file) {
+	public static java.util.List<bulwark.check.finding.Finding> usePolicy(java.nio.file.Path file) {
 		DesignChecker base = checker();
 		bulwark.check.policy.PolicyFiles.Resolution r = base.policies().read(file);
 		if (r.policy().isEmpty()) {

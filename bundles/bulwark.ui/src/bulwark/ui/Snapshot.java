@@ -12,7 +12,7 @@ import org.eclipse.ui.IWorkbenchWindow;
 import org.eclipse.ui.PlatformUI;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.report.TextReport;
 import bulwark.ui.editor.DesignEditor;
 import bulwark.ui.editor.FindingAnnotation;

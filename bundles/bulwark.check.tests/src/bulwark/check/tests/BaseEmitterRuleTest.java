@@ -6,11 +6,12 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.rules.BaseEmitterRule;
+import bulwark.check.finding.RuleId;
 
 class BaseEmitterRuleTest {
-	private static final String ID = BaseEmitterRule.ID;
+	private static final RuleId ID = BaseEmitterRule.ID;
 
 	/**
 	 * A transistor whose emitter goes to the probe tip through 10 kΩ: 12 V on the tip reverse-biases the

@@ -6,11 +6,12 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.rules.BatteryChargeRule;
+import bulwark.check.finding.RuleId;
 
 class BatteryChargeRuleTest {
-	private static final String ID = BatteryChargeRule.ID;
+	private static final RuleId ID = BatteryChargeRule.ID;
 
 	/**
 	 * 24 V on the tip drives (24 − 3)/10 kΩ = 2.1 mA into a 3 V primary cell [closed form, Ohm's law], over

@@ -5,11 +5,12 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.rules.CapacitorVoltageRule;
+import bulwark.check.finding.RuleId;
 
 class CapacitorVoltageRuleTest {
-	private static final String ID = CapacitorVoltageRule.ID;
+	private static final RuleId ID = CapacitorVoltageRule.ID;
 
 	/** A 50 V capacitor straight across the terminals takes the whole 357.8 V mains peak (open at DC). */
 	private static final String OVER = """

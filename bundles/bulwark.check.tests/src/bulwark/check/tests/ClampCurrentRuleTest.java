@@ -6,9 +6,10 @@ import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
 import bulwark.check.rules.ClampCurrentRule;
+import bulwark.check.finding.RuleId;
 
 class ClampCurrentRuleTest {
-	private static final String ID = ClampCurrentRule.ID;
+	private static final RuleId ID = ClampCurrentRule.ID;
 
 	/**
 	 * The comparator of {@link ComparatorInputRuleTest} with 1 kΩ instead of 100 kΩ at its input and 325 V

@@ -7,9 +7,10 @@ import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
 import bulwark.check.rules.ComparatorInputRule;
+import bulwark.check.finding.RuleId;
 
 class ComparatorInputRuleTest {
-	private static final String ID = ComparatorInputRule.ID;
+	private static final RuleId ID = ComparatorInputRule.ID;
 
 	/**
 	 * 24 V on the probe tip into in+ through 100 kΩ; the input clamps to the 5 V rail about 0.5 V above it
@@ -58,7 +59,7 @@ class ComparatorInputRuleTest {
 		// failure names the input net and what would hold it, not where the factorisation broke
 		String floating = Fixtures.replaced(EXPOSED, "resistor RPD (a: inp, b: gnd) { value 1 MΩ rated power 125 mW }\n", "");
 		DesignResult r = Fixtures.checkAllowingTrouble(floating);
-		var solver = r.findings().stream().filter(f -> f.rule().equals("solver")).findFirst().orElseThrow();
+		var solver = r.findings().stream().filter(f -> f.rule().text().equals("solver")).findFirst().orElseThrow();
 		assertTrue(solver.message().contains("net inp, tip is held only by the input leakage of U1"), solver.message());
 		assertTrue(solver.message().contains("hold it with a resistor"), solver.message());
 		assertEquals("case 'normal, terminals open' could not be solved (floating net): net inp, tip is held only by "

@@ -12,12 +12,12 @@ import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignChecker;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.Status;
 import bulwark.check.rules.CheckContext;
 import bulwark.check.rules.ResistorPowerRule;
 import bulwark.check.rules.Rule;
-import bulwark.check.rules.RuleInfo;
+import bulwark.check.finding.RuleInfo;
 import bulwark.check.rules.RuleRegistry;
 
 /**
@@ -60,7 +60,7 @@ class CrashIsNeverAPassTest {
 	void theCheckerReportsTheCrashAsNotChecked() {
 		DesignResult r = checkWithCrash(ResistorPowerRuleTest.WITHIN);
 		assertEquals(Status.ERROR, r.status());
-		assertEquals("internal", r.findings().get(0).rule());
+		assertEquals("internal", r.findings().get(0).rule().text());
 		assertTrue(r.findings().get(0).message().contains("a fault planted by the test"), r.findings().toString());
 	}
 

@@ -8,11 +8,11 @@ import java.nio.file.Path;
 
 import org.junit.jupiter.api.Test;
 
-import bulwark.check.CaseResult;
-import bulwark.check.Concern;
+import bulwark.check.cases.CaseResult;
+import bulwark.check.finding.Concern;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.PartStress;
+import bulwark.check.finding.Finding;
+import bulwark.check.cases.PartStress;
 import bulwark.check.Status;
 
 /** The check as a whole: language errors, solver failures and the case figures. */

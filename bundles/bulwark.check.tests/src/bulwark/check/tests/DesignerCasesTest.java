@@ -7,10 +7,10 @@ import java.util.List;
 
 import org.junit.jupiter.api.Test;
 
-import bulwark.check.CaseResult;
+import bulwark.check.cases.CaseResult;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.PartStress;
+import bulwark.check.finding.Finding;
+import bulwark.check.cases.PartStress;
 import bulwark.check.Status;
 import bulwark.check.rules.ResistorPowerRule;
 
@@ -68,7 +68,7 @@ class DesignerCasesTest {
 		// two wires across the same terminals form a loop of ideal sources: the solver names the case's device
 		DesignResult r = Fixtures.checkAllowingTrouble(INPUT + "case \"double short\" { short TIP to COM short COM to TIP }\n");
 		assertEquals(Status.ERROR, r.status());
-		Finding f = r.findings().stream().filter(x -> x.rule().equals("solver")).findFirst().orElseThrow();
+		Finding f = r.findings().stream().filter(x -> x.rule().text().equals("solver")).findFirst().orElseThrow();
 		assertEquals("double short", f.caseName());
 		assertEquals(INPUT.split("\n").length + 1, f.location().line());
 		assertTrue(f.message().contains("voltage source loop"), f.message());

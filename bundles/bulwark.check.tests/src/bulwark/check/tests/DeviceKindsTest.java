@@ -5,9 +5,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 
-import bulwark.check.CaseResult;
+import bulwark.check.cases.CaseResult;
 import bulwark.check.DesignResult;
-import bulwark.check.PartStress;
+import bulwark.check.cases.PartStress;
 import bulwark.check.Status;
 
 /** Diodes, zeners, LEDs and transistors from the language reach the engine with their parameters. */

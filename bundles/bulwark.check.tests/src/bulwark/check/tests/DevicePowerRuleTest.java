@@ -5,11 +5,12 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.rules.DevicePowerRule;
+import bulwark.check.finding.RuleId;
 
 class DevicePowerRuleTest {
-	private static final String ID = DevicePowerRule.ID;
+	private static final RuleId ID = DevicePowerRule.ID;
 
 	/** 12 V across a 100 Ω indicator: P = V²/R = 1.44 W [closed form, Joule's law], over its rated 1 W. */
 	private static final String OVER = """

@@ -5,11 +5,12 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.rules.DiodeReverseRule;
+import bulwark.check.finding.RuleId;
 
 class DiodeReverseRuleTest {
-	private static final String ID = DiodeReverseRule.ID;
+	private static final RuleId ID = DiodeReverseRule.ID;
 
 	/** An indicator LED on the probe tip: with 12 V applied the wrong way round it takes all 12 V in reverse. */
 	private static final String EXPOSED = """

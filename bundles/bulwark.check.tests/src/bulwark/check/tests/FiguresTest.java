@@ -4,7 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import org.junit.jupiter.api.Test;
 
-import bulwark.check.rules.Figures;
+import bulwark.check.figures.Figures;
 
 /** Engineering notation in messages: three significant figures, SI prefixes (BIPM SI brochure, table 7). */
 class FiguresTest {

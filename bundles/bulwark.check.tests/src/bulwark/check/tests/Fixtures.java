@@ -1,5 +1,8 @@
 package bulwark.check.tests;
 
+import bulwark.check.finding.CheckerRules;
+import bulwark.check.finding.RuleId;
+import bulwark.check.rules.RuleRegistry;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
@@ -13,7 +16,7 @@ import org.eclipse.xtext.util.CancelIndicator;
 
 import bulwark.check.DesignChecker;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.load.DesignLoader;
 import bulwark.check.policy.DefaultPolicy;
 import bulwark.check.policy.PolicyFiles;
@@ -30,8 +33,7 @@ final class Fixtures {
 	 * The design as written: its own cases only (no mains or levels generated), ratings not derated, the
 	 * built-in minimum hysteresis — so that a rule's test can compare with a hand calculation of its own case.
 	 */
-	static final ReviewPolicy AS_WRITTEN = new ReviewPolicy("as written", List.of(), List.of(), List.of(), Map.of(),
-			DefaultPolicy.POLICY.minimumHysteresisVolts(), Optional.empty(), Map.of(), true, true, "uniform");
+	static final ReviewPolicy AS_WRITTEN = DefaultPolicy.POLICY.with("as written", ReviewPolicy.Abuse.NONE).notDerated();
 	private static DesignLoader loader;
 	private static DesignChecker asWritten;
 	private static DesignChecker underDefault;
@@ -76,7 +78,7 @@ final class Fixtures {
 	 * solve, a budget run out. A fixture meeting one of them proves nothing about the rule it tests, so the
 	 * checks below fail the test on them unless it asks for them with {@link #checkAllowingTrouble}.
 	 */
-	static final Set<String> TROUBLE = Set.of("internal", "solver", "budget");
+	static final Set<RuleId> TROUBLE = Set.copyOf(CheckerRules.NOT_CHECKED);
 
 	/** Checks the design as written (see {@link #AS_WRITTEN}); fails the test if the check was in trouble. */
 	static DesignResult check(String text) {
@@ -112,7 +114,7 @@ final class Fixtures {
 	 * Asserts what a "does not trigger" fixture must prove: the design was checked (not refused, every case
 	 * solved, at least one case run) and no finding of the rule came of it.
 	 */
-	static void assertSilent(DesignResult result, String rule) {
+	static void assertSilent(DesignResult result, RuleId rule) {
 		untroubled(result);
 		if (result.status() == bulwark.check.Status.ERROR || result.policy() == null) {
 			throw new AssertionError("the design was not checked: " + result.findings());
@@ -136,7 +138,7 @@ final class Fixtures {
 
 	/** A review policy from its text; fails the test when the text has errors. */
 	static ReviewPolicy policy(String text) {
-		PolicyFiles.Resolution r = new PolicyFiles(loader()).parse(text, "fixture.bulwark-policy");
+		PolicyFiles.Resolution r = new PolicyFiles(loader(), RuleRegistry.ids()).parse(text, "fixture.bulwark-policy");
 		return r.policy().orElseThrow(() -> new AssertionError("policy has errors: " + r.problems()));
 	}
 
@@ -146,13 +148,13 @@ final class Fixtures {
 	}
 
 	/** "line:rule" for each mark of the given rule in the text. */
-	static Set<String> expected(String text, String rule) {
+	static Set<String> expected(String text, RuleId rule) {
 		Set<String> marks = new TreeSet<>();
 		String[] lines = text.split("\n", -1);
 		for (int i = 0; i < lines.length; i++) {
 			Matcher m = MARK.matcher(lines[i]);
 			while (m.find()) {
-				if (m.group(1).equals(rule)) {
+				if (m.group(1).equals(rule.text())) {
 					marks.add((i + 1) + ":" + rule);
 				}
 			}
@@ -161,7 +163,7 @@ final class Fixtures {
 	}
 
 	/** "line:rule" for each finding of the given rule. */
-	static Set<String> actual(DesignResult result, String rule) {
+	static Set<String> actual(DesignResult result, RuleId rule) {
 		Set<String> found = new TreeSet<>();
 		for (Finding f : result.findings()) {
 			if (f.rule().equals(rule)) {
@@ -171,7 +173,7 @@ final class Fixtures {
 		return found;
 	}
 
-	static Finding only(DesignResult result, String rule) {
+	static Finding only(DesignResult result, RuleId rule) {
 		List<Finding> list = result.findings().stream().filter(f -> f.rule().equals(rule)).toList();
 		if (list.size() != 1) {
 			throw new AssertionError("expected one " + rule + " finding, got " + result.findings());

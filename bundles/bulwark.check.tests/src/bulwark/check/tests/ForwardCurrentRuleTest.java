@@ -6,12 +6,13 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.PartStress;
+import bulwark.check.finding.Finding;
+import bulwark.check.cases.PartStress;
 import bulwark.check.rules.ForwardCurrentRule;
+import bulwark.check.finding.RuleId;
 
 class ForwardCurrentRuleTest {
-	private static final String ID = ForwardCurrentRule.ID;
+	private static final RuleId ID = ForwardCurrentRule.ID;
 
 	/** A red LED from 12 V through 220 Ω: about (12 − 1.9)/220 = 46 mA, over its rated 30 mA. */
 	private static final String OVER = """

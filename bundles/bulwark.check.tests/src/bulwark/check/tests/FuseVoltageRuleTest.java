@@ -5,11 +5,13 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.rules.FuseVoltageRule;
+import bulwark.check.finding.RuleId;
+import bulwark.check.rules.ResistorPowerRule;
 
 class FuseVoltageRuleTest {
-	private static final String ID = FuseVoltageRule.ID;
+	private static final RuleId ID = FuseVoltageRule.ID;
 
 	/**
 	 * A 50 mA fuse before 100 Ω: 357.8 V drives 3.6 A, the fuse opens, and the case solved again with it open
@@ -36,7 +38,7 @@ class FuseVoltageRuleTest {
 		assertEquals(357.8, f.value(), 1e-4); // 1 GΩ open against 100 Ω [closed form, divider]
 		assertEquals(125, f.limit(), 0);
 		// with the fuse open, R1 is no longer stressed
-		Fixtures.assertSilent(r, "resistor-power");
+		Fixtures.assertSilent(r, ResistorPowerRule.ID);
 	}
 
 	@Test

@@ -6,12 +6,13 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.Severity;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Severity;
 import bulwark.check.rules.HysteresisRule;
+import bulwark.check.finding.RuleId;
 
 class HysteresisRuleTest {
-	private static final String ID = HysteresisRule.ID;
+	private static final RuleId ID = HysteresisRule.ID;
 
 	/**
 	 * A continuity input: 10 kΩ pull-up from a 3 V cell to the tip, the tip through R1 = 100 kΩ to the

@@ -6,8 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.InputLimits;
+import bulwark.check.finding.Finding;
+import bulwark.check.load.InputLimits;
 import bulwark.check.Status;
 
 /** Oversized files, overlong lines and binary data are refused with a located reason, before parsing. */

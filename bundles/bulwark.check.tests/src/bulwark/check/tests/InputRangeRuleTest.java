@@ -6,11 +6,12 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.rules.InputRangeRule;
+import bulwark.check.finding.RuleId;
 
 class InputRangeRuleTest {
-	private static final String ID = InputRangeRule.ID;
+	private static final RuleId ID = InputRangeRule.ID;
 
 	/**
 	 * A 5 V comparator whose inputs work up to 1.5 V below its supply (3.5 V); in_minus sits on a divider of

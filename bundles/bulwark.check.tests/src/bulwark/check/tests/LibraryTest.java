@@ -12,8 +12,10 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.Status;
+import bulwark.check.rules.ResistorPowerRule;
+import bulwark.check.rules.RatingMissingRule;
 
 
 /** Part definitions from library files: found beside the design or on the library path, never outside. */
@@ -47,12 +49,12 @@ class LibraryTest {
 		write(dir, "lib/parts.bulwark", LIBRARY);
 		DesignResult r = Fixtures.checker().check(write(dir, "d.bulwark", DESIGN));
 		assertEquals(Status.FAIL, r.status(), r.findings().toString());
-		Finding f = Fixtures.only(r, "resistor-power");
+		Finding f = Fixtures.only(r, ResistorPowerRule.ID);
 		assertEquals("R1", f.part());
 		assertEquals(0.04 * 0.04 * 100, f.value(), 1e-12);
 		assertEquals(0.125, f.limit(), 0); // from the definition, not derated under the as-written policy
 		// R2 overrides the power and keeps the package: nothing missing, nothing over
-		assertTrue(Fixtures.actual(r, "rating-missing").isEmpty(), r.findings().toString());
+		assertTrue(Fixtures.actual(r, RatingMissingRule.ID).isEmpty(), r.findings().toString());
 	}
 
 	@Test

@@ -26,9 +26,8 @@ class MainsWaveformTest {
 	private static final double OMEGA = 2 * Math.PI * 50;
 
 	/** Only 230 V mains across the terminals; nothing derated, so the figures are the solved ones. */
-	private static final ReviewPolicy MAINS_ONLY = new ReviewPolicy("230 V mains only",
-			List.of(new ReviewPolicy.MainsSystem(230, 10)), List.of(), List.of(), Map.of(),
-			DefaultPolicy.POLICY.minimumHysteresisVolts(), Optional.empty(), Map.of(), true, true, "uniform");
+	private static final ReviewPolicy MAINS_ONLY = DefaultPolicy.POLICY.with("230 V mains only",
+			new ReviewPolicy.Abuse(List.of(new ReviewPolicy.MainsSystem(230, 10)), List.of(), List.of())).notDerated();
 
 	private static final String HEAD = """
 			design "mains across the terminals"

@@ -8,11 +8,11 @@ import java.time.Duration;
 import org.eclipse.xtext.util.CancelIndicator;
 import org.junit.jupiter.api.Test;
 
-import bulwark.check.Concern;
+import bulwark.check.finding.Concern;
 import bulwark.check.DesignChecker;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.Severity;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Severity;
 import bulwark.check.Status;
 
 /**
@@ -33,7 +33,7 @@ class PathologicalCircuitsTest {
 	}
 
 	private static Finding solverFinding(DesignResult r) {
-		return r.findings().stream().filter(f -> f.rule().equals("solver")).findFirst()
+		return r.findings().stream().filter(f -> f.rule().text().equals("solver")).findFirst()
 				.orElseThrow(() -> new AssertionError("no solver finding: " + r.findings()));
 	}
 
@@ -133,7 +133,7 @@ class PathologicalCircuitsTest {
 				CancelIndicator.NullImpl);
 		assertEquals(Status.ERROR, r.status());
 		Finding f = r.findings().get(0);
-		assertEquals("budget", f.rule());
+		assertEquals("budget", f.rule().text());
 		assertEquals(Concern.SOLVER, f.concern());
 		assertTrue(f.message().startsWith("not checked: the check took longer than its budget"), f.message());
 	}

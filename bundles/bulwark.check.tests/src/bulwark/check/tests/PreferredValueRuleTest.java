@@ -6,13 +6,14 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.Severity;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Severity;
 import bulwark.check.rules.PreferredValueRule;
 import bulwark.check.series.Iec60063;
+import bulwark.check.finding.RuleId;
 
 class PreferredValueRuleTest {
-	private static final String ID = PreferredValueRule.ID;
+	private static final RuleId ID = PreferredValueRule.ID;
 
 	/** 333 kΩ ± 5 % is no E24 value; 330 kΩ is [IEC 60063 E24, docs/sources.md#preferred-values]. */
 	private static final String COMPUTED = """

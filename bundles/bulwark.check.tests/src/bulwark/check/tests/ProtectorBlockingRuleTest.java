@@ -5,12 +5,13 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.PartStress;
+import bulwark.check.finding.Finding;
+import bulwark.check.cases.PartStress;
 import bulwark.check.rules.ProtectorBlockingRule;
+import bulwark.check.finding.RuleId;
 
 class ProtectorBlockingRuleTest {
-	private static final String ID = ProtectorBlockingRule.ID;
+	private static final RuleId ID = ProtectorBlockingRule.ID;
 
 	/**
 	 * A protector tripping at 20 mA in series with 1 kΩ: at 357.8 V it limits, and holds off what the

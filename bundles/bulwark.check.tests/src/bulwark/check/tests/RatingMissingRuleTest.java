@@ -6,12 +6,13 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Severity;
+import bulwark.check.finding.Severity;
 import bulwark.check.Status;
 import bulwark.check.rules.RatingMissingRule;
+import bulwark.check.finding.RuleId;
 
 class RatingMissingRuleTest {
-	private static final String ID = RatingMissingRule.ID;
+	private static final RuleId ID = RatingMissingRule.ID;
 
 	private static final String MISSING = """
 			design "unrated"

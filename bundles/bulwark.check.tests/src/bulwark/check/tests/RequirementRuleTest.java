@@ -5,14 +5,15 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 
-import bulwark.check.Concern;
+import bulwark.check.finding.Concern;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.Severity;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Severity;
 import bulwark.check.rules.RequirementRule;
+import bulwark.check.finding.RuleId;
 
 class RequirementRuleTest {
-	private static final String ID = RequirementRule.ID;
+	private static final RuleId ID = RequirementRule.ID;
 
 	/**
 	 * A 9 V cell (1.7 Ω) behind 680 Ω to the core, read back through 100 kΩ over 47 kΩ. Open: 9/147 681.7 Ω =

@@ -5,15 +5,16 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 
-import bulwark.check.Concern;
+import bulwark.check.finding.Concern;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.Severity;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Severity;
 import bulwark.check.Status;
 import bulwark.check.rules.ResistorPowerRule;
+import bulwark.check.finding.RuleId;
 
 class ResistorPowerRuleTest {
-	private static final String ID = ResistorPowerRule.ID;
+	private static final RuleId ID = ResistorPowerRule.ID;
 
 	/** 12 V across 150 Ω + 100 Ω: I = 48 mA, P(150 Ω) = I²R = 0.3456 W [closed form, Joule's law]. */
 	static final String OVER = """

@@ -5,13 +5,15 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 
-import bulwark.check.Concern;
+import bulwark.check.finding.Concern;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.rules.ResistorVoltageRule;
+import bulwark.check.finding.RuleId;
+import bulwark.check.rules.ResistorPowerRule;
 
 class ResistorVoltageRuleTest {
-	private static final String ID = ResistorVoltageRule.ID;
+	private static final RuleId ID = ResistorVoltageRule.ID;
 
 	/**
 	 * 357.8 V (253 V + 10 % peak, docs/sources.md#mains-and-surges) straight across one 1 MΩ 0805 resistor: 357.8 V against the
@@ -41,7 +43,7 @@ class ResistorVoltageRuleTest {
 		assertEquals(150, f.limit(), 0);
 		assertEquals(Concern.VOLTAGE, f.concern());
 		assertTrue(f.message().contains("0805 package's limiting element voltage of 150 V"), f.message());
-		Fixtures.assertSilent(r, "resistor-power");
+		Fixtures.assertSilent(r, ResistorPowerRule.ID);
 	}
 
 	@Test

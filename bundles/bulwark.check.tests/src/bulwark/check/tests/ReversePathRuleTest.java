@@ -5,14 +5,15 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 
-import bulwark.check.Concern;
+import bulwark.check.finding.Concern;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.policy.ReviewPolicy;
 import bulwark.check.rules.ReversePathRule;
+import bulwark.check.finding.RuleId;
 
 class ReversePathRuleTest {
-	private static final String ID = ReversePathRule.ID;
+	private static final RuleId ID = ReversePathRule.ID;
 	/** A policy that applies 24 V both ways across every pair of terminals, and no mains. */
 	private static final ReviewPolicy BOTH_WAYS = Fixtures.policy("""
 			policy "24 V both ways"

@@ -12,15 +12,17 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-import bulwark.check.CaseResult;
+import bulwark.check.cases.CaseResult;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.Severity;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Severity;
 import bulwark.check.Status;
 import bulwark.check.policy.DefaultPolicy;
 import bulwark.check.policy.PolicyFiles;
 import bulwark.check.policy.ReviewPolicy;
 import bulwark.lang.design.PartKind;
+import bulwark.check.rules.ResistorPowerRule;
+import bulwark.check.rules.RatingMissingRule;
 
 /** The review policy: its language, how it resolves over the built-in one, and what it changes in a check. */
 class ReviewPolicyTest {
@@ -56,7 +58,7 @@ class ReviewPolicyTest {
 		// not named in the file: the built-in NASA EEE-INST-002 figure stays
 		assertEquals(0.8, p.derating(PartKind.RESISTOR, "voltage").factor(), 0);
 		assertEquals(0.02, p.minimumHysteresisVolts().orElseThrow(), 1e-15);
-		assertEquals(Severity.ERROR, p.severity("rating-missing", Severity.WARNING));
+		assertEquals(Severity.ERROR, p.severity(RatingMissingRule.ID, Severity.WARNING));
 		assertTrue(p.waiverNeedsName());
 		assertFalse(p.waiverNeedsJustification());
 	}
@@ -71,7 +73,7 @@ class ReviewPolicyTest {
 
 	@Test
 	void aSeverityForAnUnknownRuleIsALocatedError() {
-		PolicyFiles.Resolution r = new PolicyFiles(Fixtures.loader()).parse("""
+		PolicyFiles.Resolution r = new PolicyFiles(Fixtures.loader(), bulwark.check.rules.RuleRegistry.ids()).parse("""
 				policy "typo"
 				  severity "resistor-powr" info
 				""", "team.bulwark-policy");
@@ -82,7 +84,7 @@ class ReviewPolicyTest {
 
 	@Test
 	void policyLanguageErrorsAreLocated() {
-		PolicyFiles.Resolution r = new PolicyFiles(Fixtures.loader()).parse("""
+		PolicyFiles.Resolution r = new PolicyFiles(Fixtures.loader(), bulwark.check.rules.RuleRegistry.ids()).parse("""
 				policy "wrong"
 				  derate resistor reverse to 150 %
 				  severity "hysteresis" off
@@ -108,7 +110,7 @@ class ReviewPolicyTest {
 		DesignResult r = Fixtures.check(ACROSS, p);
 		assertTrue(r.cases().stream().anyMatch(c -> c.name().startsWith("230 V 60 Hz mains (358 V peak)")),
 				r.cases().toString());
-		PolicyFiles.Resolution wrong = new PolicyFiles(Fixtures.loader()).parse("policy \"x\"\n  mains 230 V 50 V\n",
+		PolicyFiles.Resolution wrong = new PolicyFiles(Fixtures.loader(), bulwark.check.rules.RuleRegistry.ids()).parse("policy \"x\"\n  mains 230 V 50 V\n",
 				"wrong.bulwark-policy");
 		assertTrue(wrong.problems().toString().contains("the mains frequency takes a frequency (Hz), not a voltage"),
 				wrong.problems().toString());
@@ -129,7 +131,7 @@ class ReviewPolicyTest {
 		assertEquals(-132 * Math.sqrt(2), voltage(r, 4), 1e-6);
 		// power is thermal: V_rms²/R = 253²/100 kΩ = 0.640 W over the cycle (not 1.28 W at the crest), over
 		// 1 W derated to 60 % = 0.6 W (NASA EEE-INST-002) [closed form]
-		Finding power = Fixtures.only(r, "resistor-power");
+		Finding power = Fixtures.only(r, ResistorPowerRule.ID);
 		assertEquals(253 * 253 / 100e3, power.value(), 1e-9);
 		assertEquals(0.6, power.limit(), 1e-12);
 		assertTrue(power.message().contains("average power over the cycle 640 mW in case '230 V 50 Hz mains (358 V peak)'"),
@@ -157,7 +159,7 @@ class ReviewPolicyTest {
 	void severityChangesApply() {
 		String unrated = Fixtures.replaced(ACROSS, " rated power 1 W", "");
 		DesignResult r = Fixtures.check(unrated, Fixtures.policy(POLICY));
-		assertEquals(Severity.ERROR, Fixtures.only(r, "rating-missing").severity());
+		assertEquals(Severity.ERROR, Fixtures.only(r, RatingMissingRule.ID).severity());
 		assertEquals(Status.FAIL, r.status());
 	}
 
@@ -166,12 +168,12 @@ class ReviewPolicyTest {
 		String waived = ACROSS + "waive \"resistor-power\" on R1 because \"\" by \"J. Okafor\" on \"2026-11-30\"\n";
 		// the built-in policy needs a justification: the waiver is not applied and says why
 		DesignResult strict = Fixtures.checkUnderDefault(waived);
-		assertTrue(strict.findings().stream().anyMatch(f -> f.rule().equals("waiver") && f.severity() == Severity.ERROR
+		assertTrue(strict.findings().stream().anyMatch(f -> f.rule().text().equals("waiver") && f.severity() == Severity.ERROR
 				&& f.message().contains("needs a justification")), strict.findings().toString());
-		assertFalse(Fixtures.only(strict, "resistor-power").waived());
+		assertFalse(Fixtures.only(strict, ResistorPowerRule.ID).waived());
 		// a policy that needs only a name accepts it
 		DesignResult lenient = Fixtures.check(waived, Fixtures.policy(Fixtures.replaced(POLICY, "derate resistor power to 50 %", "")));
-		assertTrue(Fixtures.only(lenient, "resistor-power").waived(), lenient.findings().toString());
+		assertTrue(Fixtures.only(lenient, ResistorPowerRule.ID).waived(), lenient.findings().toString());
 	}
 
 	@Test

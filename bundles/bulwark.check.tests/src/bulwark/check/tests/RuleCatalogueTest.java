@@ -24,7 +24,7 @@ class RuleCatalogueTest {
 	void everyRuleHasExplanationAndTest() throws IOException {
 		Set<String> ids = new HashSet<>();
 		for (Rule rule : RuleRegistry.all()) {
-			String id = rule.info().id();
+			String id = rule.info().id().text();
 			assertTrue(ids.add(id), "duplicate rule ID " + id);
 			Path doc = Fixtures.root().resolve("docs/rules/" + id + ".md");
 			assertTrue(Files.isRegularFile(doc), "missing explanation " + doc);

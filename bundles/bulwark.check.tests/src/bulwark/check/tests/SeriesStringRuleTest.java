@@ -5,13 +5,15 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 
-import bulwark.check.Concern;
+import bulwark.check.finding.Concern;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.rules.SeriesStringRule;
+import bulwark.check.finding.RuleId;
+import bulwark.check.rules.ResistorVoltageRule;
 
 class SeriesStringRuleTest {
-	private static final String ID = SeriesStringRule.ID;
+	private static final RuleId ID = SeriesStringRule.ID;
 
 	/**
 	 * 357.8 V (253 V + 10 % peak, docs/sources.md#mains-and-surges) across a string of 1 MΩ, 1.2 MΩ and 100 kΩ 0805 resistors: one
@@ -44,7 +46,7 @@ class SeriesStringRuleTest {
 		assertTrue(f.message().startsWith("series string R1–R2–R3 carries 358 V in case 'mains peak'; R2 takes 187 V"), f.message());
 		assertTrue(f.message().contains("unequal (R1 43 %, R2 52 %, R3 4 %)"), f.message());
 		// the members are the string's business: resistor-voltage stays silent about them
-		Fixtures.assertSilent(r, "resistor-voltage");
+		Fixtures.assertSilent(r, ResistorVoltageRule.ID);
 	}
 
 	@Test

@@ -7,13 +7,14 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.Severity;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Severity;
 import bulwark.check.policy.ReviewPolicy;
 import bulwark.check.rules.SurgeEnergyRule;
+import bulwark.check.finding.RuleId;
 
 class SurgeEnergyRuleTest {
-	private static final String ID = SurgeEnergyRule.ID;
+	private static final RuleId ID = SurgeEnergyRule.ID;
 	private static final ReviewPolicy SURGE = Fixtures.policy("""
 			policy "surge only"
 			  mains none

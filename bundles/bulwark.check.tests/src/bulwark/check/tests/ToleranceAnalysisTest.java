@@ -18,6 +18,7 @@ import bulwark.check.tolerance.ToleranceAnalysis;
 import bulwark.check.tolerance.Toleranced;
 import bulwark.check.tolerance.Yield;
 import bulwark.lang.design.Design;
+import bulwark.check.policy.Distribution;
 
 /** Corners and Monte Carlo against closed forms, reproducibility and yields. */
 class ToleranceAnalysisTest {
@@ -43,7 +44,7 @@ class ToleranceAnalysisTest {
 		return loaded.design();
 	}
 
-	private static ToleranceAnalysis.Result run(int samples, long seed, MonteCarlo.Distribution d) {
+	private static ToleranceAnalysis.Result run(int samples, long seed, Distribution d) {
 		return ToleranceAnalysis.run(design(), Fixtures.AS_WRITTEN, samples, seed, d, Progress.NONE);
 	}
 
@@ -59,7 +60,7 @@ class ToleranceAnalysisTest {
 
 	@Test
 	void cornersOfTheTestCurrentAndBatteryLife() {
-		ToleranceAnalysis.Result r = run(0, 1, MonteCarlo.Distribution.UNIFORM);
+		ToleranceAnalysis.Result r = run(0, 1, Distribution.UNIFORM);
 		// into a short only R_LIMIT matters: 9/(1.7 + 680·1.05) and 9/(1.7 + 680·0.95), the 1 mΩ short beside
 		// [closed form, Ohm's law]
 		Corners.Range test = corner(r, "test current CORE–SCREEN");
@@ -73,9 +74,9 @@ class ToleranceAnalysisTest {
 
 	@Test
 	void monteCarloIsReproducibleAndInsideTheCorners() {
-		ToleranceAnalysis.Result a = run(200, 42, MonteCarlo.Distribution.UNIFORM);
-		ToleranceAnalysis.Result b = run(200, 42, MonteCarlo.Distribution.UNIFORM);
-		ToleranceAnalysis.Result c = run(200, 43, MonteCarlo.Distribution.UNIFORM);
+		ToleranceAnalysis.Result a = run(200, 42, Distribution.UNIFORM);
+		ToleranceAnalysis.Result b = run(200, 42, Distribution.UNIFORM);
+		ToleranceAnalysis.Result c = run(200, 43, Distribution.UNIFORM);
 		assertEquals(a.statistics(), b.statistics(), "the same seed gives the same run, whatever the threads");
 		assertNotEquals(a.statistics(), c.statistics());
 		for (Statistics s : a.statistics()) {
@@ -87,7 +88,7 @@ class ToleranceAnalysisTest {
 
 	@Test
 	void yieldsCountTheSamplesThatMeetEachRequirement() {
-		ToleranceAnalysis.Result r = run(300, 7, MonteCarlo.Distribution.UNIFORM);
+		ToleranceAnalysis.Result r = run(300, 7, Distribution.UNIFORM);
 		Yield life = r.yields().get(0), test = r.yields().get(1);
 		assertEquals(300, life.met(), life.toString()); // the corners' low life, 8121 h, still exceeds 8000 h
 		// test current ≤ 13.5 mA ⇔ R_LIMIT ≥ 9/13.5 mA − 1.7 Ω = 664.97 Ω: uniform over 646…714 Ω, a share of
@@ -102,7 +103,7 @@ class ToleranceAnalysisTest {
 		double sum = 0, squares = 0, extreme = 0;
 		int n = 20000;
 		for (int i = 0; i < n; i++) {
-			Map<String, Double> f = MonteCarlo.draw(one, 5, i, MonteCarlo.Distribution.NORMAL);
+			Map<String, Double> f = MonteCarlo.draw(one, 5, i, Distribution.NORMAL);
 			double x = f.get("R.value") - 1;
 			sum += x;
 			squares += x * x;

@@ -5,12 +5,13 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.PartStress;
+import bulwark.check.finding.Finding;
+import bulwark.check.cases.PartStress;
 import bulwark.check.rules.TransistorCurrentRule;
+import bulwark.check.finding.RuleId;
 
 class TransistorCurrentRuleTest {
-	private static final String ID = TransistorCurrentRule.ID;
+	private static final RuleId ID = TransistorCurrentRule.ID;
 
 	/** A saturated transistor with 10 Ω from 5 V in its collector: nearly 0.5 A, over its rated 100 mA. */
 	private static final String OVER = """

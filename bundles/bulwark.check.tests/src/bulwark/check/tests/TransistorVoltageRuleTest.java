@@ -5,11 +5,12 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.rules.TransistorVoltageRule;
+import bulwark.check.finding.RuleId;
 
 class TransistorVoltageRuleTest {
-	private static final String ID = TransistorVoltageRule.ID;
+	private static final RuleId ID = TransistorVoltageRule.ID;
 
 	/** A transistor held off with its collector at the probe tip: the whole 100 V applied is across it. */
 	private static final String OVER = """

@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.Status;
 import bulwark.check.rules.ResistorPowerRule;
 
@@ -34,9 +34,9 @@ class WaiverTest {
 		DesignResult r = Fixtures.check(Fixtures.replaced(OVER, "150 Ω", "1.5 kΩ")
 				+ "waive \"resistor-power\" on R1 because \"x\" by \"y\" on \"2026-11-30\"\n"
 				+ "waive \"no-such-rule\" on R1 because \"x\" by \"y\" on \"2026-11-30\"\n");
-		assertTrue(r.findings().stream().anyMatch(f -> f.rule().equals("waiver") && f.message().contains("matches no finding")),
+		assertTrue(r.findings().stream().anyMatch(f -> f.rule().text().equals("waiver") && f.message().contains("matches no finding")),
 				r.findings().toString());
-		assertTrue(r.findings().stream().anyMatch(f -> f.rule().equals("waiver") && f.message().contains("'no-such-rule'")));
+		assertTrue(r.findings().stream().anyMatch(f -> f.rule().text().equals("waiver") && f.message().contains("'no-such-rule'")));
 		assertEquals(Status.PASS, r.status());
 	}
 

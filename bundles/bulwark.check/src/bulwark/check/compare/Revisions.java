@@ -8,11 +8,11 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 
-import bulwark.check.CaseResult;
+import bulwark.check.cases.CaseResult;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.PartStress;
-import bulwark.check.Severity;
+import bulwark.check.finding.Finding;
+import bulwark.check.cases.PartStress;
+import bulwark.check.finding.Severity;
 
 /**
  * What changed between two revisions of a design, for review: findings that are new or fixed (a finding's

@@ -6,7 +6,7 @@ import java.util.Locale;
 import java.util.Map;
 
 import bulwark.check.policy.ReviewPolicy;
-import bulwark.check.rules.Figures;
+import bulwark.check.figures.Figures;
 import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Device;
 import bulwark.engine.circuit.Resistor;
@@ -22,6 +22,8 @@ import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
 import bulwark.lang.design.Terminal;
 import bulwark.lang.units.Quantities;
+import bulwark.check.cases.FaultCase;
+import bulwark.check.cases.CaseKind;
 
 /**
  * The cases a design is checked under: the normal condition (terminals open, then each terminal shorted to

@@ -10,10 +10,12 @@ import bulwark.check.policy.ReviewPolicy;
 import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Device;
 import bulwark.engine.circuit.Fuse;
-import bulwark.engine.dc.DcResult;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.DcSolver;
-import bulwark.engine.dc.PreparedCircuit;
+import bulwark.engine.solve.DcResult;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.DcSolver;
+import bulwark.engine.solve.PreparedCircuit;
+import bulwark.check.cases.FaultCase;
+import bulwark.check.cases.CaseOutcome;
 
 /**
  * Solves a compiled design in each of its cases. Cases that add the same devices on the same nets (both
@@ -38,7 +40,7 @@ public final class CaseRunner {
 		Map<String, PreparedCircuit> prepared = new HashMap<>();
 		List<CaseOutcome> outcomes = new ArrayList<>();
 		for (FaultCase c : CaseGenerator.cases(design, policy)) {
-			bulwark.check.Budget.checkpoint("case '" + c.name() + "'");
+			bulwark.check.budget.Budget.checkpoint("case '" + c.name() + "'");
 			PreparedCircuit circuit = prepared.computeIfAbsent(shape(c), k -> DcSolver.prepare(apply(design.circuit(), c)));
 			for (Device d : c.added()) {
 				circuit = circuit.with(d.name(), d);

@@ -6,6 +6,7 @@ import java.util.Set;
 import bulwark.engine.circuit.Circuit;
 import bulwark.lang.design.Design;
 import bulwark.lang.design.Part;
+import bulwark.check.parts.Values;
 
 /**
  * A design together with the engine circuit made from it; {@code parts} maps device names back to the text,

@@ -29,6 +29,8 @@ import bulwark.lang.design.PinBinding;
 import bulwark.lang.design.Terminal;
 import bulwark.lang.design.Action;
 import bulwark.lang.design.Case;
+import bulwark.check.parts.Settings;
+import bulwark.check.parts.Values;
 
 /**
  * Turns a validated design into the engine's circuit. Only nets that some pin uses become circuit nets:

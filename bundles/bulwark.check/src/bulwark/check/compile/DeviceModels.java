@@ -10,6 +10,8 @@ import bulwark.engine.device.MosfetModel;
 import bulwark.engine.device.ProtectorModel;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
+import bulwark.check.parts.Settings;
+import bulwark.check.parts.Values;
 
 /** The engine's device models for a part, from its parameters and the defaults the language documents. */
 final class DeviceModels {

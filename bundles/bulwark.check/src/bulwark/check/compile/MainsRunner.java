@@ -7,7 +7,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.TreeSet;
 
-import bulwark.check.rules.Figures;
+import bulwark.check.figures.Figures;
 import bulwark.check.stress.Measure;
 import bulwark.check.stress.StressCatalog;
 import bulwark.engine.circuit.Capacitor;
@@ -15,17 +15,20 @@ import bulwark.engine.circuit.Device;
 import bulwark.engine.circuit.Inductor;
 import bulwark.engine.circuit.Fuse;
 import bulwark.engine.circuit.VoltageSource;
-import bulwark.engine.dc.DcResult;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.DcSolver;
-import bulwark.engine.dc.PeriodicSteadyState;
-import bulwark.engine.dc.PreparedCircuit;
-import bulwark.engine.dc.SolveFailure;
-import bulwark.engine.dc.TransientResult;
-import bulwark.engine.dc.TransientSolver;
+import bulwark.engine.solve.DcResult;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.DcSolver;
+import bulwark.engine.solve.PeriodicSteadyState;
+import bulwark.engine.solve.PreparedCircuit;
+import bulwark.engine.solve.SolveFailure;
+import bulwark.engine.solve.TransientResult;
+import bulwark.engine.solve.TransientSolver;
 import bulwark.engine.source.Sine;
 import bulwark.engine.source.SwitchedSine;
 import bulwark.lang.design.Part;
+import bulwark.check.cases.FaultCase;
+import bulwark.check.cases.CaseOutcome;
+import bulwark.check.cases.SolvedCycle;
 
 /**
  * Solves a mains case as the sine it is, across its pair of terminals, over the cycle.

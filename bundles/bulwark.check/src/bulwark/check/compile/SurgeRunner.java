@@ -9,13 +9,15 @@ import java.util.TreeSet;
 
 import bulwark.check.stress.Measure;
 import bulwark.check.stress.StressCatalog;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.DcSolver;
-import bulwark.engine.dc.PreparedCircuit;
-import bulwark.engine.dc.TransientResult;
-import bulwark.engine.dc.TransientSolver;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.DcSolver;
+import bulwark.engine.solve.PreparedCircuit;
+import bulwark.engine.solve.TransientResult;
+import bulwark.engine.solve.TransientSolver;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
+import bulwark.check.cases.FaultCase;
+import bulwark.check.cases.CaseOutcome;
 
 /**
  * Solves a surge case as a transient and keeps the instants that matter: for every part and every stress,

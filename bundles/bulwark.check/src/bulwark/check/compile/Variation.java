@@ -4,6 +4,8 @@ import java.util.Map;
 import java.util.Optional;
 
 import bulwark.lang.design.Part;
+import bulwark.check.parts.Settings;
+import bulwark.check.parts.Values;
 
 /** Parameter values scaled by factors, each keyed "PART.parameter": one corner or one Monte Carlo sample. */
 public record Variation(Map<String, Double> factors) implements Values {

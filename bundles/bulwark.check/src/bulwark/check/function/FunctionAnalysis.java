@@ -9,11 +9,11 @@ import java.util.Optional;
 import bulwark.check.compile.CompiledDesign;
 import bulwark.engine.circuit.Diode;
 import bulwark.engine.circuit.Resistor;
-import bulwark.engine.dc.DcResult;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.DcSolver;
-import bulwark.engine.dc.DcSweep;
-import bulwark.engine.dc.PreparedCircuit;
+import bulwark.engine.solve.DcResult;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.DcSolver;
+import bulwark.engine.solve.DcSweep;
+import bulwark.engine.solve.PreparedCircuit;
 import bulwark.engine.device.DiodeModel;
 import bulwark.engine.device.LedColour;
 import bulwark.lang.design.Part;
@@ -53,7 +53,7 @@ public final class FunctionAnalysis {
 		List<PairFigures> pairs = new ArrayList<>();
 		DcSolver solver = new DcSolver();
 		for (Terminal[] pair : MeasuringPairs.of(design)) {
-			bulwark.check.Budget.checkpoint("the function figures across " + pair[0].getName() + " and " + pair[1].getName());
+			bulwark.check.budget.Budget.checkpoint("the function figures across " + pair[0].getName() + " and " + pair[1].getName());
 			String name = "resistance under test";
 			int a = design.circuit().netIndex(pair[0].getNet().getName());
 			int b = design.circuit().netIndex(pair[1].getNet().getName());
@@ -61,7 +61,7 @@ public final class FunctionAnalysis {
 			DcResult shorted = solver.solve(prepared.with(name, new Resistor(name, a, b, SHORT)));
 			if (!(shorted instanceof DcSolution s)) {
 				problems.add("the terminals " + pair[0].getName() + " and " + pair[1].getName() + " shorted: "
-						+ ((bulwark.engine.dc.SolveFailure) shorted).message());
+						+ ((bulwark.engine.solve.SolveFailure) shorted).message());
 				continue;
 			}
 			double testCurrent = Math.abs(s.device(name).current());

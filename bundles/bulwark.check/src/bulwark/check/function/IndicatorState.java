@@ -3,9 +3,9 @@ package bulwark.check.function;
 import java.util.Optional;
 
 import bulwark.check.compile.CompiledDesign;
-import bulwark.check.compile.Settings;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.OperatingPoint;
+import bulwark.check.parts.Settings;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.OperatingPoint;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
 

@@ -6,11 +6,11 @@ import java.util.function.Predicate;
 
 import bulwark.check.compile.CompiledDesign;
 import bulwark.engine.circuit.Resistor;
-import bulwark.engine.dc.DcResult;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.DcSolver;
-import bulwark.engine.dc.DcSweep;
-import bulwark.engine.dc.PreparedCircuit;
+import bulwark.engine.solve.DcResult;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.DcSolver;
+import bulwark.engine.solve.DcSweep;
+import bulwark.engine.solve.PreparedCircuit;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.Terminal;
 

@@ -26,8 +26,10 @@ public final class DefaultPolicy {
 	private DefaultPolicy() {
 	}
 
-	public static final ReviewPolicy POLICY = new ReviewPolicy("built-in policy", MAINS, List.of(), List.of(),
-			derating(), Optional.of(MINIMUM_HYSTERESIS_VOLTS), Optional.empty(), Map.of(), true, true, "uniform");
+	public static final ReviewPolicy POLICY = new ReviewPolicy("built-in policy",
+			new ReviewPolicy.Abuse(MAINS, List.of(), List.of()), derating(),
+			new ReviewPolicy.HysteresisMinimum(Optional.of(MINIMUM_HYSTERESIS_VOLTS), Optional.empty()), Map.of(),
+			new ReviewPolicy.WaiverDemands(true, true), Distribution.UNIFORM);
 
 	static Map<String, Derating> derating() {
 		Map<String, Derating> d = new LinkedHashMap<>();

@@ -11,14 +11,14 @@ import java.util.Set;
 import java.util.function.Consumer;
 import java.util.stream.Collectors;
 
-import bulwark.check.Concern;
-import bulwark.check.Finding;
-import bulwark.check.Locations;
-import bulwark.check.Severity;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.CheckerRules;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.Locations;
+import bulwark.check.finding.Severity;
 import bulwark.check.policy.ReviewPolicy.Derating;
 import bulwark.check.policy.ReviewPolicy.SurgeLevel;
-import bulwark.check.rules.Rule;
-import bulwark.check.rules.RuleRegistry;
 import bulwark.lang.design.DcLevel;
 import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.MainsSystem;
@@ -42,19 +42,22 @@ public final class PolicyCompiler {
 	private PolicyCompiler() {
 	}
 
-	public static ReviewPolicy compile(Policy policy, Consumer<Finding> problems) {
+	/**
+	 * @param rules the rules whose severity a policy may set (the check's registry, passed in so that the
+	 *              policy does not depend on the rules)
+	 */
+	public static ReviewPolicy compile(Policy policy, Set<RuleId> rules, Consumer<Finding> problems) {
 		ReviewPolicy base = DefaultPolicy.POLICY;
 		List<ReviewPolicy.MainsSystem> mains = new ArrayList<>();
 		boolean noMains = false;
 		List<Double> levels = new ArrayList<>();
 		List<SurgeLevel> surges = new ArrayList<>();
 		Map<String, Derating> derating = new LinkedHashMap<>(base.derating());
-		Map<String, Severity> severities = new HashMap<>(base.severities());
+		Map<RuleId, Severity> severities = new HashMap<>(base.severities());
 		Optional<Double> minVolts = base.minimumHysteresisVolts();
 		Optional<Double> minOhms = base.minimumHysteresisOhms();
 		boolean needsJustification = base.waiverNeedsJustification(), needsName = base.waiverNeedsName();
-		String distribution = base.distribution();
-		Set<String> rules = RuleRegistry.all().stream().map(Rule::info).map(i -> i.id()).collect(Collectors.toSet());
+		Distribution distribution = base.distribution();
 		for (PolicyEntry e : policy.getEntries()) {
 			if (e instanceof MainsSystem m && m.isNone()) {
 				noMains = true;
@@ -76,22 +79,26 @@ public final class PolicyCompiler {
 				minVolts = ohms ? Optional.empty() : Optional.of(value);
 				minOhms = ohms ? Optional.of(value) : Optional.empty();
 			} else if (e instanceof SeverityChange s) {
-				if (!rules.contains(s.getRule())) {
-					problems.accept(Finding.plain("policy", Concern.STRUCTURE, Severity.ERROR, "the policy sets the severity of '"
-							+ s.getRule() + "', which is no rule Bulwark has (rules: " + String.join(", ", rules.stream().sorted().toList())
-							+ ")", null, Locations.of(s, DesignPackage.Literals.SEVERITY_CHANGE__RULE)));
+				RuleId named = rules.stream().filter(r -> r.text().equals(s.getRule())).findFirst().orElse(null);
+				if (named == null) {
+					problems.accept(Finding.of(CheckerRules.POLICY, "the policy sets the severity of '" + s.getRule()
+							+ "', which is no rule Bulwark has (rules: "
+							+ String.join(", ", rules.stream().sorted().map(RuleId::text).toList()) + ")")
+							.at(Locations.of(s, DesignPackage.Literals.SEVERITY_CHANGE__RULE)));
 				} else {
-					severities.put(s.getRule(), Severity.valueOf(s.getLevel().toUpperCase(Locale.ROOT)));
+					severities.put(named, Severity.valueOf(s.getLevel().toUpperCase(Locale.ROOT)));
 				}
 			} else if (e instanceof SampleDistribution d) {
-				distribution = d.getKind();
+				distribution = Distribution.of(d.getKind());
 			} else if (e instanceof WaiverDemand w) {
 				needsJustification = w.getNeeds().contains("justification");
 				needsName = w.getNeeds().contains("name");
 			}
 		}
-		return new ReviewPolicy(policy.getTitle(), noMains ? List.of() : mains.isEmpty() ? base.mains() : mains, levels, surges, derating,
-				minVolts, minOhms, severities, needsJustification, needsName, distribution);
+		return new ReviewPolicy(policy.getTitle(),
+				new ReviewPolicy.Abuse(noMains ? List.of() : mains.isEmpty() ? base.mains() : mains, levels, surges), derating,
+				new ReviewPolicy.HysteresisMinimum(minVolts, minOhms), severities,
+				new ReviewPolicy.WaiverDemands(needsJustification, needsName), distribution);
 	}
 
 	private static double si(bulwark.lang.design.Quantity q) {

@@ -8,15 +8,18 @@ import java.nio.file.attribute.FileTime;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.ConcurrentMap;
 
-import bulwark.check.Concern;
-import bulwark.check.Finding;
-import bulwark.check.InputLimits;
-import bulwark.check.LanguageFindings;
-import bulwark.check.Severity;
-import bulwark.check.SourceLocation;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.CheckerRules;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.RuleId;
+import bulwark.check.load.InputLimits;
+import bulwark.check.finding.LanguageFindings;
+import bulwark.check.finding.Severity;
+import bulwark.check.finding.SourceLocation;
 import bulwark.check.load.DesignLoader;
 import bulwark.check.load.LoadedPolicy;
 
@@ -36,8 +39,12 @@ public final class PolicyFiles {
 	private final DesignLoader loader;
 	private final ConcurrentMap<Version, Resolution> cache = new ConcurrentHashMap<>();
 
-	public PolicyFiles(DesignLoader loader) {
+	private final Set<RuleId> rules;
+
+	/** @param rules the rules whose severity a policy may set */
+	public PolicyFiles(DesignLoader loader, Set<RuleId> rules) {
 		this.loader = loader;
+		this.rules = Set.copyOf(rules);
 	}
 
 	public Resolution read(Path file) {
@@ -71,12 +78,11 @@ public final class PolicyFiles {
 		}
 		if (errors || loaded.policy() == null) {
 			if (problems.isEmpty()) {
-				problems.add(inFile(Finding.plain("policy", Concern.STRUCTURE, Severity.ERROR,
-						"holds no review policy", null, SourceLocation.NONE), name));
+				problems.add(inFile(Finding.of(CheckerRules.POLICY, "holds no review policy"), name));
 			}
 			return new Resolution(Optional.empty(), problems);
 		}
-		ReviewPolicy policy = PolicyCompiler.compile(loaded.policy(), f -> problems.add(inFile(f, name)));
+		ReviewPolicy policy = PolicyCompiler.compile(loaded.policy(), rules, f -> problems.add(inFile(f, name)));
 		return problems.isEmpty() ? new Resolution(Optional.of(policy), List.of())
 				: new Resolution(Optional.empty(), problems);
 	}
@@ -97,12 +103,10 @@ public final class PolicyFiles {
 	private static Finding inFile(Finding f, String name) {
 		String where = f.location().line() > 0 ? name + ":" + f.location().line() + ":" + f.location().column()
 				: name;
-		return Finding.plain("policy", f.concern(), f.severity(), "review policy " + where + ": " + f.message(), null,
-				SourceLocation.NONE);
+		return Finding.of(CheckerRules.POLICY, "review policy " + where + ": " + f.message()).withSeverity(f.severity());
 	}
 
 	private static Resolution failed(String message) {
-		return new Resolution(Optional.empty(), List.of(Finding.plain("policy", Concern.STRUCTURE,
-				Severity.ERROR, message, null, SourceLocation.NONE)));
+		return new Resolution(Optional.empty(), List.of(Finding.of(CheckerRules.POLICY, message)));
 	}
 }

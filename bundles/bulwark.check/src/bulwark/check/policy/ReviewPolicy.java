@@ -4,25 +4,78 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
-import bulwark.check.Severity;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
 
 /**
  * The team lead's review policy, resolved to SI values: which abuse to apply at the terminals, how much of
  * each rating a part may use, how much hysteresis a comparator must have, which rules are raised or lowered,
- * what every waiver must carry, and how Monte Carlo draws toleranced values ("uniform" or "normal"). {@link DefaultPolicy} gives the values used when no policy is named.
+ * what every waiver must carry, and how Monte Carlo draws toleranced values. {@link DefaultPolicy} gives the values used when no policy is named.
  */
-public record ReviewPolicy(String title, List<MainsSystem> mains, List<Double> levels, List<SurgeLevel> surges,
-		Map<String, Derating> derating, Optional<Double> minimumHysteresisVolts,
-		Optional<Double> minimumHysteresisOhms, Map<String, Severity> severities, boolean waiverNeedsJustification,
-		boolean waiverNeedsName, String distribution) {
+public record ReviewPolicy(String title, Abuse abuse, Map<String, Derating> derating, HysteresisMinimum hysteresis,
+		Map<RuleId, Severity> severities, WaiverDemands waivers, Distribution distribution) {
 
 	public ReviewPolicy {
-		mains = List.copyOf(mains);
-		levels = List.copyOf(levels);
-		surges = List.copyOf(surges);
 		derating = Map.copyOf(derating);
 		severities = Map.copyOf(severities);
+	}
+
+	/** The abuse applied at every pair of terminals: mains systems, DC levels (V) and surges. */
+	public record Abuse(List<MainsSystem> mains, List<Double> levels, List<SurgeLevel> surges) {
+		public static final Abuse NONE = new Abuse(List.of(), List.of(), List.of());
+
+		public Abuse {
+			mains = List.copyOf(mains);
+			levels = List.copyOf(levels);
+			surges = List.copyOf(surges);
+		}
+	}
+
+	/** The least hysteresis a comparator must have, as a voltage at its input or as a resistance at the terminals. */
+	public record HysteresisMinimum(Optional<Double> volts, Optional<Double> ohms) {
+	}
+
+	/** What every waiver must carry. */
+	public record WaiverDemands(boolean justification, boolean name) {
+	}
+
+	/** The same policy under another title with other abuse. */
+	public ReviewPolicy with(String otherTitle, Abuse otherAbuse) {
+		return new ReviewPolicy(otherTitle, otherAbuse, derating, hysteresis, severities, waivers, distribution);
+	}
+
+	/** The same policy with no derating: every part may use all of each rating. */
+	public ReviewPolicy notDerated() {
+		return new ReviewPolicy(title, abuse, Map.of(), hysteresis, severities, waivers, distribution);
+	}
+
+	public List<MainsSystem> mains() {
+		return abuse.mains();
+	}
+
+	public List<Double> levels() {
+		return abuse.levels();
+	}
+
+	public List<SurgeLevel> surges() {
+		return abuse.surges();
+	}
+
+	public Optional<Double> minimumHysteresisVolts() {
+		return hysteresis.volts();
+	}
+
+	public Optional<Double> minimumHysteresisOhms() {
+		return hysteresis.ohms();
+	}
+
+	public boolean waiverNeedsJustification() {
+		return waivers.justification();
+	}
+
+	public boolean waiverNeedsName() {
+		return waivers.name();
 	}
 
 	/**
@@ -67,7 +120,7 @@ public record ReviewPolicy(String title, List<MainsSystem> mains, List<Double> l
 	}
 
 	/** The rule's severity under this policy. */
-	public Severity severity(String rule, Severity standard) {
+	public Severity severity(RuleId rule, Severity standard) {
 		return severities.getOrDefault(rule, standard);
 	}
 }

@@ -7,10 +7,10 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
-import bulwark.check.CaseResult;
+import bulwark.check.cases.CaseResult;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.PartStress;
+import bulwark.check.finding.Finding;
+import bulwark.check.cases.PartStress;
 import bulwark.check.WaveformTrace;
 import bulwark.check.function.FunctionFigures;
 import bulwark.check.function.PairFigures;
@@ -53,7 +53,7 @@ public final class HtmlReport {
 			w.write("<table><tr><th>line:col</th><th>severity</th><th>rule</th><th>part</th><th>case</th><th>message</th></tr>\n");
 			for (Finding f : r.findings()) {
 				w.write("<tr" + (f.waived() ? " class=\"waived\"" : "") + "><td>" + f.location().line() + ":" + f.location().column() + "</td><td>"
-						+ f.severity().id() + (f.waived() ? " (waived)" : "") + "</td><td>" + escape(f.rule()) + "</td><td>"
+						+ f.severity().id() + (f.waived() ? " (waived)" : "") + "</td><td>" + escape(f.rule().text()) + "</td><td>"
 						+ escape(f.part() == null ? "" : f.part()) + "</td><td>" + escape(f.caseName() == null ? "" : f.caseName())
 						+ "</td><td>" + escape(f.message()) + "</td></tr>\n");
 			}
@@ -117,7 +117,7 @@ public final class HtmlReport {
 	}
 
 	private static String show(Double value, String unit) {
-		return value == null ? "—" : escape(bulwark.check.rules.Figures.engineering(value, unit));
+		return value == null ? "—" : escape(bulwark.check.figures.Figures.engineering(value, unit));
 	}
 
 	/** Horizontal bars, 100 % of the rating marked by a line, longer bars clipped at 200 % with the figure beside. */

@@ -10,8 +10,8 @@ import javax.xml.stream.XMLStreamException;
 import javax.xml.stream.XMLStreamWriter;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.Severity;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Severity;
 import bulwark.check.rules.Rule;
 import bulwark.check.rules.RuleRegistry;
 
@@ -33,7 +33,7 @@ public final class JUnitReport {
 		for (DesignResult r : results) {
 			List<String> names = new ArrayList<>(List.of("language", "solver"));
 			for (Rule rule : RuleRegistry.all()) {
-				names.add(rule.info().id());
+				names.add(rule.info().id().text());
 			}
 			xml.writeCharacters("\n  ");
 			xml.writeStartElement("testsuite");
@@ -69,14 +69,14 @@ public final class JUnitReport {
 
 	/** Which test case a finding belongs to. */
 	private static String group(Finding f) {
-		switch (f.rule()) {
+		switch (f.rule().text()) {
 		case "syntax":
 		case "structure":
 		case "file":
 		case "waiver":
 			return "language";
 		default:
-			return f.rule();
+			return f.rule().text();
 		}
 	}
 }

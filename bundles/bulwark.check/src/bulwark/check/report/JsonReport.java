@@ -6,10 +6,11 @@ import java.util.List;
 
 import com.google.gson.stream.JsonWriter;
 
-import bulwark.check.CaseResult;
+import bulwark.check.cases.CaseResult;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.PartStress;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.FindingDetail;
+import bulwark.check.cases.PartStress;
 import bulwark.check.WaveformTrace;
 import bulwark.check.WorstStress;
 import bulwark.check.fix.Fix;
@@ -59,7 +60,7 @@ public final class JsonReport {
 		w.name("findings").beginArray();
 		for (Finding f : r.findings()) {
 			w.beginObject();
-			w.name("rule").value(f.rule());
+			w.name("rule").value(f.rule().text());
 			w.name("concern").value(f.concern().id());
 			w.name("severity").value(f.severity().id());
 			w.name("message").value(f.message());
@@ -70,6 +71,10 @@ public final class JsonReport {
 			number(w.name("value"), f.value());
 			number(w.name("limit"), f.limit());
 			w.name("unit").value(f.unit());
+			if (f.rating() != null) {
+				w.name("rating").value(f.rating());
+			}
+			detail(w, f);
 			w.name("waived").value(f.waived());
 			w.name("fixes").beginArray();
 			for (Fix fix : fixes.apply(r, f)) {
@@ -220,6 +225,23 @@ public final class JsonReport {
 			w.nullValue();
 		} else {
 			w.value(v);
+		}
+	}
+
+	/** A finding's structured detail, for tools that must not parse the message. */
+	private static void detail(JsonWriter w, Finding f) throws IOException {
+		if (f.detail() instanceof FindingDetail.ReversePath path) {
+			w.name("path").beginArray();
+			for (String step : path.steps()) {
+				w.value(step);
+			}
+			w.endArray();
+		} else if (f.detail() instanceof FindingDetail.MissingRatings missing) {
+			w.name("missing").beginArray();
+			for (FindingDetail.Missing m : missing.missing()) {
+				w.beginObject().name("rating").value(m.rating()).name("rule").value(m.rule().text()).endObject();
+			}
+			w.endArray();
 		}
 	}
 }

@@ -11,11 +11,11 @@ import java.util.function.Function;
 import com.google.gson.stream.JsonWriter;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.Severity;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Severity;
 import bulwark.check.Status;
-import bulwark.check.rules.Rule;
-import bulwark.check.rules.RuleInfo;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 import bulwark.check.rules.RuleRegistry;
 
 /**
@@ -26,27 +26,20 @@ import bulwark.check.rules.RuleRegistry;
  * escaped.
  */
 public final class SarifReport {
-	/** Findings the check itself makes besides the rules, described as rules too. */
-	private static final Map<String, String> OWN = Map.of("syntax", "the design text does not parse", "structure",
-			"the text parses but is not a valid design", "solver", "a case could not be solved", "file",
-			"the file could not be read or is refused", "policy", "the review policy cannot be used", "waiver",
-			"a waiver is stale, unknown or lacks what the policy needs", "budget",
-			"the check took longer than its time budget", "internal", "the check met a fault of its own");
-
 	private SarifReport() {
 	}
 
 	/**
 	 * @param help the explanation of a rule by its ID (the docs/rules page), or null when there is none
 	 */
-	public static void write(List<DesignResult> results, String version, String caution, Function<String, String> help,
+	public static void write(List<DesignResult> results, String version, String caution, Function<RuleId, String> help,
 			Writer out) throws IOException {
 		JsonWriter w = new JsonWriter(out);
 		w.setIndent("  ");
 		w.beginObject();
 		w.name("version").value("2.1.0");
 		w.name("runs").beginArray().beginObject();
-		Map<String, Integer> index = tool(w, version, help);
+		Map<RuleId, Integer> index = tool(w, version, help);
 		w.name("invocations").beginArray().beginObject();
 		w.name("executionSuccessful").value(results.stream().noneMatch(r -> r.status() == Status.ERROR));
 		w.name("toolExecutionNotifications").beginArray();
@@ -68,21 +61,16 @@ public final class SarifReport {
 		out.flush();
 	}
 
-	private static Map<String, Integer> tool(JsonWriter w, String version, Function<String, String> help)
+	private static Map<RuleId, Integer> tool(JsonWriter w, String version, Function<RuleId, String> help)
 			throws IOException {
-		Map<String, Integer> index = new HashMap<>();
+		Map<RuleId, Integer> index = new HashMap<>();
 		w.name("tool").beginObject().name("driver").beginObject();
 		w.name("name").value("Bulwark");
 		w.name("version").value(version);
 		w.name("rules").beginArray();
-		for (Rule rule : RuleRegistry.all()) {
-			RuleInfo info = rule.info();
+		for (RuleInfo info : RuleRegistry.findingKinds()) {
 			index.put(info.id(), index.size());
-			descriptor(w, info.id(), info.summary(), level(info.severity()), info.concern().id(), help.apply(info.id()));
-		}
-		for (Map.Entry<String, String> own : new java.util.TreeMap<>(OWN).entrySet()) {
-			index.put(own.getKey(), index.size());
-			descriptor(w, own.getKey(), own.getValue(), "error", null, null);
+			descriptor(w, info.id().text(), info.summary(), level(info.severity()), info.concern().id(), help.apply(info.id()));
 		}
 		w.endArray();
 		w.endObject().endObject();
@@ -104,9 +92,9 @@ public final class SarifReport {
 		w.endObject();
 	}
 
-	private static void result(JsonWriter w, DesignResult r, Finding f, Map<String, Integer> index) throws IOException {
+	private static void result(JsonWriter w, DesignResult r, Finding f, Map<RuleId, Integer> index) throws IOException {
 		w.beginObject();
-		w.name("ruleId").value(f.rule());
+		w.name("ruleId").value(f.rule().text());
 		Integer i = index.get(f.rule());
 		if (i != null) {
 			w.name("ruleIndex").value(i);

@@ -5,7 +5,7 @@ import java.util.Locale;
 
 import bulwark.check.function.PairFigures;
 import bulwark.check.function.SweepPoint;
-import bulwark.check.rules.Figures;
+import bulwark.check.figures.Figures;
 
 /**
  * The threshold sweep as inline SVG: the current into the resistance under test against that resistance,

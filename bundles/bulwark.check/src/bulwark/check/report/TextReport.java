@@ -5,7 +5,7 @@ import java.io.Writer;
 import java.util.List;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 
 /** One line per finding: {@code FILE:LINE:COL: severity rule message}. */
 public final class TextReport {

@@ -8,7 +8,7 @@ import java.util.Locale;
 
 import com.google.gson.stream.JsonWriter;
 
-import bulwark.check.rules.Figures;
+import bulwark.check.figures.Figures;
 import bulwark.check.tolerance.Corners;
 import bulwark.check.tolerance.Figure;
 import bulwark.check.tolerance.Statistics;
@@ -32,7 +32,7 @@ public final class ToleranceReport {
 		}
 		if (r.samples() > 0) {
 			w.write(String.format(Locale.ROOT, "%nMonte Carlo (%d samples, seed %d, %s)%n", r.monteCarlo().samples().size(),
-					r.seed(), r.distribution().name().toLowerCase(Locale.ROOT)));
+					r.seed(), r.distribution().word()));
 			for (Statistics s : r.statistics()) {
 				Figure f = s.figure();
 				w.write(String.format(Locale.ROOT, "  %-34s min %-10s 1 %% %-10s median %-10s mean %-10s 99 %% %-10s max %s%n",
@@ -83,7 +83,7 @@ public final class ToleranceReport {
 		w.name("monte_carlo").beginObject();
 		w.name("samples").value(r.monteCarlo().samples().size());
 		w.name("seed").value(r.seed());
-		w.name("distribution").value(r.distribution().name().toLowerCase(Locale.ROOT));
+		w.name("distribution").value(r.distribution().word());
 		w.name("figures").beginArray();
 		for (Statistics s : r.statistics()) {
 			w.beginObject().name("figure").value(s.figure().name()).name("unit").value(s.figure().unit());
@@ -130,7 +130,7 @@ public final class ToleranceReport {
 					+ HtmlReport.escape(show(c.figure(), c.high())) + "</td></tr>\n");
 		}
 		w.write("</table>\n<h2>Monte Carlo</h2>\n<p>" + r.monteCarlo().samples().size() + " samples, seed " + r.seed() + ", "
-				+ r.distribution().name().toLowerCase(Locale.ROOT) + "</p>\n");
+				+ r.distribution().word() + "</p>\n");
 		w.write("<table><tr><th>figure</th><th>min</th><th>1 %</th><th>median</th><th>mean</th><th>99 %</th><th>max</th></tr>\n");
 		for (Statistics s : r.statistics()) {
 			Figure f = s.figure();

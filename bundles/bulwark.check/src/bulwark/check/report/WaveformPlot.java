@@ -3,7 +3,7 @@ package bulwark.check.report;
 import java.util.Locale;
 
 import bulwark.check.WaveformTrace;
-import bulwark.check.rules.Figures;
+import bulwark.check.figures.Figures;
 
 /**
  * A part's voltage (solid, left scale) and current (dashed, right scale) over one cycle of a waveform case,

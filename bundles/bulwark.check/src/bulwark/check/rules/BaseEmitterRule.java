@@ -2,9 +2,11 @@ package bulwark.check.rules;
 
 import java.util.Set;
 
-import bulwark.check.Concern;
-import bulwark.check.Severity;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * A bipolar transistor's base–emitter junction is reverse-biased beyond its rating. Small-signal parts
@@ -12,7 +14,7 @@ import bulwark.lang.design.PartKind;
  * docs/sources.md#semiconductor-inputs]; when the design gives no 'rated emitter_base', 5 V is assumed and the message says so.
  */
 public final class BaseEmitterRule extends PartLimitRule {
-	public static final String ID = "base-emitter-reverse";
+	public static final RuleId ID = RuleId.of("base-emitter-reverse");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.BASE_EMITTER, Severity.ERROR,
 			"a transistor's base-emitter junction is reverse-biased beyond its rating");
 

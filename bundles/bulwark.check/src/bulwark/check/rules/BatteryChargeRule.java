@@ -2,9 +2,11 @@ package bulwark.check.rules;
 
 import java.util.Set;
 
-import bulwark.check.Concern;
-import bulwark.check.Severity;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * A fault drives current into a battery's positive pin, charging it. Primary cells must not be charged
@@ -13,7 +15,7 @@ import bulwark.lang.design.PartKind;
  * rating.
  */
 public final class BatteryChargeRule extends PartLimitRule {
-	public static final String ID = "battery-charge";
+	public static final RuleId ID = RuleId.of("battery-charge");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.BATTERY, Severity.ERROR,
 			"a fault pushes current into a battery that must not be charged");
 

@@ -2,16 +2,18 @@ package bulwark.check.rules;
 
 import java.util.Set;
 
-import bulwark.check.Concern;
-import bulwark.check.Severity;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * A capacitor has more voltage across it than its rated voltage, derated (NASA EEE-INST-002 derates
  * ceramic capacitors to 60 % of their rating, DC plus peak ripple).
  */
 public final class CapacitorVoltageRule extends PartLimitRule {
-	public static final String ID = "capacitor-voltage";
+	public static final RuleId ID = RuleId.of("capacitor-voltage");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.CAPACITOR_VOLTAGE, Severity.ERROR,
 			"a capacitor has more voltage across it than its derated rating");
 

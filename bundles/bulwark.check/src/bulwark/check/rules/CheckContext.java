@@ -9,6 +9,7 @@ import bulwark.check.function.FunctionFigures;
 import bulwark.check.policy.ReviewPolicy;
 import bulwark.check.topology.SeriesStrings;
 import bulwark.check.topology.SeriesStrings.SeriesString;
+import bulwark.check.cases.SolvedCase;
 
 /**
  * What a rule may look at: the design, its circuit, every case that solved, the review policy, the series

@@ -2,9 +2,11 @@ package bulwark.check.rules;
 
 import java.util.Set;
 
-import bulwark.check.Concern;
-import bulwark.check.Severity;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * The current through a comparator input's clamp junctions exceeds what they are rated for. An input
@@ -12,7 +14,7 @@ import bulwark.lang.design.PartKind;
  * practice, docs/sources.md#semiconductor-inputs]; that is assumed when the design gives no 'rated clamp'.
  */
 public final class ClampCurrentRule extends PartLimitRule {
-	public static final String ID = "clamp-current";
+	public static final RuleId ID = RuleId.of("clamp-current");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.CLAMP_CURRENT, Severity.ERROR,
 			"a comparator input's clamp current is over its rating");
 

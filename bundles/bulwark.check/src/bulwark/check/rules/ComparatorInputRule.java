@@ -2,9 +2,11 @@ package bulwark.check.rules;
 
 import java.util.Set;
 
-import bulwark.check.Concern;
-import bulwark.check.Severity;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * A comparator input goes beyond its supply rails by more than its absolute-maximum margin. CMOS inputs
@@ -12,7 +14,7 @@ import bulwark.lang.design.PartKind;
  * gives no 'rated input_margin'.
  */
 public final class ComparatorInputRule extends PartLimitRule {
-	public static final String ID = "comparator-input";
+	public static final RuleId ID = RuleId.of("comparator-input");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.COMPARATOR_INPUT, Severity.ERROR,
 			"a comparator input goes beyond its rails by more than its margin");
 

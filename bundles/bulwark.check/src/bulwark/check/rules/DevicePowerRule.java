@@ -2,16 +2,18 @@ package bulwark.check.rules;
 
 import java.util.Set;
 
-import bulwark.check.Concern;
-import bulwark.check.Severity;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * A part other than a resistor dissipates more than its rated power, derated: a zener clamping a fault, a
  * transistor in its linear region, an indicator across a mains peak. Power is Σ V·I over the part's pins.
  */
 public final class DevicePowerRule extends PartLimitRule {
-	public static final String ID = "device-power";
+	public static final RuleId ID = RuleId.of("device-power");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.POWER, Severity.ERROR,
 			"a diode, transistor, potentiometer, indicator or protector dissipates more than its derated power rating");
 

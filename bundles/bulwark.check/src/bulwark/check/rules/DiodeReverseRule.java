@@ -2,16 +2,18 @@ package bulwark.check.rules;
 
 import java.util.Set;
 
-import bulwark.check.Concern;
-import bulwark.check.Severity;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * A diode or LED has more reverse voltage across it than its rated reverse voltage, derated (zeners work
  * in reverse by design and are left out). LEDs are the usual victims: their reverse rating is a few volts.
  */
 public final class DiodeReverseRule extends PartLimitRule {
-	public static final String ID = "diode-reverse";
+	public static final RuleId ID = RuleId.of("diode-reverse");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.REVERSE_VOLTAGE, Severity.ERROR,
 			"a diode or LED has more reverse voltage than its derated rating");
 

@@ -2,16 +2,18 @@ package bulwark.check.rules;
 
 import java.util.Set;
 
-import bulwark.check.Concern;
-import bulwark.check.Severity;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * A diode, LED or zener carries more forward current than it is rated for, derated: a clamp diode
  * taking a fault, an LED driven from a terminal without enough series resistance.
  */
 public final class ForwardCurrentRule extends PartLimitRule {
-	public static final String ID = "forward-current";
+	public static final RuleId ID = RuleId.of("forward-current");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.FORWARD_CURRENT, Severity.ERROR,
 			"a diode, LED or zener carries more forward current than its derated rating");
 

@@ -2,16 +2,18 @@ package bulwark.check.rules;
 
 import java.util.Set;
 
-import bulwark.check.Concern;
-import bulwark.check.Severity;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * A fuse that opens in a case is left holding the whole fault across it; above its rated voltage it may
  * not break the current (an arc keeps it going). Cases where a fuse opens are solved again with it open.
  */
 public final class FuseVoltageRule extends PartLimitRule {
-	public static final String ID = "fuse-voltage";
+	public static final RuleId ID = RuleId.of("fuse-voltage");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.FUSE, Severity.ERROR,
 			"an opened fuse has more voltage across it than it is rated to break");
 

@@ -8,10 +8,10 @@ import java.util.Locale;
 import java.util.Set;
 import java.util.function.Consumer;
 
-import bulwark.check.Concern;
-import bulwark.check.Finding;
-import bulwark.check.Locations;
-import bulwark.check.Severity;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Locations;
+import bulwark.check.finding.Severity;
 import bulwark.check.function.SwitchingSweep;
 import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Member;
@@ -19,6 +19,9 @@ import bulwark.lang.design.Net;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
 import bulwark.lang.design.PinBinding;
+import bulwark.check.figures.Figures;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * A comparator without enough hysteresis. First the structure: a positive-feedback path from its output
@@ -29,7 +32,7 @@ import bulwark.lang.design.PinBinding;
  * at the terminals in ohms, as the policy states it.
  */
 public final class HysteresisRule implements Rule {
-	public static final String ID = "hysteresis";
+	public static final RuleId ID = RuleId.of("hysteresis");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.HYSTERESIS, Severity.WARNING,
 			"a comparator has no hysteresis, or less than the review policy asks for");
 	private static final Set<PartKind> PASSIVE = Set.of(PartKind.RESISTOR, PartKind.CAPACITOR, PartKind.POTENTIOMETER);
@@ -82,8 +85,8 @@ public final class HysteresisRule implements Rule {
 	}
 
 	private static Finding finding(Part part, String message, Double value, Double limit, String unit) {
-		return new Finding(ID, INFO.concern(), INFO.severity(), message, part.getName(), null,
-				Locations.of(part, DesignPackage.Literals.MEMBER__NAME), value, limit, unit, false);
+		return Finding.of(INFO, message).about(part.getName(), null, Locations.of(part, DesignPackage.Literals.MEMBER__NAME))
+				.judged(value, limit, unit);
 	}
 
 	/** Whether in_plus can be reached from out through passive parts, avoiding fixed nets. */

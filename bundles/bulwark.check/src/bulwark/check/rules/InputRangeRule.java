@@ -4,16 +4,20 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.function.Consumer;
 
-import bulwark.check.Concern;
-import bulwark.check.Finding;
-import bulwark.check.Locations;
-import bulwark.check.Severity;
-import bulwark.check.compile.FaultCase;
-import bulwark.check.compile.Settings;
-import bulwark.engine.dc.OperatingPoint;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Locations;
+import bulwark.check.finding.Severity;
+import bulwark.check.cases.FaultCase;
+import bulwark.check.parts.Settings;
+import bulwark.engine.solve.OperatingPoint;
 import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
+import bulwark.check.figures.Figures;
+import bulwark.check.cases.SolvedCase;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * In the normal condition, a comparator input outside the range where the comparator works: above its
@@ -22,7 +26,7 @@ import bulwark.lang.design.PartKind;
  * {@code rated headroom} (inputs that are not rail to rail); abuse cases are left to comparator-input.
  */
 public final class InputRangeRule implements Rule {
-	public static final String ID = "input-range";
+	public static final RuleId ID = RuleId.of("input-range");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.COMPARATOR_INPUT, Severity.ERROR,
 			"in normal use, a comparator input is outside the range where it works");
 
@@ -42,7 +46,7 @@ public final class InputRangeRule implements Rule {
 			String at = null, pinAt = null;
 			double volts = 0, top = 0;
 			for (SolvedCase c : context.cases()) {
-				if (c.faultCase().kind() != bulwark.check.compile.CaseKind.NORMAL) {
+				if (c.faultCase().kind() != bulwark.check.cases.CaseKind.NORMAL) {
 					continue;
 				}
 				OperatingPoint p = c.solution().device(part.getName());
@@ -60,12 +64,13 @@ public final class InputRangeRule implements Rule {
 				}
 			}
 			if (at != null) {
-				findings.accept(new Finding(ID, INFO.concern(), INFO.severity(), String.format(Locale.ROOT,
+				findings.accept(Finding.of(INFO, String.format(Locale.ROOT,
 						"%s's %s is at %s in case '%s', outside the range its inputs work in (up to %s: the supply less its "
 								+ "rated headroom of %s); it no longer compares there",
 						part.getName(), pinAt, Figures.engineering(volts, "V"), at, Figures.engineering(top, "V"),
-						Figures.engineering(headroom.get(), "V")), part.getName(), at,
-						Locations.of(part, DesignPackage.Literals.MEMBER__NAME), worst, 0.0, "V", false));
+						Figures.engineering(headroom.get(), "V")))
+						.about(part.getName(), at, Locations.of(part, DesignPackage.Literals.MEMBER__NAME))
+						.judged(worst, 0.0, "V"));
 			}
 		}
 	}

@@ -5,8 +5,8 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.function.Consumer;
 
-import bulwark.check.Finding;
-import bulwark.check.Locations;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Locations;
 import bulwark.check.stress.Limit;
 import bulwark.check.stress.Limits;
 import bulwark.check.stress.Measure;
@@ -14,6 +14,8 @@ import bulwark.check.stress.StressCatalog;
 import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
+import bulwark.check.figures.Figures;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * What every rating rule does: for each part of its kinds, take one stress (named after the rating it is
@@ -48,10 +50,9 @@ abstract class PartLimitRule implements Rule {
 			Optional<WorstCase> worst = WorstCase.of(context, part.getName(), measure);
 			if (worst.isPresent() && worst.get().value() > limit.get().value()) {
 				RuleInfo info = info();
-				findings.accept(new Finding(info.id(), info.concern(), info.severity(),
-						message(part, measure, worst.get(), limit.get()), part.getName(), worst.get().caseName(),
-						Locations.of(part, DesignPackage.Literals.MEMBER__NAME), worst.get().value(),
-						limit.get().value(), measure.unit(), false));
+				findings.accept(Finding.of(info, message(part, measure, worst.get(), limit.get()))
+						.about(part.getName(), worst.get().caseName(), Locations.of(part, DesignPackage.Literals.MEMBER__NAME))
+						.judged(measure.rating(), worst.get().value(), limit.get().value(), measure.unit()));
 			}
 		}
 	}

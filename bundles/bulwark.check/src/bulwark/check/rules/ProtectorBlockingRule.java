@@ -2,16 +2,18 @@ package bulwark.check.rules;
 
 import java.util.Set;
 
-import bulwark.check.Concern;
-import bulwark.check.Severity;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * A protector (an electronic current limiter in series with a terminal) has more voltage across it than
  * it is rated to block: once tripped it holds off the whole fault, and beyond its rating it breaks down.
  */
 public final class ProtectorBlockingRule extends PartLimitRule {
-	public static final String ID = "protector-blocking";
+	public static final RuleId ID = RuleId.of("protector-blocking");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.PROTECTOR, Severity.ERROR,
 			"a protector blocks more voltage than its derated blocking rating");
 

@@ -4,21 +4,24 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.function.Consumer;
 
-import bulwark.check.Concern;
-import bulwark.check.Finding;
-import bulwark.check.Locations;
-import bulwark.check.Severity;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.FindingDetail;
+import bulwark.check.finding.Locations;
+import bulwark.check.finding.Severity;
 import bulwark.check.stress.Limits;
 import bulwark.check.stress.StressCatalog;
 import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Part;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * A part lacks a rating that a rating rule needs: that stress cannot be checked, and silence would read as
  * a pass. One warning per part names each missing rating and the rule that therefore does not check it.
  */
 public final class RatingMissingRule implements Rule {
-	public static final String ID = "rating-missing";
+	public static final RuleId ID = RuleId.of("rating-missing");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.RATING_MISSING, Severity.WARNING,
 			"a part has no rating to check its stress against");
 
@@ -30,33 +33,34 @@ public final class RatingMissingRule implements Rule {
 	@Override
 	public void check(CheckContext context, Consumer<Finding> findings) {
 		for (Part part : context.design().parts().values()) {
-			List<String> missing = new ArrayList<>();
+			List<FindingDetail.Missing> missing = new ArrayList<>();
 			for (Rule rule : RuleRegistry.all()) {
 				if (rule instanceof PartLimitRule r && r.kinds().contains(part.getKind())) {
 					String rating = r.rating(part.getKind());
 					var measure = StressCatalog.of(part.getKind(), rating).orElseThrow();
 					if (Limits.of(part, measure, context.policy()).isEmpty()
 							&& !(rating.equals("voltage") && context.inSeriesString().contains(part.getName()))) {
-						missing.add(rating + " (" + r.info().id() + ")");
+						missing.add(new FindingDetail.Missing(rating, r.info().id()));
 					}
 				}
 			}
 			// a resistor in a series string needs its voltage limit for series-string
 			if (context.inSeriesString().contains(part.getName()) && Limits
 					.of(part, StressCatalog.of(part.getKind(), "voltage").orElseThrow(), context.policy()).isEmpty()) {
-				missing.add("voltage or package (" + SeriesStringRule.ID + ")");
+				missing.add(new FindingDetail.Missing("voltage", SeriesStringRule.ID));
 			}
 			if (!missing.isEmpty()) {
-				findings.accept(Finding.plain(ID, INFO.concern(), INFO.severity(),
-						part.getName() + " has no rating for " + String.join(", ", missing)
-								+ ", so that is not checked: add for example '" + example(missing.get(0)) + "'",
-						part.getName(), Locations.of(part, DesignPackage.Literals.MEMBER__NAME)));
+				List<String> named = missing.stream().map(m -> (m.rule().equals(SeriesStringRule.ID) ? "voltage or package"
+						: m.rating()) + " (" + m.rule() + ")").toList();
+				findings.accept(Finding.of(INFO, part.getName() + " has no rating for " + String.join(", ", named)
+						+ ", so that is not checked: add for example '" + example(missing.get(0).rating()) + "'")
+						.about(part.getName(), null, Locations.of(part, DesignPackage.Literals.MEMBER__NAME))
+						.with(new FindingDetail.MissingRatings(missing)));
 			}
 		}
 	}
 
-	private static String example(String missing) {
-		String rating = missing.substring(0, missing.indexOf(' '));
+	private static String example(String rating) {
 		return switch (rating) {
 		case "power" -> "rated power 250 mW";
 		case "voltage" -> "package 0805";

@@ -7,11 +7,11 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.function.Consumer;
 
-import bulwark.check.Concern;
-import bulwark.check.Finding;
-import bulwark.check.Locations;
-import bulwark.check.Severity;
-import bulwark.check.SourceLocation;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Locations;
+import bulwark.check.finding.Severity;
+import bulwark.check.finding.SourceLocation;
 import bulwark.check.function.FunctionAnalysis;
 import bulwark.check.function.FunctionFigures;
 import bulwark.check.function.PairFigures;
@@ -23,6 +23,9 @@ import bulwark.lang.design.PartKind;
 import bulwark.lang.design.Requirement;
 import bulwark.lang.units.Quantities;
 import bulwark.lang.units.Unit;
+import bulwark.check.figures.Figures;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * The input does what its design requires at the terminals: each {@code require} is compared with the
@@ -32,7 +35,7 @@ import bulwark.lang.units.Unit;
  * docs/sources.md#tester-inputs] — as warnings. A figure that cannot be computed is said so, never passed silently.
  */
 public final class RequirementRule implements Rule {
-	public static final String ID = "requirement";
+	public static final RuleId ID = RuleId.of("requirement");
 	/** Common-practice defaults for battery-powered testers [common practice, docs/sources.md#tester-inputs]. */
 	static final double DEFAULT_THRESHOLD_OHMS = 5, DEFAULT_TEST_AMPS = 20e-3,
 			DEFAULT_LIFE_SECONDS = FunctionAnalysis.HOURS_PER_YEAR * 3600;
@@ -124,17 +127,17 @@ public final class RequirementRule implements Rule {
 		}
 		String required = (atMost ? "at most " : "at least ") + show(value, unit);
 		if (figure.isEmpty()) {
-			findings.accept(new Finding(ID, INFO.concern(), Severity.WARNING, what + across + " (" + basis + ": "
-					+ required + ") cannot be checked: " + missing(what, f), null, null, where, null, value, unit, false));
+			findings.accept(Finding.of(INFO, what + across + " (" + basis + ": " + required + ") cannot be checked: "
+					+ missing(what, f)).withSeverity(Severity.WARNING).at(where).judged(null, value, unit));
 			return;
 		}
 		double x = figure.get();
 		boolean missed = atMost ? x > value : x < value;
 		if (missed) {
-			findings.accept(new Finding(ID, INFO.concern(), severity,
+			findings.accept(Finding.of(INFO,
 					String.format(Locale.ROOT, "%s%s is %s, %s %s", what.replace('_', ' '), across, show(x, unit), basis,
-							required),
-					null, null, where, x, value, unit, false));
+							required))
+					.withSeverity(severity).at(where).judged(x, value, unit));
 		}
 	}
 

@@ -2,9 +2,11 @@ package bulwark.check.rules;
 
 import java.util.Set;
 
-import bulwark.check.Concern;
-import bulwark.check.Severity;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * A resistor dissipates more than its rated power, derated by the review policy, in some case. Dissipation is
@@ -12,7 +14,7 @@ import bulwark.lang.design.PartKind;
  * rating-missing.
  */
 public final class ResistorPowerRule extends PartLimitRule {
-	public static final String ID = "resistor-power";
+	public static final RuleId ID = RuleId.of("resistor-power");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.POWER, Severity.ERROR,
 			"a resistor dissipates more than its derated power rating");
 

@@ -2,10 +2,12 @@ package bulwark.check.rules;
 
 import java.util.Set;
 
-import bulwark.check.Concern;
-import bulwark.check.Severity;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Severity;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * A resistor on its own has more voltage across it than its limiting element voltage, derated: it may
@@ -14,7 +16,7 @@ import bulwark.lang.design.PartKind;
  * which reports the whole string.
  */
 public final class ResistorVoltageRule extends PartLimitRule {
-	public static final String ID = "resistor-voltage";
+	public static final RuleId ID = RuleId.of("resistor-voltage");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.VOLTAGE, Severity.ERROR,
 			"a resistor has more voltage across it than its derated limiting element voltage");
 

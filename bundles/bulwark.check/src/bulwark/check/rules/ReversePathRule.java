@@ -13,20 +13,25 @@ import java.util.Set;
 import java.util.function.Consumer;
 import java.util.stream.Collectors;
 
-import bulwark.check.Concern;
-import bulwark.check.Finding;
-import bulwark.check.Locations;
-import bulwark.check.Severity;
-import bulwark.check.compile.FaultCase;
-import bulwark.check.compile.Settings;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.FindingDetail;
+import bulwark.check.finding.Locations;
+import bulwark.check.finding.Severity;
+import bulwark.check.cases.FaultCase;
+import bulwark.check.parts.Settings;
 import bulwark.check.stress.Overstress;
 import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Device;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.OperatingPoint;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.OperatingPoint;
 import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
+import bulwark.check.figures.Figures;
+import bulwark.check.cases.SolvedCase;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * An abuse at the terminals reaches a part that it pushes over its limit through nothing that blocks it:
@@ -37,7 +42,7 @@ import bulwark.lang.design.PartKind;
  * clamp current. The finding gives the path from terminal to terminal through the part, and its stress.
  */
 public final class ReversePathRule implements Rule {
-	public static final String ID = "reverse-path";
+	public static final RuleId ID = RuleId.of("reverse-path");
 	/** A comparator input drawing less than this has its clamps off [common practice: input leakage is below it]. */
 	static final double CONDUCTING = 1e-6;
 	/** A junction reverse-biased by more than this blocks [common practice: well clear of forward conduction]. */
@@ -81,29 +86,23 @@ public final class ReversePathRule implements Rule {
 		for (Reach r : worst.values()) {
 			Overstress o = r.over();
 			String message = String.format(Locale.ROOT,
-					"case '%s' reaches %s " + PATH_START + "%s" + PATH_END + "%s is %s, over %s, %s %% of the limit",
+					"case '%s' reaches %s with nothing blocking it: %s; its %s is %s, over %s, %s %% of the limit",
 					r.c().faultCase().name(), o.part().getName(), String.join(" → ", r.path()),
 					o.measure().what(r.c().faultCase()),
 					Figures.over(o.value(), o.limit().value(), o.measure().unit()), o.limit().describe(),
 					Figures.percentOf(o.value(), o.limit().value()));
-			findings.accept(new Finding(ID, INFO.concern(), INFO.severity(), message, o.part().getName(),
-					r.c().faultCase().name(), Locations.of(o.part(), DesignPackage.Literals.MEMBER__NAME), o.value(),
-					o.limit().value(), o.measure().unit(), false));
+			findings.accept(Finding.of(INFO, message)
+					.about(o.part().getName(), r.c().faultCase().name(), Locations.of(o.part(), DesignPackage.Literals.MEMBER__NAME))
+					.judged(o.measure().rating(), o.value(), o.limit().value(), o.measure().unit()).with(new FindingDetail.ReversePath(r.path())));
 		}
 	}
-
-	private static final String PATH_START = "with nothing blocking it: ", PATH_END = "; its ";
 
 	/**
 	 * The steps of the path a reverse-path finding names — terminals, parts and "net NAME" — in order, for
 	 * drawings that highlight it; empty for any other finding.
 	 */
 	public static List<String> pathOf(Finding f) {
-		int start = f.message().indexOf(PATH_START), end = f.message().indexOf(PATH_END, Math.max(start, 0));
-		if (!ID.equals(f.rule()) || start < 0 || end < 0) {
-			return List.of();
-		}
-		return List.of(f.message().substring(start + PATH_START.length(), end).split(" → "));
+		return f.detail(FindingDetail.ReversePath.class).map(FindingDetail.ReversePath::steps).orElse(List.of());
 	}
 
 	/** How a net was reached: from which net, through which device (null at the start). */

@@ -6,6 +6,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Optional;
 
+import bulwark.check.finding.RuleId;
 import bulwark.lang.install.Installation;
 
 /** A rule's explanation page, docs/rules/ID.md of the installation: the one reader of it. */
@@ -13,11 +14,8 @@ public final class RulePages {
 	private RulePages() {
 	}
 
-	public static Optional<String> page(Installation installation, String rule) {
-		if (rule == null || !rule.matches("[a-z]+(-[a-z]+)*")) {
-			return Optional.empty();
-		}
-		Path file = installation.rulePage(rule);
+	public static Optional<String> page(Installation installation, RuleId rule) {
+		Path file = installation.rulePage(rule.text());
 		try {
 			return Files.isRegularFile(file) ? Optional.of(Files.readString(file, StandardCharsets.UTF_8)) : Optional.empty();
 		} catch (IOException e) {
@@ -26,7 +24,7 @@ public final class RulePages {
 	}
 
 	/** The page's "What" section, one paragraph: what the rule finds. */
-	public static Optional<String> what(Installation installation, String rule) {
+	public static Optional<String> what(Installation installation, RuleId rule) {
 		return page(installation, rule).map(text -> {
 			int start = text.indexOf("## What");
 			if (start < 0) {

@@ -6,10 +6,10 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.function.Consumer;
 
-import bulwark.check.Concern;
-import bulwark.check.Finding;
-import bulwark.check.Locations;
-import bulwark.check.Severity;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Locations;
+import bulwark.check.finding.Severity;
 import bulwark.check.stress.Limit;
 import bulwark.check.stress.Limits;
 import bulwark.check.stress.Measure;
@@ -18,6 +18,10 @@ import bulwark.check.topology.SeriesStrings.SeriesString;
 import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
+import bulwark.check.figures.Figures;
+import bulwark.check.cases.SolvedCase;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * A series string of resistors (see SeriesStrings) whose voltage, shared in proportion to the values, puts
@@ -27,7 +31,7 @@ import bulwark.lang.design.PartKind;
  * and says when the sharing is unequal.
  */
 public final class SeriesStringRule implements Rule {
-	public static final String ID = "series-string";
+	public static final RuleId ID = RuleId.of("series-string");
 	/** Shares differing by more than this ratio are called unequal [common practice: 10 % tolerance band]. */
 	static final double UNEQUAL = 1.1;
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.SERIES_STRING, Severity.ERROR,
@@ -93,7 +97,8 @@ public final class SeriesStringRule implements Rule {
 				string.label(), Figures.engineering(total, "V"), c.faultCase().name(), part.getName(),
 				Figures.engineering(shares[member], "V"), 100 * shares[member] / total, limit.describe(),
 				100 * shares[member] / limit.value(), sharing);
-		return new Finding(ID, INFO.concern(), INFO.severity(), message, part.getName(), c.faultCase().name(),
-				Locations.of(part, DesignPackage.Literals.MEMBER__NAME), shares[member], limit.value(), "V", false);
+		return Finding.of(INFO, message)
+				.about(part.getName(), c.faultCase().name(), Locations.of(part, DesignPackage.Literals.MEMBER__NAME))
+				.judged(shares[member], limit.value(), "V");
 	}
 }

@@ -4,16 +4,20 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.function.Consumer;
 
-import bulwark.check.Concern;
-import bulwark.check.Finding;
-import bulwark.check.Locations;
-import bulwark.check.Severity;
-import bulwark.check.compile.Settings;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Locations;
+import bulwark.check.finding.Severity;
+import bulwark.check.parts.Settings;
 import bulwark.check.policy.ReviewPolicy;
 import bulwark.check.stress.Limit;
 import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
+import bulwark.check.figures.Figures;
+import bulwark.check.cases.SolvedCase;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * A resistor absorbs more energy in a surge than its single-pulse rating, derated by the review policy. The
@@ -22,7 +26,7 @@ import bulwark.lang.design.PartKind;
  * but has no pulse rating gets a note (info), since its continuous power rating says nothing about a pulse.
  */
 public final class SurgeEnergyRule implements Rule {
-	public static final String ID = "surge-energy";
+	public static final RuleId ID = RuleId.of("surge-energy");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.POWER, Severity.ERROR,
 			"a resistor absorbs more energy in a surge than its derated single-pulse rating");
 	/** Energy below which an unrated resistor is not worth a note: a millijoule [common practice]. */
@@ -56,22 +60,22 @@ public final class SurgeEnergyRule implements Rule {
 			var where = Locations.of(part, DesignPackage.Literals.MEMBER__NAME);
 			if (rated.isEmpty()) {
 				if (worst.joules() >= NOTEWORTHY_JOULES) {
-					findings.accept(new Finding(ID, INFO.concern(), Severity.INFO, String.format(Locale.ROOT,
+					findings.accept(Finding.of(INFO, String.format(Locale.ROOT,
 							"%s absorbs %s in surge '%s' and has no pulse rating, so that is not judged: add 'rated pulse' "
 									+ "from its pulse load curve (its power rating is for continuous dissipation)",
-							part.getName(), Figures.engineering(worst.joules(), "J"), worst.surge()), part.getName(),
-							worst.surge(), where, worst.joules(), null, "J", false));
+							part.getName(), Figures.engineering(worst.joules(), "J"), worst.surge())).withSeverity(Severity.INFO)
+							.about(part.getName(), worst.surge(), where).judged(worst.joules(), null, "J"));
 				}
 				continue;
 			}
 			ReviewPolicy.Derating d = context.policy().derating(PartKind.RESISTOR, "pulse");
 			Limit limit = new Limit(rated.get(), "J", "its rated", d.factor(), d.source());
 			if (worst.joules() > limit.value()) {
-				findings.accept(new Finding(ID, INFO.concern(), INFO.severity(), String.format(Locale.ROOT,
+				findings.accept(Finding.of(INFO, String.format(Locale.ROOT,
 						"%s: energy %s in surge '%s', over %s, %s %% of the limit", part.getName(),
 						Figures.over(worst.joules(), limit.value(), "J"), worst.surge(), limit.describe(),
-						Figures.percentOf(worst.joules(), limit.value())), part.getName(), worst.surge(), where, worst.joules(),
-						limit.value(), "J", false));
+						Figures.percentOf(worst.joules(), limit.value()))).about(part.getName(), worst.surge(), where)
+						.judged("pulse", worst.joules(), limit.value(), "J"));
 			}
 		}
 	}

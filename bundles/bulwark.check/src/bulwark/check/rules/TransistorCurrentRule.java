@@ -2,15 +2,17 @@ package bulwark.check.rules;
 
 import java.util.Set;
 
-import bulwark.check.Concern;
-import bulwark.check.Severity;
+import bulwark.check.finding.Concern;
+import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
+import bulwark.check.finding.RuleId;
+import bulwark.check.finding.RuleInfo;
 
 /**
  * A transistor carries more collector (drain) current than it is rated for, derated.
  */
 public final class TransistorCurrentRule extends PartLimitRule {
-	public static final String ID = "transistor-current";
+	public static final RuleId ID = RuleId.of("transistor-current");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.TRANSISTOR, Severity.ERROR,
 			"a transistor carries more collector or drain current than its derated rating");
 

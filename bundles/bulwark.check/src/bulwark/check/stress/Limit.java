@@ -2,7 +2,7 @@ package bulwark.check.stress;
 
 import java.util.Locale;
 
-import bulwark.check.rules.Figures;
+import bulwark.check.figures.Figures;
 
 /**
  * What a stress is compared with: a rating (written, by package, or assumed — {@code basis} says which)

@@ -2,8 +2,8 @@ package bulwark.check.stress;
 
 import java.util.Optional;
 
-import bulwark.check.compile.ResistorRatings;
-import bulwark.check.compile.Settings;
+import bulwark.check.parts.ResistorRatings;
+import bulwark.check.parts.Settings;
 import bulwark.check.policy.ReviewPolicy;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;

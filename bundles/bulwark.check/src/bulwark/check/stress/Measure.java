@@ -2,8 +2,9 @@ package bulwark.check.stress;
 
 import java.util.function.ToDoubleFunction;
 
-import bulwark.check.compile.FaultCase;
-import bulwark.engine.dc.OperatingPoint;
+import bulwark.check.cases.FaultCase;
+import bulwark.check.cases.SolvedCase;
+import bulwark.engine.solve.OperatingPoint;
 
 /**
  * One stress a part kind has, taken from a solved operating point and compared with the rating of the
@@ -36,6 +37,11 @@ public record Measure(String rating, String what, String unit, ToDoubleFunction<
 	 * The figure the rating is judged on in this case, NaN when the case does not judge it: the value at the
 	 * solved instant, except a power rating under mains, judged on the part's power averaged over the cycle.
 	 */
+	/** The figure judged of a part in a solved case (see below). */
+	public double judged(SolvedCase c, String part) {
+		return judged(c.faultCase(), c.solution().device(part), c.averagePower(), part);
+	}
+
 	public double judged(FaultCase c, OperatingPoint point, java.util.Map<String, Double> averagePower, String part) {
 		if (c.isMains() && isPower()) {
 			Double average = averagePower.get(part);

@@ -4,9 +4,9 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
-import bulwark.check.compile.FaultCase;
+import bulwark.check.cases.FaultCase;
 import bulwark.check.policy.ReviewPolicy;
-import bulwark.engine.dc.DcSolution;
+import bulwark.engine.solve.DcSolution;
 import bulwark.lang.design.Part;
 
 /** One stress of one part over its limit in one solved case. */

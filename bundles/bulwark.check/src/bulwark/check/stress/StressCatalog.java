@@ -4,7 +4,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
-import bulwark.engine.dc.OperatingPoint;
+import bulwark.engine.solve.OperatingPoint;
 import bulwark.lang.design.PartKind;
 
 /**

@@ -5,11 +5,11 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
-import bulwark.check.compile.CaseOutcome;
+import bulwark.check.cases.CaseOutcome;
 import bulwark.check.compile.CaseRunner;
 import bulwark.check.compile.CompiledDesign;
 import bulwark.check.compile.DesignCompiler;
-import bulwark.check.compile.Values;
+import bulwark.check.parts.Values;
 import bulwark.check.function.FunctionAnalysis;
 import bulwark.check.function.FunctionFigures;
 import bulwark.check.function.PairFigures;
@@ -18,8 +18,8 @@ import bulwark.check.stress.Limit;
 import bulwark.check.stress.Limits;
 import bulwark.check.stress.Measure;
 import bulwark.check.stress.StressCatalog;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.SolveFailure;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.SolveFailure;
 import bulwark.lang.design.Design;
 import bulwark.lang.design.Part;
 

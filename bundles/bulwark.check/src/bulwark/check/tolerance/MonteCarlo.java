@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
+
+import bulwark.check.policy.Distribution;
 import java.util.Map;
 import java.util.SplittableRandom;
 import java.util.concurrent.atomic.AtomicInteger;
@@ -17,10 +19,6 @@ import bulwark.check.compile.Variation;
  * index, so that a run is reproducible whatever the number of threads. Samples run in parallel on all cores.
  */
 public final class MonteCarlo {
-	public enum Distribution {
-		UNIFORM, NORMAL
-	}
-
 	/** The samples' figures, in sample order; a sample that could not be solved is named, not dropped. */
 	public record Result(List<Evaluation> samples, List<String> failures, boolean cancelled) {
 	}

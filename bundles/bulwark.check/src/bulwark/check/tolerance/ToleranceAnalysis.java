@@ -4,20 +4,21 @@ import java.util.List;
 
 import bulwark.check.policy.ReviewPolicy;
 import bulwark.lang.design.Design;
+import bulwark.check.policy.Distribution;
 
 /** Corners, then Monte Carlo, of one design under its review policy. */
 public final class ToleranceAnalysis {
 	/** Everything a tolerance run found. */
 	public record Result(List<Toleranced> toleranced, Corners.Result corners, List<Statistics> statistics,
 			List<Yield> yields, MonteCarlo.Result monteCarlo, int samples, long seed,
-			MonteCarlo.Distribution distribution) {
+			Distribution distribution) {
 	}
 
 	private ToleranceAnalysis() {
 	}
 
 	public static Result run(Design design, ReviewPolicy policy, int samples, long seed,
-			MonteCarlo.Distribution distribution, Progress progress) {
+			Distribution distribution, Progress progress) {
 		Evaluator evaluator = new Evaluator(design, policy);
 		List<Toleranced> toleranced = Toleranced.of(design);
 		int cornerWork = 1 + 2 * toleranced.size();

@@ -5,7 +5,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
 
-import bulwark.check.compile.Settings;
+import bulwark.check.parts.Settings;
 import bulwark.lang.design.Design;
 import bulwark.lang.design.Member;
 import bulwark.lang.design.Parameter;

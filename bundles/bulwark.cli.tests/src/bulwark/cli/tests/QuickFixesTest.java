@@ -15,7 +15,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 import bulwark.check.DesignChecker;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.fix.Fix;
 import bulwark.check.load.DesignLoader;
 import bulwark.lang.BulwarkStandaloneSetup;
@@ -35,7 +35,7 @@ class QuickFixesTest {
 	}
 
 	private static Fix only(Map<Finding, List<Fix>> fixes, String rule) {
-		List<Fix> list = fixes.entrySet().stream().filter(e -> e.getKey().rule().equals(rule))
+		List<Fix> list = fixes.entrySet().stream().filter(e -> e.getKey().rule().text().equals(rule))
 				.flatMap(e -> e.getValue().stream()).toList();
 		assertEquals(1, list.size(), fixes.toString());
 		return list.get(0);
@@ -53,7 +53,7 @@ class QuickFixesTest {
 		String fixed = fix.applyTo(Files.readString(lab));
 		assertTrue(fixed.contains("  rated power 2 W\n"), fixed);
 		DesignResult after = CHECKER.check(fixed, lab.toString(), CancelIndicator.NullImpl);
-		assertTrue(after.findings().stream().noneMatch(f -> f.rule().equals("resistor-power")), after.findings().toString());
+		assertTrue(after.findings().stream().noneMatch(f -> f.rule().text().equals("resistor-power")), after.findings().toString());
 	}
 
 	@Test
@@ -106,7 +106,7 @@ class QuickFixesTest {
 				}
 				"""), fixed);
 		DesignResult after = CHECKER.check(fixed, design.toString(), CancelIndicator.NullImpl);
-		assertTrue(after.findings().stream().noneMatch(f -> f.severity() == bulwark.check.Severity.ERROR),
+		assertTrue(after.findings().stream().noneMatch(f -> f.severity() == bulwark.check.finding.Severity.ERROR),
 				after.findings().toString());
 	}
 
@@ -160,7 +160,7 @@ class QuickFixesTest {
 		// gives 3·100 k/13.1 M = 22.9 mV [closed form, the non-inverting network of docs/sources.md#solver-oracles]
 		assertTrue(fix.label().startsWith("add R_HYST_U1 = 13 MΩ from U1's output to in_plus: about 22.9 mV"), fix.label());
 		DesignResult after = CHECKER.check(fix.applyTo(Files.readString(design)), design.toString(), CancelIndicator.NullImpl);
-		assertTrue(after.findings().stream().noneMatch(f -> f.rule().equals("hysteresis")), after.findings().toString());
+		assertTrue(after.findings().stream().noneMatch(f -> f.rule().text().equals("hysteresis")), after.findings().toString());
 	}
 
 	@Test
@@ -200,7 +200,7 @@ class QuickFixesTest {
 		Files.copy(CliRun.root().resolve("examples/lib/generic-parts.bulwark"), dir.resolve("lib/generic-parts.bulwark"));
 		// R_LIMIT dissipates 197 W under mains: no standard power step holds that, so nothing is offered for it
 		assertTrue(fixes(loom).entrySet().stream()
-				.noneMatch(e -> "R_LIMIT".equals(e.getKey().part()) && e.getKey().rule().equals("resistor-power")));
+				.noneMatch(e -> "R_LIMIT".equals(e.getKey().part()) && e.getKey().rule().text().equals("resistor-power")));
 	}
 
 	@Test
@@ -217,7 +217,7 @@ class QuickFixesTest {
 				case "200 V" { apply 200 V from TIP to COM }
 				""");
 		Files.writeString(dir.resolve("p.bulwark-policy"), "policy \"p\"\n  mains none\n");
-		List<Fix> fixes = fixes(design).entrySet().stream().filter(e -> e.getKey().rule().equals("resistor-voltage"))
+		List<Fix> fixes = fixes(design).entrySet().stream().filter(e -> e.getKey().rule().text().equals("resistor-voltage"))
 				.flatMap(e -> e.getValue().stream()).toList();
 		// 200 V against 0805's 150 V derated to 80 % (120 V): an axial ¼ W part (250 V → 200 V) holds it exactly;
 		// or two parts of 510 kΩ (E24 nearest to 500 kΩ), 100 V each [closed form]

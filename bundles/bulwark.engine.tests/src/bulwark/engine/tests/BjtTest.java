@@ -11,10 +11,10 @@ import bulwark.engine.circuit.Bjt.Polarity;
 import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.circuit.VoltageSource;
-import bulwark.engine.dc.DcResult;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.DcSolver;
-import bulwark.engine.dc.OperatingPoint;
+import bulwark.engine.solve.DcResult;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.DcSolver;
+import bulwark.engine.solve.OperatingPoint;
 import bulwark.engine.device.BjtModel;
 import bulwark.engine.device.Physics;
 

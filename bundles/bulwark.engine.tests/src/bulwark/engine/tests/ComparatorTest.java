@@ -12,12 +12,12 @@ import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Comparator;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.circuit.VoltageSource;
-import bulwark.engine.dc.DcResult;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.DcSolver;
-import bulwark.engine.dc.DcSweep;
-import bulwark.engine.dc.DcSweep.Threshold;
-import bulwark.engine.dc.PreparedCircuit;
+import bulwark.engine.solve.DcResult;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.DcSolver;
+import bulwark.engine.solve.DcSweep;
+import bulwark.engine.solve.DcSweep.Threshold;
+import bulwark.engine.solve.PreparedCircuit;
 import bulwark.engine.device.ComparatorModel;
 
 /** The behavioural comparator and the engine's up/down threshold sweeps (docs/sources.md#solver-oracles, "Comparator hysteresis"). */

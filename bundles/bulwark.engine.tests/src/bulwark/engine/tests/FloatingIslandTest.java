@@ -8,9 +8,9 @@ import org.junit.jupiter.api.Test;
 import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.circuit.VoltageSource;
-import bulwark.engine.dc.DcResult;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.DcSolver;
+import bulwark.engine.solve.DcResult;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.DcSolver;
 import bulwark.engine.device.DiodeModel;
 
 /**

@@ -11,9 +11,9 @@ import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Device;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.circuit.VoltageSource;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.DcSolver;
-import bulwark.engine.dc.OperatingPoint;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.DcSolver;
+import bulwark.engine.solve.OperatingPoint;
 
 /**
  * Independent check of random resistive ladders: whatever the solver did, Kirchhoff's current law must

@@ -10,9 +10,9 @@ import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.CurrentSource;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.circuit.VoltageSource;
-import bulwark.engine.dc.DcResult;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.DcSolver;
+import bulwark.engine.solve.DcResult;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.DcSolver;
 
 /** Linear networks against closed-form values (docs/sources.md#solver-oracles). */
 class LinearDcSolverTest {

@@ -11,9 +11,9 @@ import bulwark.engine.circuit.Fuse;
 import bulwark.engine.circuit.Indicator;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.circuit.VoltageSource;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.DcSolver;
-import bulwark.engine.dc.DcSweep;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.DcSolver;
+import bulwark.engine.solve.DcSweep;
 import bulwark.engine.device.DiodeModel;
 import bulwark.engine.device.LedColour;
 

@@ -10,9 +10,9 @@ import bulwark.engine.circuit.Mosfet;
 import bulwark.engine.circuit.Mosfet.Channel;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.circuit.VoltageSource;
-import bulwark.engine.dc.DcResult;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.DcSolver;
+import bulwark.engine.solve.DcResult;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.DcSolver;
 import bulwark.engine.device.MosfetModel;
 import bulwark.engine.device.Physics;
 

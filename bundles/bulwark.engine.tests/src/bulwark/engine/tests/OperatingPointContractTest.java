@@ -1,8 +1,8 @@
 package bulwark.engine.tests;
 
 import bulwark.engine.circuit.Circuit;
-import bulwark.engine.dc.DcResult;
-import bulwark.engine.dc.DcSolver;
+import bulwark.engine.solve.DcResult;
+import bulwark.engine.solve.DcSolver;
 
 /** The contract for the operating point solved from a circuit. */
 class OperatingPointContractTest extends SolverContract {

@@ -10,13 +10,13 @@ import bulwark.engine.circuit.Capacitor;
 import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.circuit.VoltageSource;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.DcSolver;
-import bulwark.engine.dc.PeriodicSteadyState;
-import bulwark.engine.dc.PreparedCircuit;
-import bulwark.engine.dc.SolveFailure.Reason;
-import bulwark.engine.dc.TransientResult;
-import bulwark.engine.dc.TransientSolver;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.DcSolver;
+import bulwark.engine.solve.PeriodicSteadyState;
+import bulwark.engine.solve.PreparedCircuit;
+import bulwark.engine.solve.SolveFailure.Reason;
+import bulwark.engine.solve.TransientResult;
+import bulwark.engine.solve.TransientSolver;
 import bulwark.engine.source.SwitchedSine;
 
 /** Runs in pieces and the periodic steady state, against the closed forms of a series RC under a sine. */
@@ -66,7 +66,7 @@ class PeriodicSteadyStateTest {
 	@Test
 	void aLeakyCapacitorHoldsItsNetAtDc() {
 		// without leakage mid has no DC path; with 1 GΩ across each capacitor the operating point exists
-		assertEquals(Reason.FLOATING_NET, assertInstanceOf(bulwark.engine.dc.SolveFailure.class,
+		assertEquals(Reason.FLOATING_NET, assertInstanceOf(bulwark.engine.solve.SolveFailure.class,
 				new DcSolver().solve(divider(Double.POSITIVE_INFINITY))).reason());
 		DcSolution s = assertInstanceOf(DcSolution.class, new DcSolver().solve(divider(1e9)));
 		// equal leakages divide the 10 V: 5 V, and 10 V/2 GΩ = 5 nA through both [closed form, divider]

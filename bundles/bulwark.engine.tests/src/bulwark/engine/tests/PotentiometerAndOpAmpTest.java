@@ -9,8 +9,8 @@ import bulwark.engine.circuit.Comparator;
 import bulwark.engine.circuit.Potentiometer;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.circuit.VoltageSource;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.DcSolver;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.DcSolver;
 import bulwark.engine.device.ComparatorModel;
 
 /** A potentiometer divider, and the behavioural amplifier model used as an op-amp in feedback. */

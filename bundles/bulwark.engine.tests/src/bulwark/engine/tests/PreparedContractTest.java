@@ -1,9 +1,9 @@
 package bulwark.engine.tests;
 
 import bulwark.engine.circuit.Circuit;
-import bulwark.engine.dc.DcResult;
-import bulwark.engine.dc.DcSolver;
-import bulwark.engine.dc.PreparedCircuit;
+import bulwark.engine.solve.DcResult;
+import bulwark.engine.solve.DcSolver;
+import bulwark.engine.solve.PreparedCircuit;
 
 /** The contract for a prepared circuit solved twice, the second time from the first solution (continuation). */
 class PreparedContractTest extends SolverContract {
@@ -12,6 +12,6 @@ class PreparedContractTest extends SolverContract {
 		DcSolver solver = new DcSolver();
 		PreparedCircuit prepared = DcSolver.prepare(circuit);
 		DcResult first = solver.solve(prepared);
-		return first instanceof bulwark.engine.dc.DcSolution s ? solver.solve(prepared, s) : first;
+		return first instanceof bulwark.engine.solve.DcSolution s ? solver.solve(prepared, s) : first;
 	}
 }

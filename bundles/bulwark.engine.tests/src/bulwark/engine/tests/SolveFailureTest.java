@@ -12,10 +12,10 @@ import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Comparator;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.circuit.VoltageSource;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.DcSolver;
-import bulwark.engine.dc.SolveFailure;
-import bulwark.engine.dc.SolveFailure.Reason;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.DcSolver;
+import bulwark.engine.solve.SolveFailure;
+import bulwark.engine.solve.SolveFailure.Reason;
 import bulwark.engine.device.ComparatorModel;
 
 /**
@@ -53,7 +53,7 @@ class SolveFailureTest {
 		int a = b.net("a");
 		b.add(new VoltageSource("B1", a, 0, 3, 1)).add(new VoltageSource("B2", a, 0, 1, 1));
 		// Two Thevenin sources in parallel settle at the mean EMF for equal resistances [closed form]
-		assertEquals(2.0, ((bulwark.engine.dc.DcSolution) new DcSolver().solve(b.build())).voltage("a"), 1e-12);
+		assertEquals(2.0, ((bulwark.engine.solve.DcSolution) new DcSolver().solve(b.build())).voltage("a"), 1e-12);
 	}
 
 	@Test
@@ -92,7 +92,7 @@ class SolveFailureTest {
 		Circuit.Builder b = Circuit.withReference("gnd");
 		int a = b.net("a");
 		b.add(VoltageSource.ideal("V1", a, 0, 1)).add(new Resistor("R9", a, 0, 1)).add(new Resistor("R1", a, 0, 1));
-		var s = (bulwark.engine.dc.DcSolution) new DcSolver().solve(b.build());
+		var s = (bulwark.engine.solve.DcSolution) new DcSolver().solve(b.build());
 		assertEquals(List.of("V1", "R9", "R1"), List.copyOf(s.devices().keySet()));
 	}
 }

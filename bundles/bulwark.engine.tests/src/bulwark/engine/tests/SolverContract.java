@@ -8,10 +8,10 @@ import org.junit.jupiter.api.Test;
 import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.circuit.VoltageSource;
-import bulwark.engine.dc.DcResult;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.SolveFailure;
-import bulwark.engine.dc.SolveFailure.Reason;
+import bulwark.engine.solve.DcResult;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.SolveFailure;
+import bulwark.engine.solve.SolveFailure.Reason;
 import bulwark.engine.device.DiodeModel;
 
 /**

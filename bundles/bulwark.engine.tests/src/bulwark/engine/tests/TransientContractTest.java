@@ -9,11 +9,11 @@ import org.junit.jupiter.api.Test;
 import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.circuit.VoltageSource;
-import bulwark.engine.dc.DcResult;
-import bulwark.engine.dc.DcSolver;
-import bulwark.engine.dc.TransientResult;
-import bulwark.engine.dc.TransientSolver;
-import bulwark.engine.dc.SolveFailure.Reason;
+import bulwark.engine.solve.DcResult;
+import bulwark.engine.solve.DcSolver;
+import bulwark.engine.solve.TransientResult;
+import bulwark.engine.solve.TransientSolver;
+import bulwark.engine.solve.SolveFailure.Reason;
 
 /** The contract for a short transient of a circuit with constant sources: its last point, or why it stopped. */
 class TransientContractTest extends SolverContract {

@@ -1,6 +1,6 @@
 package bulwark.engine.circuit;
 
-import bulwark.engine.dc.OperatingPoint;
+import bulwark.engine.solve.OperatingPoint;
 
 /**
  * An indicator or buzzer load: resistive, and on when its current reaches its activation current. The

@@ -62,7 +62,7 @@ class ReviewViewsUiTest {
 		double terminalX = boxes.stream().filter(b -> b.kind().equals("terminal")).mapToDouble(b -> b.x()).max().orElseThrow();
 		double partX = boxes.stream().filter(b -> b.kind().equals("resistor")).mapToDouble(b -> b.x()).min().orElseThrow();
 		assertTrue(terminalX < partX, "terminals on the left");
-		var reverse = editor.lastResult().findings().stream().filter(f -> f.rule().equals("reverse-path")).findFirst().orElseThrow();
+		var reverse = editor.lastResult().findings().stream().filter(f -> f.rule().text().equals("reverse-path")).findFirst().orElseThrow();
 		topology.highlight(reverse);
 		var path = bulwark.check.rules.ReversePathRule.pathOf(reverse);
 		assertTrue(topology.highlighted().containsAll(path) && topology.highlighted().contains("net gnd"), topology.highlighted().toString());
@@ -101,11 +101,11 @@ class ReviewViewsUiTest {
 		java.nio.file.Files.copy(ROOT.resolve("examples/teaching-lab.bulwark-policy"), dir.resolve("teaching-lab.bulwark-policy"));
 		DesignEditor editor = Application.openFile(page(), lab);
 		assertTrue(waitUntil(() -> editor.lastResult() != null
-				&& editor.lastResult().findings().stream().anyMatch(f -> f.rule().equals("resistor-power"))));
+				&& editor.lastResult().findings().stream().anyMatch(f -> f.rule().text().equals("resistor-power"))));
 		var fixes = editor.fixProposals().fixesAt(22);
 		assertEquals("raise R_DROP's rated power 125 mW → 2 W (1280 % → 80 % of the limit)", fixes.get(0).label());
 		editor.fixProposals().apply(fixes.get(0));
-		assertTrue(waitUntil(() -> editor.lastResult().findings().stream().noneMatch(f -> f.rule().equals("resistor-power"))),
+		assertTrue(waitUntil(() -> editor.lastResult().findings().stream().noneMatch(f -> f.rule().text().equals("resistor-power"))),
 				"the finding stays after its fix");
 		assertTrue(editor.isDirty());
 	}
@@ -120,11 +120,11 @@ class ReviewViewsUiTest {
 				.showView(bulwark.ui.findings.FindingsView.ID);
 		DesignEditor editor = Application.openFile(page(), lab);
 		assertTrue(waitUntil(() -> findings.shownFindings() != null
-				&& findings.shownFindings().stream().anyMatch(f -> f.rule().equals("resistor-power"))));
-		var finding = findings.shownFindings().stream().filter(f -> f.rule().equals("resistor-power")).findFirst().orElseThrow();
+				&& findings.shownFindings().stream().anyMatch(f -> f.rule().text().equals("resistor-power"))));
+		var finding = findings.shownFindings().stream().filter(f -> f.rule().text().equals("resistor-power")).findFirst().orElseThrow();
 		findings.waive(finding, "the \"lamp\" test lasts 10 ms", "A. Reviewer");
 		assertTrue(waitUntil(() -> editor.lastResult().findings().stream()
-				.anyMatch(f -> f.rule().equals("resistor-power") && f.waived())), "the finding is not waived");
+				.anyMatch(f -> f.rule().text().equals("resistor-power") && f.waived())), "the finding is not waived");
 		assertEquals(bulwark.check.Status.PASS, editor.lastResult().status());
 	}
 

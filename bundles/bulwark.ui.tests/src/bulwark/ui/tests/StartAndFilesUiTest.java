@@ -13,7 +13,7 @@ import org.eclipse.ui.PlatformUI;
 import org.eclipse.ui.handlers.IHandlerService;
 import org.junit.jupiter.api.Test;
 
-import bulwark.check.Severity;
+import bulwark.check.finding.Severity;
 import bulwark.check.Status;
 import bulwark.ui.Application;
 import bulwark.ui.Screenshot;

@@ -20,7 +20,7 @@ import org.eclipse.ui.IEditorInput;
 import org.eclipse.ui.IURIEditorInput;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.lang.ide.highlight.SemanticRanges;
 import bulwark.ui.BulwarkUi;
 import bulwark.ui.findings.FindingsHub;

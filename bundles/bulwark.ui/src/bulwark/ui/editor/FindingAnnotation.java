@@ -2,7 +2,7 @@ package bulwark.ui.editor;
 
 import org.eclipse.jface.text.source.Annotation;
 
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 
 /**
  * A finding shown in the editor. Its type is one of the editor's standard error/warning/info annotation

@@ -9,11 +9,11 @@ import org.eclipse.jface.text.ITextHover;
 import org.eclipse.jface.text.ITextViewer;
 import org.eclipse.jface.text.Region;
 
-import bulwark.check.CaseResult;
+import bulwark.check.cases.CaseResult;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.PartStress;
-import bulwark.check.rules.Figures;
+import bulwark.check.finding.Finding;
+import bulwark.check.cases.PartStress;
+import bulwark.check.figures.Figures;
 
 /**
  * Hovering over a part's designator shows its worst stress: the utilisation against its rating, which

@@ -35,9 +35,9 @@ import org.eclipse.ui.IWorkbenchPartReference;
 import org.eclipse.ui.PlatformUI;
 import org.eclipse.ui.part.ViewPart;
 
-import bulwark.check.Concern;
+import bulwark.check.finding.Concern;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.ui.editor.DesignEditor;
 
 /**
@@ -85,7 +85,7 @@ public class FindingsView extends ViewPart {
 		table.setHeaderVisible(true);
 		table.setLinesVisible(true);
 		column("Severity", 90, f -> f.severity().id() + (f.waived() ? " (waived)" : ""), this::icon);
-		column("Rule", 130, Finding::rule, f -> null);
+		column("Rule", 130, f -> f.rule().text(), f -> null);
 		column("Concern", 110, f -> f.concern().id(), f -> null);
 		column("Part", 80, f -> f.part() == null ? "" : f.part(), f -> null);
 		column("Case", 170, f -> f.caseName() == null ? "" : f.caseName(), f -> null);

@@ -24,9 +24,9 @@ import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableColumn;
 import org.eclipse.ui.part.ViewPart;
 
-import bulwark.check.CaseResult;
+import bulwark.check.cases.CaseResult;
 import bulwark.check.DesignResult;
-import bulwark.check.PartStress;
+import bulwark.check.cases.PartStress;
 import bulwark.ui.editor.DesignEditor;
 import bulwark.ui.findings.FindingsHub;
 

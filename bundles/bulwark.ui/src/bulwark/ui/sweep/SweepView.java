@@ -20,7 +20,7 @@ import org.eclipse.ui.part.ViewPart;
 import bulwark.check.DesignResult;
 import bulwark.check.function.PairFigures;
 import bulwark.check.function.SweepPoint;
-import bulwark.check.rules.Figures;
+import bulwark.check.figures.Figures;
 import bulwark.ui.editor.DesignEditor;
 import bulwark.ui.findings.FindingsHub;
 

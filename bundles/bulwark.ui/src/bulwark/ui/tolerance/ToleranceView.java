@@ -45,6 +45,7 @@ import bulwark.check.tolerance.ToleranceAnalysis;
 import bulwark.check.tolerance.Yield;
 import bulwark.ui.BulwarkUi;
 import bulwark.ui.editor.DesignEditor;
+import bulwark.check.policy.Distribution;
 
 /**
  * Tolerance analysis of the design being edited, on demand: corners, then Monte Carlo, in a background job
@@ -168,8 +169,7 @@ public class ToleranceView extends ViewPart {
 			return;
 		}
 		PreparedDesign design = ready.design();
-		MonteCarlo.Distribution distribution = MonteCarlo.Distribution
-				.valueOf(design.policy().distribution().toUpperCase(Locale.ROOT));
+		Distribution distribution = design.policy().distribution();
 		result = null;
 		resultFile = file;
 		run.setEnabled(false);

@@ -21,6 +21,7 @@ import bulwark.check.DesignChecker;
 import bulwark.check.DesignResult;
 import bulwark.check.Status;
 import bulwark.check.load.DesignLoader;
+import bulwark.check.policy.DefaultPolicy;
 import bulwark.check.policy.ReviewPolicy;
 import bulwark.lang.BulwarkStandaloneSetup;
 import bulwark.lang.install.Installation;
@@ -61,8 +62,8 @@ public class MainsCaseBenchmark {
 
 	@Setup
 	public void setUp() {
-		ReviewPolicy mainsOnly = new ReviewPolicy("230 V mains only", List.of(new ReviewPolicy.MainsSystem(230, 10)),
-				List.of(), List.of(), Map.of(), Optional.of(10e-3), Optional.empty(), Map.of(), true, true, "uniform");
+		ReviewPolicy mainsOnly = DefaultPolicy.POLICY.with("230 V mains only",
+				new ReviewPolicy.Abuse(List.of(new ReviewPolicy.MainsSystem(230, 10)), List.of(), List.of())).notDerated();
 		checker = new DesignChecker(new DesignLoader(new BulwarkStandaloneSetup().createInjectorAndDoEMFRegistration(),
 				Installation.fromLaunch()), mainsOnly);
 		for (DesignResult r : List.of(quasiStatic(), transientToSteadyState())) {

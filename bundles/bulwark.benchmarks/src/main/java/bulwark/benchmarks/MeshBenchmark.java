@@ -26,9 +26,9 @@ import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Device;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.circuit.VoltageSource;
-import bulwark.engine.dc.DcResult;
-import bulwark.engine.dc.DcSolver;
-import bulwark.engine.dc.PreparedCircuit;
+import bulwark.engine.solve.DcResult;
+import bulwark.engine.solve.DcSolver;
+import bulwark.engine.solve.PreparedCircuit;
 
 /**
  * Square resistor meshes of about 50, 500 and 5,000 nets: Bulwark's sparse solve (assembly, sparse LU in

@@ -14,10 +14,10 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 
 import bulwark.engine.circuit.Circuit;
-import bulwark.engine.dc.DcResult;
-import bulwark.engine.dc.DcSolution;
-import bulwark.engine.dc.DcSolver;
-import bulwark.engine.dc.PreparedCircuit;
+import bulwark.engine.solve.DcResult;
+import bulwark.engine.solve.DcSolution;
+import bulwark.engine.solve.DcSolver;
+import bulwark.engine.solve.PreparedCircuit;
 
 /** Operating point of a 40-part probe-style circuit with 325 V on its tip (goal: under 50 µs warm). */
 @State(Scope.Benchmark)

@@ -12,11 +12,11 @@ import org.eclipse.xtext.util.CancelIndicator;
 
 import bulwark.check.DesignChecker;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.load.DesignLoader;
 import bulwark.check.rules.CheckContext;
 import bulwark.check.rules.Rule;
-import bulwark.check.rules.RuleInfo;
+import bulwark.check.finding.RuleInfo;
 import bulwark.check.rules.RuleRegistry;
 import bulwark.lang.BulwarkStandaloneSetup;
 import net.jqwik.api.Arbitraries;
@@ -175,8 +175,8 @@ class CheckFuzz {
 		assertNotNull(r.status());
 		for (Finding f : r.findings()) {
 			assertNotNull(f.message());
-			assertFalse(f.rule().equals("internal"), () -> "a fault of Bulwark's own: " + f.message() + "\n" + text);
-			if (f.rule().equals("syntax") || f.rule().equals("structure")) {
+			assertFalse(f.rule().text().equals("internal"), () -> "a fault of Bulwark's own: " + f.message() + "\n" + text);
+			if (f.rule().text().equals("syntax") || f.rule().text().equals("structure")) {
 				assertTrue(f.location().line() >= 1, () -> "unlocated: " + f + "\n" + text);
 			}
 		}

@@ -5,7 +5,8 @@ import java.util.Map;
 import java.util.Optional;
 
 import bulwark.check.rules.RatingMissingRule;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.FindingDetail;
 import bulwark.check.WorstStress;
 import bulwark.check.fix.Fix;
 import bulwark.lang.design.Part;
@@ -21,8 +22,8 @@ final class AddMissingRating implements FixProvider {
 
 	@Override
 	public List<Fix> propose(FixContext context, Finding finding) {
-		if (!finding.rule().equals(RatingMissingRule.ID) || finding.part() == null
-				|| !finding.message().contains("power (resistor-power)")) {
+		boolean lacksPower = finding.detail(FindingDetail.MissingRatings.class).map(m -> m.lacks("power")).orElse(false);
+		if (!finding.rule().equals(RatingMissingRule.ID) || finding.part() == null || !lacksPower) {
 			return List.of();
 		}
 		Optional<Part> found = PartText.part(context.design(), finding.part());
@@ -46,7 +47,7 @@ final class AddMissingRating implements FixProvider {
 		String written = RaiseRating.value(step, "W");
 		String setting = "rated power " + written + " # added by a quick fix: confirm against the part fitted";
 		return List.of(new Fix("add " + finding.part() + "'s rated power " + written + " (worst dissipation "
-				+ bulwark.check.rules.Figures.watts(worst) + "; confirm it)", Map.of("worst", worst),
+				+ bulwark.check.figures.Figures.watts(worst) + "; confirm it)", Map.of("worst", worst),
 				Map.of("rated", step), List.of(PartText.addSetting(context.text(), found.get(), setting))));
 	}
 }

@@ -5,10 +5,10 @@ import java.util.Map;
 import java.util.Optional;
 
 import bulwark.check.rules.ReversePathRule;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.fix.Fix;
 import bulwark.check.fix.TextEdit;
-import bulwark.check.rules.Figures;
+import bulwark.check.figures.Figures;
 import bulwark.lang.design.Member;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PinBinding;

@@ -2,7 +2,7 @@ package bulwark.lang.ide.fixes;
 
 import java.util.List;
 
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.fix.Fix;
 
 /** Proposes fixes for one finding; the proposals are checked by {@link QuickFixes} before any is offered. */

@@ -7,7 +7,7 @@ import java.util.Optional;
 
 import bulwark.check.rules.ClampCurrentRule;
 import bulwark.check.rules.ComparatorInputRule;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.fix.Fix;
 import bulwark.check.fix.TextEdit;
 import bulwark.lang.design.Part;

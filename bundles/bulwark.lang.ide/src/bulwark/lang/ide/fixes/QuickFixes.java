@@ -11,8 +11,8 @@ import org.eclipse.xtext.util.CancelIndicator;
 
 import bulwark.check.DesignChecker;
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
-import bulwark.check.Severity;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.Severity;
 import bulwark.check.fix.Fix;
 import bulwark.check.load.LoadedDesign;
 import bulwark.check.policy.ReviewPolicy;

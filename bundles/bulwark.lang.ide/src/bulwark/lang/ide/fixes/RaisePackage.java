@@ -7,12 +7,12 @@ import java.util.Optional;
 
 import bulwark.check.rules.ResistorVoltageRule;
 import bulwark.check.rules.SeriesStringRule;
-import bulwark.check.Finding;
-import bulwark.check.compile.ResistorRatings;
-import bulwark.check.compile.Settings;
+import bulwark.check.finding.Finding;
+import bulwark.check.parts.ResistorRatings;
+import bulwark.check.parts.Settings;
 import bulwark.check.fix.Fix;
 import bulwark.check.fix.TextEdit;
-import bulwark.check.rules.Figures;
+import bulwark.check.figures.Figures;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
 import bulwark.lang.design.Setting;

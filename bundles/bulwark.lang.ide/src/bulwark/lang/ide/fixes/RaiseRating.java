@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 
 import bulwark.check.rules.CapacitorVoltageRule;
 import bulwark.check.rules.DevicePowerRule;
@@ -15,11 +16,12 @@ import bulwark.check.rules.ResistorPowerRule;
 import bulwark.check.rules.SurgeEnergyRule;
 import bulwark.check.rules.TransistorCurrentRule;
 import bulwark.check.rules.TransistorVoltageRule;
-import bulwark.check.Finding;
-import bulwark.check.compile.Settings;
+import bulwark.check.finding.Finding;
+import bulwark.check.finding.RuleId;
+import bulwark.check.parts.Settings;
 import bulwark.check.fix.Fix;
 import bulwark.check.fix.TextEdit;
-import bulwark.check.rules.Figures;
+import bulwark.check.figures.Figures;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
 import bulwark.lang.design.Setting;
@@ -42,10 +44,10 @@ final class RaiseRating implements FixProvider {
 			"drain", new double[] { 0.1, 0.2, 0.5, 1, 2, 5 },
 			// single-pulse energy, J: thick-film chips to wirewound and carbon-composition parts
 			"pulse", new double[] { 0.05, 0.1, 0.2, 0.5, 1, 2, 5, 10, 20 });
-	/** Which rating each rule's finding is about, by the part's kind. */
-	private static final Map<String, String> RATING_OF_RULE = Map.of(ResistorPowerRule.ID, "power", DevicePowerRule.ID, "power",
-			DiodeReverseRule.ID, "reverse", ForwardCurrentRule.ID, "forward", CapacitorVoltageRule.ID, "voltage", FuseVoltageRule.ID,
-			"voltage", ProtectorBlockingRule.ID, "blocking", TransistorCurrentRule.ID, "collector", SurgeEnergyRule.ID, "pulse");
+	/** The rules whose findings this fix answers; each finding names the rating it was judged against. */
+	private static final Set<RuleId> RAISES = Set.of(ResistorPowerRule.ID, DevicePowerRule.ID, DiodeReverseRule.ID,
+			ForwardCurrentRule.ID, CapacitorVoltageRule.ID, FuseVoltageRule.ID, ProtectorBlockingRule.ID,
+			TransistorCurrentRule.ID, TransistorVoltageRule.ID, SurgeEnergyRule.ID);
 
 	@Override
 	public List<Fix> propose(FixContext context, Finding finding) {
@@ -57,7 +59,7 @@ final class RaiseRating implements FixProvider {
 			return List.of();
 		}
 		Part part = found.get();
-		String rating = rating(finding.rule(), part.getKind());
+		String rating = RAISES.contains(finding.rule()) ? finding.rating() : null;
 		if (rating == null || !STEPS.containsKey(rating)) {
 			return List.of();
 		}
@@ -87,16 +89,6 @@ final class RaiseRating implements FixProvider {
 				100 * finding.value() / finding.limit(), 100 * finding.value() / (step * factor));
 		return List.of(new Fix(label, Map.of("rated", rated.get(), "utilisation", finding.value() / finding.limit()),
 				Map.of("rated", step, "utilisation", finding.value() / (step * factor)), List.of(edit)));
-	}
-
-	private static String rating(String rule, PartKind kind) {
-		if (rule.equals(TransistorVoltageRule.ID)) {
-			return kind == PartKind.NMOS || kind == PartKind.PMOS ? "drain_source" : "collector_emitter";
-		}
-		if (rule.equals(TransistorCurrentRule.ID)) {
-			return kind == PartKind.NMOS || kind == PartKind.PMOS ? "drain" : "collector";
-		}
-		return RATING_OF_RULE.get(rule);
 	}
 
 	/** A rating as the design language writes it: "2 W", "250 mW", "1 kV". */

@@ -5,9 +5,9 @@ import java.util.Map;
 import java.util.Optional;
 
 import bulwark.check.rules.PreferredValueRule;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.fix.Fix;
-import bulwark.check.rules.Figures;
+import bulwark.check.figures.Figures;
 import bulwark.lang.design.Parameter;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.Setting;

@@ -11,11 +11,11 @@ import org.eclipse.xtext.nodemodel.util.NodeModelUtils;
 
 import bulwark.check.rules.ResistorVoltageRule;
 import bulwark.check.rules.SeriesStringRule;
-import bulwark.check.Finding;
-import bulwark.check.compile.Settings;
+import bulwark.check.finding.Finding;
+import bulwark.check.parts.Settings;
 import bulwark.check.fix.Fix;
 import bulwark.check.fix.TextEdit;
-import bulwark.check.rules.Figures;
+import bulwark.check.figures.Figures;
 import bulwark.lang.design.Parameter;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;

@@ -14,7 +14,7 @@ import org.eclipse.xtext.validation.ResourceValidatorImpl;
 import com.google.inject.Inject;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.load.LoadedDesign;
 import bulwark.lang.design.Design;
 
@@ -37,10 +37,10 @@ public class CheckingResourceValidator extends ResourceValidatorImpl {
 			return issues;
 		}
 		String text = x.getParseResult().getRootNode().getText();
-		if (bulwark.check.InputLimits.check(text).isPresent()) {
+		if (bulwark.check.load.InputLimits.check(text).isPresent()) {
 			Issue.IssueImpl refused = new Issue.IssueImpl();
 			refused.setSeverity(Severity.ERROR);
-			refused.setMessage("not checked: " + bulwark.check.InputLimits.check(text).get().message());
+			refused.setMessage("not checked: " + bulwark.check.load.InputLimits.check(text).get().message());
 			refused.setCode("file");
 			refused.setLineNumber(1);
 			refused.setColumn(1);
@@ -71,7 +71,7 @@ public class CheckingResourceValidator extends ResourceValidatorImpl {
 		}
 		checks.put(resource.getURI().toString(), new Checks.Checked(text, result));
 		for (Finding f : result.findings()) {
-			if (!f.rule().equals("syntax") && !f.rule().equals("structure")) {
+			if (!f.rule().text().equals("syntax") && !f.rule().text().equals("structure")) {
 				issues.add(issue(f, text));
 			}
 		}
@@ -86,7 +86,7 @@ public class CheckingResourceValidator extends ResourceValidatorImpl {
 		default -> Severity.INFO;
 		});
 		issue.setMessage(f.rule() + ": " + f.message());
-		issue.setCode(f.rule());
+		issue.setCode(f.rule().text());
 		int offset = Math.max(0, Math.min(f.location().offset(), text.length()));
 		int length = Math.max(0, Math.min(f.location().length(), text.length() - offset));
 		int line = Math.max(1, f.location().line()), column = Math.max(1, f.location().column());

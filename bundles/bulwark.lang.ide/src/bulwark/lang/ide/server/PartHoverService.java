@@ -16,7 +16,7 @@ import org.eclipse.xtext.util.CancelIndicator;
 import com.google.inject.Inject;
 
 import bulwark.check.WorstStress;
-import bulwark.check.rules.Figures;
+import bulwark.check.figures.Figures;
 import bulwark.check.rules.RulePages;
 
 /**

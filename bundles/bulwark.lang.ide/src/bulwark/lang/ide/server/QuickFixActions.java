@@ -18,7 +18,7 @@ import org.eclipse.xtext.ide.server.codeActions.ICodeActionService2;
 
 import com.google.inject.Inject;
 
-import bulwark.check.Finding;
+import bulwark.check.finding.Finding;
 import bulwark.check.fix.Fix;
 import bulwark.lang.ide.fixes.QuickFixes;
 
@@ -46,7 +46,7 @@ public class QuickFixActions implements ICodeActionService2 {
 			String rule = d.getCode() == null ? null : d.getCode().isLeft() ? d.getCode().getLeft() : null;
 			for (Map.Entry<Finding, List<Fix>> e : fixes.entrySet()) {
 				Finding f = e.getKey();
-				if (!f.rule().equals(rule) || f.location().line() != d.getRange().getStart().getLine() + 1) {
+				if (!f.rule().text().equals(rule) || f.location().line() != d.getRange().getStart().getLine() + 1) {
 					continue;
 				}
 				for (Fix fix : e.getValue()) {

@@ -1,0 +1,63 @@
+package bulwark.engine.solve;
+
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.Map;
+
+import bulwark.engine.circuit.Circuit;
+
+/** A solved DC operating point: every net's voltage against the reference net, and every device's figures. */
+public final class DcSolution implements DcResult {
+	private final Circuit circuit;
+	private final double[] netVoltages;
+	private final Map<String, OperatingPoint> devices;
+	private final int iterations;
+	private final Strategy strategy;
+	/** Every unknown of the nodal equations, to start a neighbouring solve from (continuation). */
+	final double[] unknowns;
+
+	DcSolution(Circuit circuit, double[] netVoltages, Map<String, OperatingPoint> devices, int iterations,
+			Strategy strategy, double[] unknowns) {
+		this.unknowns = unknowns.clone();
+		this.circuit = circuit;
+		this.netVoltages = netVoltages.clone();
+		this.devices = Collections.unmodifiableMap(new LinkedHashMap<>(devices));
+		this.iterations = iterations;
+		this.strategy = strategy;
+	}
+
+	public Circuit circuit() {
+		return circuit;
+	}
+
+	public double voltage(String net) {
+		return netVoltages[circuit.netIndex(net)];
+	}
+
+	public double voltage(int net) {
+		return netVoltages[net];
+	}
+
+	/** Operating point of the named device; throws if there is none by that name. */
+	public OperatingPoint device(String name) {
+		OperatingPoint p = devices.get(name);
+		if (p == null) {
+			throw new IllegalArgumentException("no device named " + name);
+		}
+		return p;
+	}
+
+	/** All devices in the order of the circuit. */
+	public Map<String, OperatingPoint> devices() {
+		return devices;
+	}
+
+	/** Newton iterations used in all, over every step of the strategy. */
+	public int iterations() {
+		return iterations;
+	}
+
+	public Strategy strategy() {
+		return strategy;
+	}
+}
