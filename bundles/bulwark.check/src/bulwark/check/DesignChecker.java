@@ -36,7 +36,6 @@ import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Member;
 import bulwark.lang.library.Confinement;
 import bulwark.check.finding.Finding;
-import bulwark.check.finding.Concern;
 import bulwark.check.finding.Severity;
 import bulwark.check.finding.SourceLocation;
 import bulwark.check.finding.Locations;

@@ -12,7 +12,6 @@ import bulwark.check.rules.RuleRegistry;
 import bulwark.lang.design.Design;
 import bulwark.lang.design.Waiver;
 import bulwark.check.finding.Finding;
-import bulwark.check.finding.Concern;
 import bulwark.check.finding.Severity;
 import bulwark.check.finding.Locations;
 import bulwark.check.finding.CheckerRules;

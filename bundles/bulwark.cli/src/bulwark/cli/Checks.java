@@ -21,7 +21,7 @@ import bulwark.check.DesignResult;
 import bulwark.check.finding.Severity;
 import bulwark.check.Status;
 import bulwark.check.io.AtomicFile;
-import bulwark.lang.ide.fixes.QuickFixes;
+import bulwark.fix.QuickFixes;
 import bulwark.check.policy.PolicyFiles;
 import bulwark.check.report.HtmlReport;
 import bulwark.check.report.JUnitReport;

@@ -3,7 +3,7 @@ package bulwark.cli;
 import java.util.concurrent.Callable;
 import java.util.concurrent.ExecutionException;
 
-import bulwark.lang.ide.server.BulwarkLanguageServer;
+import bulwark.lsp.BulwarkLanguageServer;
 import picocli.CommandLine.Command;
 
 @Command(name = "lsp", description = { "Runs the Bulwark language server on standard input and output (the Language "

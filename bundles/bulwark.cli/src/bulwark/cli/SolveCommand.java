@@ -72,6 +72,7 @@ final class SolveCommand implements Callable<Integer> {
 		return chosen.result() instanceof DcSolution ? ExitCodes.CLEAN : ExitCodes.NOT_CHECKED;
 	}
 
+	@SuppressWarnings("resource") // the JSON writer only wraps the command's output, which picocli owns
 	private static void json(CompiledDesign compiled, CaseOutcome outcome, PrintWriter out) throws Exception {
 		JsonWriter w = new JsonWriter(out);
 		w.setIndent("  ");

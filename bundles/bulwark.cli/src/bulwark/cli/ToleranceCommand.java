@@ -4,7 +4,6 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.file.Path;
-import java.util.Locale;
 import java.util.concurrent.Callable;
 
 import bulwark.check.DesignChecker;
@@ -12,7 +11,6 @@ import bulwark.check.Preparation;
 import bulwark.check.PreparedDesign;
 import bulwark.check.policy.PolicyFiles;
 import bulwark.check.policy.ReviewPolicy;
-import bulwark.check.tolerance.MonteCarlo;
 import bulwark.check.tolerance.Progress;
 import bulwark.check.tolerance.ToleranceAnalysis;
 import bulwark.check.report.ToleranceReport;

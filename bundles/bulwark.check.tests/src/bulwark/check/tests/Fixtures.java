@@ -5,8 +5,6 @@ import bulwark.check.finding.RuleId;
 import bulwark.check.rules.RuleRegistry;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Map;
-import java.util.Optional;
 import java.util.Set;
 import java.util.TreeSet;
 import java.util.regex.Matcher;

@@ -2,8 +2,6 @@ package bulwark.check.load;
 
 import java.util.Optional;
 import bulwark.check.finding.Finding;
-import bulwark.check.finding.Concern;
-import bulwark.check.finding.Severity;
 import bulwark.check.finding.SourceLocation;
 import bulwark.check.finding.CheckerRules;
 

@@ -9,9 +9,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.function.Consumer;
-import java.util.stream.Collectors;
 
-import bulwark.check.finding.Concern;
 import bulwark.check.finding.CheckerRules;
 import bulwark.check.finding.Finding;
 import bulwark.check.finding.RuleId;

@@ -12,14 +12,12 @@ import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.ConcurrentMap;
 
-import bulwark.check.finding.Concern;
 import bulwark.check.finding.CheckerRules;
 import bulwark.check.finding.Finding;
 import bulwark.check.finding.RuleId;
 import bulwark.check.load.InputLimits;
 import bulwark.check.finding.LanguageFindings;
 import bulwark.check.finding.Severity;
-import bulwark.check.finding.SourceLocation;
 import bulwark.check.load.DesignLoader;
 import bulwark.check.load.LoadedPolicy;
 

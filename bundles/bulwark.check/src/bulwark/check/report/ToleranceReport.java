@@ -59,6 +59,7 @@ public final class ToleranceReport {
 		w.flush();
 	}
 
+	@SuppressWarnings("resource") // the JSON writer only wraps the caller's writer, which the caller closes
 	public static void json(ToleranceAnalysis.Result r, String file, String caution, Writer out) throws IOException {
 		JsonWriter w = new JsonWriter(out);
 		w.setIndent("  ");

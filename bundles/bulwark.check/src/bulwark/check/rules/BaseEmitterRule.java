@@ -7,6 +7,8 @@ import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
 import bulwark.check.finding.RuleId;
 import bulwark.check.finding.RuleInfo;
+import bulwark.check.stress.Measure;
+import bulwark.check.stress.StressCatalog;
 
 /**
  * A bipolar transistor's base–emitter junction is reverse-biased beyond its rating. Small-signal parts
@@ -24,12 +26,12 @@ public final class BaseEmitterRule extends PartLimitRule {
 	}
 
 	@Override
-	Set<PartKind> kinds() {
+	public Set<PartKind> kinds() {
 		return Set.of(PartKind.NPN, PartKind.PNP);
 	}
 
 	@Override
-	String rating(PartKind kind) {
-		return "emitter_base";
+	public Measure measure(PartKind kind) {
+		return StressCatalog.EMITTER_BASE;
 	}
 }

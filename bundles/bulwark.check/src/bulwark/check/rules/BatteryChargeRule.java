@@ -7,6 +7,8 @@ import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
 import bulwark.check.finding.RuleId;
 import bulwark.check.finding.RuleInfo;
+import bulwark.check.stress.Measure;
+import bulwark.check.stress.StressCatalog;
 
 /**
  * A fault drives current into a battery's positive pin, charging it. Primary cells must not be charged
@@ -25,12 +27,12 @@ public final class BatteryChargeRule extends PartLimitRule {
 	}
 
 	@Override
-	Set<PartKind> kinds() {
+	public Set<PartKind> kinds() {
 		return Set.of(PartKind.BATTERY);
 	}
 
 	@Override
-	String rating(PartKind kind) {
-		return "charge";
+	public Measure measure(PartKind kind) {
+		return StressCatalog.CHARGE;
 	}
 }

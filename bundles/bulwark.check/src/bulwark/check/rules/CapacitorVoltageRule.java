@@ -7,6 +7,8 @@ import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
 import bulwark.check.finding.RuleId;
 import bulwark.check.finding.RuleInfo;
+import bulwark.check.stress.Measure;
+import bulwark.check.stress.StressCatalog;
 
 /**
  * A capacitor has more voltage across it than its rated voltage, derated (NASA EEE-INST-002 derates
@@ -23,12 +25,12 @@ public final class CapacitorVoltageRule extends PartLimitRule {
 	}
 
 	@Override
-	Set<PartKind> kinds() {
+	public Set<PartKind> kinds() {
 		return Set.of(PartKind.CAPACITOR);
 	}
 
 	@Override
-	String rating(PartKind kind) {
-		return "voltage";
+	public Measure measure(PartKind kind) {
+		return StressCatalog.VOLTAGE;
 	}
 }

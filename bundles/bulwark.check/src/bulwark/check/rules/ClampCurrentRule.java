@@ -7,6 +7,8 @@ import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
 import bulwark.check.finding.RuleId;
 import bulwark.check.finding.RuleInfo;
+import bulwark.check.stress.Measure;
+import bulwark.check.stress.StressCatalog;
 
 /**
  * The current through a comparator input's clamp junctions exceeds what they are rated for. An input
@@ -24,12 +26,12 @@ public final class ClampCurrentRule extends PartLimitRule {
 	}
 
 	@Override
-	Set<PartKind> kinds() {
+	public Set<PartKind> kinds() {
 		return Set.of(PartKind.COMPARATOR);
 	}
 
 	@Override
-	String rating(PartKind kind) {
-		return "clamp";
+	public Measure measure(PartKind kind) {
+		return StressCatalog.CLAMP;
 	}
 }

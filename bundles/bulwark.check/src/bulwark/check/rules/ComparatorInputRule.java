@@ -7,6 +7,8 @@ import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
 import bulwark.check.finding.RuleId;
 import bulwark.check.finding.RuleInfo;
+import bulwark.check.stress.Measure;
+import bulwark.check.stress.StressCatalog;
 
 /**
  * A comparator input goes beyond its supply rails by more than its absolute-maximum margin. CMOS inputs
@@ -24,12 +26,12 @@ public final class ComparatorInputRule extends PartLimitRule {
 	}
 
 	@Override
-	Set<PartKind> kinds() {
+	public Set<PartKind> kinds() {
 		return Set.of(PartKind.COMPARATOR);
 	}
 
 	@Override
-	String rating(PartKind kind) {
-		return "input_margin";
+	public Measure measure(PartKind kind) {
+		return StressCatalog.INPUT_MARGIN;
 	}
 }

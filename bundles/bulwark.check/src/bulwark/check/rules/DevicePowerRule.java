@@ -7,6 +7,8 @@ import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
 import bulwark.check.finding.RuleId;
 import bulwark.check.finding.RuleInfo;
+import bulwark.check.stress.Measure;
+import bulwark.check.stress.StressCatalog;
 
 /**
  * A part other than a resistor dissipates more than its rated power, derated: a zener clamping a fault, a
@@ -23,13 +25,13 @@ public final class DevicePowerRule extends PartLimitRule {
 	}
 
 	@Override
-	Set<PartKind> kinds() {
+	public Set<PartKind> kinds() {
 		return Set.of(PartKind.DIODE, PartKind.LED, PartKind.ZENER, PartKind.NPN, PartKind.PNP, PartKind.NMOS, PartKind.PMOS,
 				PartKind.POTENTIOMETER, PartKind.INDICATOR, PartKind.PROTECTOR);
 	}
 
 	@Override
-	String rating(PartKind kind) {
-		return "power";
+	public Measure measure(PartKind kind) {
+		return StressCatalog.POWER;
 	}
 }

@@ -7,6 +7,8 @@ import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
 import bulwark.check.finding.RuleId;
 import bulwark.check.finding.RuleInfo;
+import bulwark.check.stress.Measure;
+import bulwark.check.stress.StressCatalog;
 
 /**
  * A diode or LED has more reverse voltage across it than its rated reverse voltage, derated (zeners work
@@ -23,12 +25,12 @@ public final class DiodeReverseRule extends PartLimitRule {
 	}
 
 	@Override
-	Set<PartKind> kinds() {
+	public Set<PartKind> kinds() {
 		return Set.of(PartKind.DIODE, PartKind.LED);
 	}
 
 	@Override
-	String rating(PartKind kind) {
-		return "reverse";
+	public Measure measure(PartKind kind) {
+		return StressCatalog.REVERSE;
 	}
 }

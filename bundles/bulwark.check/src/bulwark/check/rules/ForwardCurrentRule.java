@@ -7,6 +7,8 @@ import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
 import bulwark.check.finding.RuleId;
 import bulwark.check.finding.RuleInfo;
+import bulwark.check.stress.Measure;
+import bulwark.check.stress.StressCatalog;
 
 /**
  * A diode, LED or zener carries more forward current than it is rated for, derated: a clamp diode
@@ -23,12 +25,12 @@ public final class ForwardCurrentRule extends PartLimitRule {
 	}
 
 	@Override
-	Set<PartKind> kinds() {
+	public Set<PartKind> kinds() {
 		return Set.of(PartKind.DIODE, PartKind.LED, PartKind.ZENER);
 	}
 
 	@Override
-	String rating(PartKind kind) {
-		return "forward";
+	public Measure measure(PartKind kind) {
+		return StressCatalog.FORWARD;
 	}
 }

@@ -7,6 +7,8 @@ import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
 import bulwark.check.finding.RuleId;
 import bulwark.check.finding.RuleInfo;
+import bulwark.check.stress.Measure;
+import bulwark.check.stress.StressCatalog;
 
 /**
  * A fuse that opens in a case is left holding the whole fault across it; above its rated voltage it may
@@ -23,12 +25,12 @@ public final class FuseVoltageRule extends PartLimitRule {
 	}
 
 	@Override
-	Set<PartKind> kinds() {
+	public Set<PartKind> kinds() {
 		return Set.of(PartKind.FUSE, PartKind.RESETTABLE_FUSE);
 	}
 
 	@Override
-	String rating(PartKind kind) {
-		return "voltage";
+	public Measure measure(PartKind kind) {
+		return StressCatalog.VOLTAGE;
 	}
 }

@@ -8,7 +8,6 @@ import bulwark.check.finding.Concern;
 import bulwark.check.finding.Finding;
 import bulwark.check.finding.Locations;
 import bulwark.check.finding.Severity;
-import bulwark.check.cases.FaultCase;
 import bulwark.check.parts.Settings;
 import bulwark.engine.solve.OperatingPoint;
 import bulwark.lang.design.DesignPackage;

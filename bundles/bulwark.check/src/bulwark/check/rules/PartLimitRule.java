@@ -10,7 +10,6 @@ import bulwark.check.finding.Locations;
 import bulwark.check.stress.Limit;
 import bulwark.check.stress.Limits;
 import bulwark.check.stress.Measure;
-import bulwark.check.stress.StressCatalog;
 import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
@@ -23,12 +22,15 @@ import bulwark.check.finding.RuleInfo;
  * the rating, written or assumed, times the policy's derating — report it on the designator with the
  * figures. A rule says only which parts and which rating.
  */
-abstract class PartLimitRule implements Rule {
+public abstract class PartLimitRule implements Rule {
 
-	abstract Set<PartKind> kinds();
+	public abstract Set<PartKind> kinds();
 
-	/** The rating (and the stress of the same name) this rule compares, for a part of the given kind. */
-	abstract String rating(PartKind kind);
+	/**
+	 * The stress this rule compares, for a part of the given kind: one of the stress catalogue's measures,
+	 * named after the rating it is compared with. A measure, not a rating's name, so that no lookup can miss.
+	 */
+	public abstract Measure measure(PartKind kind);
 
 	/** Whether the rule checks this part at all (for example, not a resistor a series string covers). */
 	boolean applies(Part part, CheckContext context) {
@@ -41,8 +43,7 @@ abstract class PartLimitRule implements Rule {
 			if (!kinds().contains(part.getKind()) || !applies(part, context)) {
 				continue;
 			}
-			Measure measure = StressCatalog.of(part.getKind(), rating(part.getKind())).orElseThrow(() -> new IllegalStateException(
-					info().id() + ": no stress '" + rating(part.getKind()) + "' for " + part.getKind()));
+			Measure measure = measure(part.getKind());
 			Optional<Limit> limit = Limits.of(part, measure, context.policy());
 			if (limit.isEmpty()) {
 				continue;

@@ -7,6 +7,8 @@ import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
 import bulwark.check.finding.RuleId;
 import bulwark.check.finding.RuleInfo;
+import bulwark.check.stress.Measure;
+import bulwark.check.stress.StressCatalog;
 
 /**
  * A protector (an electronic current limiter in series with a terminal) has more voltage across it than
@@ -23,12 +25,12 @@ public final class ProtectorBlockingRule extends PartLimitRule {
 	}
 
 	@Override
-	Set<PartKind> kinds() {
+	public Set<PartKind> kinds() {
 		return Set.of(PartKind.PROTECTOR);
 	}
 
 	@Override
-	String rating(PartKind kind) {
-		return "blocking";
+	public Measure measure(PartKind kind) {
+		return StressCatalog.BLOCKING;
 	}
 }

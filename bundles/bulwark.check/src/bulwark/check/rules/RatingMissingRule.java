@@ -15,6 +15,7 @@ import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Part;
 import bulwark.check.finding.RuleId;
 import bulwark.check.finding.RuleInfo;
+import bulwark.check.stress.Measure;
 
 /**
  * A part lacks a rating that a rating rule needs: that stress cannot be checked, and silence would read as
@@ -36,8 +37,8 @@ public final class RatingMissingRule implements Rule {
 			List<FindingDetail.Missing> missing = new ArrayList<>();
 			for (Rule rule : RuleRegistry.all()) {
 				if (rule instanceof PartLimitRule r && r.kinds().contains(part.getKind())) {
-					String rating = r.rating(part.getKind());
-					var measure = StressCatalog.of(part.getKind(), rating).orElseThrow();
+					Measure measure = r.measure(part.getKind());
+					String rating = measure.rating();
 					if (Limits.of(part, measure, context.policy()).isEmpty()
 							&& !(rating.equals("voltage") && context.inSeriesString().contains(part.getName()))) {
 						missing.add(new FindingDetail.Missing(rating, r.info().id()));
@@ -46,7 +47,7 @@ public final class RatingMissingRule implements Rule {
 			}
 			// a resistor in a series string needs its voltage limit for series-string
 			if (context.inSeriesString().contains(part.getName()) && Limits
-					.of(part, StressCatalog.of(part.getKind(), "voltage").orElseThrow(), context.policy()).isEmpty()) {
+					.of(part, StressCatalog.VOLTAGE, context.policy()).isEmpty()) {
 				missing.add(new FindingDetail.Missing("voltage", SeriesStringRule.ID));
 			}
 			if (!missing.isEmpty()) {

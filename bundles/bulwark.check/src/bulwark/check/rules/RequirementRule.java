@@ -18,7 +18,6 @@ import bulwark.check.function.PairFigures;
 import bulwark.check.function.SwitchingSweep;
 import bulwark.lang.design.Design;
 import bulwark.lang.design.DesignPackage;
-import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
 import bulwark.lang.design.Requirement;
 import bulwark.lang.units.Quantities;

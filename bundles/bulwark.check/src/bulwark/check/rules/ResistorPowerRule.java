@@ -7,6 +7,8 @@ import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
 import bulwark.check.finding.RuleId;
 import bulwark.check.finding.RuleInfo;
+import bulwark.check.stress.Measure;
+import bulwark.check.stress.StressCatalog;
 
 /**
  * A resistor dissipates more than its rated power, derated by the review policy, in some case. Dissipation is
@@ -24,12 +26,12 @@ public final class ResistorPowerRule extends PartLimitRule {
 	}
 
 	@Override
-	Set<PartKind> kinds() {
+	public Set<PartKind> kinds() {
 		return Set.of(PartKind.RESISTOR);
 	}
 
 	@Override
-	String rating(PartKind kind) {
-		return "power";
+	public Measure measure(PartKind kind) {
+		return StressCatalog.POWER;
 	}
 }

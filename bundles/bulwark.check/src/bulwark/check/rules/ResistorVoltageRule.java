@@ -8,6 +8,8 @@ import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
 import bulwark.check.finding.RuleId;
 import bulwark.check.finding.RuleInfo;
+import bulwark.check.stress.Measure;
+import bulwark.check.stress.StressCatalog;
 
 /**
  * A resistor on its own has more voltage across it than its limiting element voltage, derated: it may
@@ -26,13 +28,13 @@ public final class ResistorVoltageRule extends PartLimitRule {
 	}
 
 	@Override
-	Set<PartKind> kinds() {
+	public Set<PartKind> kinds() {
 		return Set.of(PartKind.RESISTOR);
 	}
 
 	@Override
-	String rating(PartKind kind) {
-		return "voltage";
+	public Measure measure(PartKind kind) {
+		return StressCatalog.VOLTAGE;
 	}
 
 	@Override

@@ -17,7 +17,6 @@ import bulwark.check.stress.StressCatalog;
 import bulwark.check.topology.SeriesStrings.SeriesString;
 import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Part;
-import bulwark.lang.design.PartKind;
 import bulwark.check.figures.Figures;
 import bulwark.check.cases.SolvedCase;
 import bulwark.check.finding.RuleId;
@@ -44,7 +43,7 @@ public final class SeriesStringRule implements Rule {
 
 	@Override
 	public void check(CheckContext context, Consumer<Finding> findings) {
-		Measure voltage = StressCatalog.of(PartKind.RESISTOR, "voltage").orElseThrow();
+		Measure voltage = StressCatalog.VOLTAGE;
 		for (SeriesString string : context.seriesStrings()) {
 			List<Optional<Limit>> limits = new ArrayList<>();
 			for (Part r : string.resistors()) {

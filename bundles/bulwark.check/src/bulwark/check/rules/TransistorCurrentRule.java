@@ -7,6 +7,8 @@ import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
 import bulwark.check.finding.RuleId;
 import bulwark.check.finding.RuleInfo;
+import bulwark.check.stress.Measure;
+import bulwark.check.stress.StressCatalog;
 
 /**
  * A transistor carries more collector (drain) current than it is rated for, derated.
@@ -22,12 +24,12 @@ public final class TransistorCurrentRule extends PartLimitRule {
 	}
 
 	@Override
-	Set<PartKind> kinds() {
+	public Set<PartKind> kinds() {
 		return Set.of(PartKind.NPN, PartKind.PNP, PartKind.NMOS, PartKind.PMOS);
 	}
 
 	@Override
-	String rating(PartKind kind) {
-		return kind == PartKind.NMOS || kind == PartKind.PMOS ? "drain" : "collector";
+	public Measure measure(PartKind kind) {
+		return kind == PartKind.NMOS || kind == PartKind.PMOS ? StressCatalog.DRAIN : StressCatalog.COLLECTOR;
 	}
 }

@@ -7,6 +7,8 @@ import bulwark.check.finding.Severity;
 import bulwark.lang.design.PartKind;
 import bulwark.check.finding.RuleId;
 import bulwark.check.finding.RuleInfo;
+import bulwark.check.stress.Measure;
+import bulwark.check.stress.StressCatalog;
 
 /**
  * A transistor has more voltage between collector and emitter (drain and source) than it is rated for,
@@ -23,12 +25,12 @@ public final class TransistorVoltageRule extends PartLimitRule {
 	}
 
 	@Override
-	Set<PartKind> kinds() {
+	public Set<PartKind> kinds() {
 		return Set.of(PartKind.NPN, PartKind.PNP, PartKind.NMOS, PartKind.PMOS);
 	}
 
 	@Override
-	String rating(PartKind kind) {
-		return kind == PartKind.NMOS || kind == PartKind.PMOS ? "drain_source" : "collector_emitter";
+	public Measure measure(PartKind kind) {
+		return kind == PartKind.NMOS || kind == PartKind.PMOS ? StressCatalog.DRAIN_SOURCE : StressCatalog.COLLECTOR_EMITTER;
 	}
 }

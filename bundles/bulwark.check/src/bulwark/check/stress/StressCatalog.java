@@ -14,32 +14,32 @@ import bulwark.lang.design.PartKind;
  * into a battery's positive pin).
  */
 public final class StressCatalog {
-	static final Measure POWER = new Measure("power", "power", "W", p -> Math.abs(p.power()));
-	static final Measure VOLTAGE = new Measure("voltage", "voltage", "V", p -> Math.abs(p.voltage()));
-	static final Measure REVERSE = new Measure("reverse", "reverse voltage", "V",
+	public static final Measure POWER = new Measure("power", "power", "W", p -> Math.abs(p.power()));
+	public static final Measure VOLTAGE = new Measure("voltage", "voltage", "V", p -> Math.abs(p.voltage()));
+	public static final Measure REVERSE = new Measure("reverse", "reverse voltage", "V",
 			p -> p.reverseVoltage("junction"));
-	static final Measure FORWARD = new Measure("forward", "forward current", "A", p -> Math.max(0, p.current()));
-	static final Measure COLLECTOR_EMITTER = new Measure("collector_emitter", "collector-emitter voltage", "V",
+	public static final Measure FORWARD = new Measure("forward", "forward current", "A", p -> Math.max(0, p.current()));
+	public static final Measure COLLECTOR_EMITTER = new Measure("collector_emitter", "collector-emitter voltage", "V",
 			p -> Math.abs(p.pinVoltage("collector") - p.pinVoltage("emitter")));
-	static final Measure EMITTER_BASE = new Measure("emitter_base", "reverse base-emitter voltage", "V",
+	public static final Measure EMITTER_BASE = new Measure("emitter_base", "reverse base-emitter voltage", "V",
 			p -> p.reverseVoltage("base-emitter"));
-	static final Measure COLLECTOR = new Measure("collector", "collector current", "A",
+	public static final Measure COLLECTOR = new Measure("collector", "collector current", "A",
 			p -> Math.abs(p.pinCurrent("collector")));
-	static final Measure DRAIN_SOURCE = new Measure("drain_source", "drain-source voltage", "V",
+	public static final Measure DRAIN_SOURCE = new Measure("drain_source", "drain-source voltage", "V",
 			p -> Math.abs(p.pinVoltage("drain") - p.pinVoltage("source")));
-	static final Measure GATE_SOURCE = new Measure("gate_source", "gate-source voltage", "V",
+	public static final Measure GATE_SOURCE = new Measure("gate_source", "gate-source voltage", "V",
 			p -> Math.abs(p.pinVoltage("gate") - p.pinVoltage("source")));
-	static final Measure DRAIN = new Measure("drain", "drain current", "A", p -> Math.abs(p.pinCurrent("drain")));
-	static final Measure INPUT_MARGIN = new Measure("input_margin", "input beyond the rails", "V",
+	public static final Measure DRAIN = new Measure("drain", "drain current", "A", p -> Math.abs(p.pinCurrent("drain")));
+	public static final Measure INPUT_MARGIN = new Measure("input_margin", "input beyond the rails", "V",
 			StressCatalog::beyondRails);
-	static final Measure CLAMP = new Measure("clamp", "input clamp current", "A",
+	public static final Measure CLAMP = new Measure("clamp", "input clamp current", "A",
 			p -> Math.max(Math.abs(p.pinCurrent("in_plus")), Math.abs(p.pinCurrent("in_minus"))));
-	static final Measure SUPPLY = new Measure("supply", "supply voltage", "V",
+	public static final Measure SUPPLY = new Measure("supply", "supply voltage", "V",
 			p -> p.pinVoltage("supply_plus") - p.pinVoltage("supply_minus"));
-	static final Measure BLOCKING = new Measure("blocking", "blocked voltage", "V", p -> Math.abs(p.voltage()));
-	static final Measure CURRENT = new Measure("current", "current", "A", p -> Math.abs(p.current()));
+	public static final Measure BLOCKING = new Measure("blocking", "blocked voltage", "V", p -> Math.abs(p.voltage()));
+	public static final Measure CURRENT = new Measure("current", "current", "A", p -> Math.abs(p.current()));
 	/** Current into the positive pin: a cell being charged. */
-	static final Measure CHARGE = new Measure("charge", "charging current", "A", p -> Math.max(0, p.current()),
+	public static final Measure CHARGE = new Measure("charge", "charging current", "A", p -> Math.max(0, p.current()),
 			true);
 
 	private static final Map<PartKind, List<Measure>> MEASURES = Map.ofEntries(

@@ -16,7 +16,6 @@ import org.w3c.dom.NodeList;
 /** explain, --fail-on, --jobs and the JUnit XML report. */
 class ReportsAndOptionsTest {
 	private static final String LAB = "lab-indicator-seeded.bulwark";
-	private static final String LOOM = "stage-loom-checker.bulwark";
 
 	@Test
 	void explainRendersTheRulePage() {

@@ -49,7 +49,7 @@ public class BulwarkFormatter extends AbstractJavaFormatter {
 		if (!explicit) {
 			MapBasedPreferenceValues values = new MapBasedPreferenceValues(given, new HashMap<>());
 			values.put(FormatterPreferenceKeys.indentation, INDENTATION);
-			values.put(FormatterPreferenceKeys.indentationLength, INDENTATION.length());
+			putIndentationLength(values);
 			request.setPreferences(values);
 		}
 		super.initialize(request);
@@ -226,5 +226,11 @@ public class BulwarkFormatter extends AbstractJavaFormatter {
 		doc.prepend(tolerance, f -> f.oneSpace());
 		doc.prepend(regions.feature(DesignPackage.Literals.TOLERANCE__PERCENT), f -> f.oneSpace());
 		doc.prepend(regions.keyword("%"), f -> f.oneSpace());
+	}
+
+	/** The framework still reads the deprecated length key beside the indentation string: both are given. */
+	@SuppressWarnings("deprecation")
+	private static void putIndentationLength(MapBasedPreferenceValues values) {
+		values.put(FormatterPreferenceKeys.indentationLength, INDENTATION.length());
 	}
 }

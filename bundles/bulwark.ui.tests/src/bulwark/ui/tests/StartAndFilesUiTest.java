@@ -15,7 +15,6 @@ import org.junit.jupiter.api.Test;
 
 import bulwark.check.finding.Severity;
 import bulwark.check.Status;
-import bulwark.ui.Application;
 import bulwark.ui.Screenshot;
 import bulwark.ui.changes.ChangesView;
 import bulwark.ui.editor.DesignEditor;

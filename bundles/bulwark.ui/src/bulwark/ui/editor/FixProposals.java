@@ -18,7 +18,7 @@ import bulwark.check.DesignResult;
 import bulwark.check.finding.Finding;
 import bulwark.check.fix.Fix;
 import bulwark.check.fix.TextEdit;
-import bulwark.lang.ide.fixes.QuickFixes;
+import bulwark.fix.QuickFixes;
 import bulwark.ui.BulwarkUi;
 
 /**

@@ -1,6 +1,5 @@
 package bulwark.ui.editor;
 
-import java.util.Locale;
 
 import org.eclipse.jface.text.BadLocationException;
 import org.eclipse.jface.text.IDocument;
@@ -9,15 +8,13 @@ import org.eclipse.jface.text.ITextHover;
 import org.eclipse.jface.text.ITextViewer;
 import org.eclipse.jface.text.Region;
 
-import bulwark.check.cases.CaseResult;
 import bulwark.check.DesignResult;
-import bulwark.check.finding.Finding;
-import bulwark.check.cases.PartStress;
-import bulwark.check.figures.Figures;
+import bulwark.check.report.PartSummary;
+
 
 /**
- * Hovering over a part's designator shows its worst stress: the utilisation against its rating, which
- * rating limits it, the case it happens in, and the part's findings.
+ * Hovering over a part's designator shows its summary (PartSummary, the same as the language server's):
+ * its worst stress against each rating, the case it happens in, and its findings.
  */
 final class PartHover implements ITextHover {
 	private final DesignEditor editor;
@@ -62,40 +59,6 @@ final class PartHover implements ITextHover {
 
 	/** The hover text for a part, or null when the name is not a part of the last check. */
 	static String describe(DesignResult result, String part) {
-		PartStress worst = null;
-		String worstCase = null;
-		boolean known = false;
-		for (CaseResult c : result.cases()) {
-			for (PartStress p : c.parts()) {
-				if (!p.part().equals(part)) {
-					continue;
-				}
-				known = true;
-				if (p.utilisation() != null && (worst == null || p.utilisation() > worst.utilisation())) {
-					worst = p;
-					worstCase = c.name();
-				}
-			}
-		}
-		if (!known) {
-			return null;
-		}
-		StringBuilder text = new StringBuilder(part);
-		if (worst == null) {
-			text.append(": no rating to compare its stress with");
-		} else {
-			text.append(String.format(Locale.ROOT, ": worst %.0f %% of its %s rating, in case '%s' (%s, %s, %s)",
-					100 * worst.utilisation(), worst.limiting(), worstCase, Figures.engineering(Math.abs(worst.voltage()), "V"),
-					Figures.engineering(Math.abs(worst.current()), "A"), Figures.engineering(Math.abs(worst.power()), "W")));
-		}
-		for (Finding f : result.findings()) {
-			if (part.equals(f.part())) {
-				text.append('\n').append(f.severity().id()).append(f.waived() ? " (waived) " : " ").append(f.rule())
-						.append(": ").append(f.message());
-				bulwark.check.rules.RulePages.what(bulwark.ui.BulwarkUi.installation(), f.rule())
-						.ifPresent(w -> text.append("\n    (").append(f.rule()).append(": ").append(w.replace('\n', ' ')).append(')'));
-			}
-		}
-		return text.toString();
+		return PartSummary.of(result, part, bulwark.ui.BulwarkUi.installation()).map(PartSummary::text).orElse(null);
 	}
 }

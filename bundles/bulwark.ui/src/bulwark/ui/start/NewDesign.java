@@ -25,7 +25,7 @@ public class NewDesign extends AbstractHandler {
 	public Object execute(ExecutionEvent event) throws ExecutionException {
 		Shell shell = HandlerUtil.getActiveShellChecked(event);
 		TemplateDialog choose = new TemplateDialog(shell);
-		if (choose.open() != TemplateDialog.OK || choose.chosen() == null) {
+		if (choose.open() != org.eclipse.jface.window.Window.OK || choose.chosen() == null) {
 			return null;
 		}
 		askAndCreate(shell, HandlerUtil.getActiveWorkbenchWindowChecked(event).getActivePage(), choose.chosen());

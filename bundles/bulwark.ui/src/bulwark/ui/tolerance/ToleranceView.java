@@ -6,7 +6,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 
 import org.eclipse.core.runtime.IProgressMonitor;
@@ -38,7 +37,6 @@ import bulwark.check.io.AtomicFile;
 import bulwark.check.report.ToleranceReport;
 import bulwark.check.tolerance.Corners;
 import bulwark.check.tolerance.Figure;
-import bulwark.check.tolerance.MonteCarlo;
 import bulwark.check.tolerance.Progress;
 import bulwark.check.tolerance.Statistics;
 import bulwark.check.tolerance.ToleranceAnalysis;

@@ -34,7 +34,7 @@ public class BulwarkProposalProvider extends IdeContentProposalProvider {
 	@Override
 	protected void _createProposals(Assignment assignment, ContentAssistContext context,
 			IIdeContentProposalAcceptor acceptor) {
-		String rule = ((ParserRule) EcoreUtil2.getContainerOfType(assignment, ParserRule.class)).getName();
+		String rule = EcoreUtil2.getContainerOfType(assignment, ParserRule.class).getName();
 		String feature = assignment.getFeature();
 		EObject model = context.getCurrentModel();
 		Part part = EcoreUtil2.getContainerOfType(model, Part.class);
