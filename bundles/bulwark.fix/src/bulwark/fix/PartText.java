@@ -12,6 +12,10 @@ import bulwark.lang.design.Member;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.Rating;
 import bulwark.lang.design.Setting;
+import bulwark.check.finding.Finding;
+import bulwark.check.rules.ResistorVoltageRule;
+import bulwark.check.rules.SeriesStringRule;
+import bulwark.lang.design.PartKind;
 
 /**
  * Text edits on a part as the formatter lays it out (two-space indent, one setting per line): replacing a
@@ -21,6 +25,18 @@ final class PartText {
 	static final String INDENT = "  ";
 
 	private PartText() {
+	}
+
+	/**
+	 * The resistor a resistor-voltage or series-string finding is about, when the finding carries its
+	 * figures: what both the package and the split fix start from.
+	 */
+	static Optional<Part> overVoltageResistor(Design design, Finding finding) {
+		boolean voltage = finding.rule().equals(ResistorVoltageRule.ID) || finding.rule().equals(SeriesStringRule.ID);
+		if (!voltage || finding.part() == null || finding.value() == null || finding.limit() == null) {
+			return Optional.empty();
+		}
+		return part(design, finding.part()).filter(p -> p.getKind() == PartKind.RESISTOR);
 	}
 
 	static Optional<Part> part(Design design, String name) {

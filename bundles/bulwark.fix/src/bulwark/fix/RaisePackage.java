@@ -5,8 +5,6 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 
-import bulwark.check.rules.ResistorVoltageRule;
-import bulwark.check.rules.SeriesStringRule;
 import bulwark.check.finding.Finding;
 import bulwark.check.parts.ResistorRatings;
 import bulwark.check.parts.Settings;
@@ -14,7 +12,6 @@ import bulwark.check.fix.Fix;
 import bulwark.check.fix.TextEdit;
 import bulwark.check.figures.Figures;
 import bulwark.lang.design.Part;
-import bulwark.lang.design.PartKind;
 import bulwark.lang.design.Setting;
 import bulwark.lang.kinds.KindCatalog;
 
@@ -27,12 +24,8 @@ import bulwark.lang.kinds.KindCatalog;
 final class RaisePackage implements FixProvider {
 	@Override
 	public List<Fix> propose(FixContext context, Finding finding) {
-		if (!finding.rule().equals(ResistorVoltageRule.ID) && !finding.rule().equals(SeriesStringRule.ID) || finding.part() == null
-				|| finding.value() == null || finding.limit() == null) {
-			return List.of();
-		}
-		Optional<Part> found = PartText.part(context.design(), finding.part());
-		if (found.isEmpty() || found.get().getKind() != PartKind.RESISTOR || Settings.rating(found.get(), "voltage").isPresent()) {
+		Optional<Part> found = PartText.overVoltageResistor(context.design(), finding);
+		if (found.isEmpty() || Settings.rating(found.get(), "voltage").isPresent()) {
 			return List.of();
 		}
 		Part part = found.get();

@@ -9,8 +9,6 @@ import java.util.Optional;
 import org.eclipse.xtext.nodemodel.ICompositeNode;
 import org.eclipse.xtext.nodemodel.util.NodeModelUtils;
 
-import bulwark.check.rules.ResistorVoltageRule;
-import bulwark.check.rules.SeriesStringRule;
 import bulwark.check.finding.Finding;
 import bulwark.check.parts.Settings;
 import bulwark.check.fix.Fix;
@@ -18,7 +16,6 @@ import bulwark.check.fix.TextEdit;
 import bulwark.check.figures.Figures;
 import bulwark.lang.design.Parameter;
 import bulwark.lang.design.Part;
-import bulwark.lang.design.PartKind;
 import bulwark.lang.design.PinBinding;
 import bulwark.lang.design.Setting;
 
@@ -34,12 +31,8 @@ final class SplitResistor implements FixProvider {
 
 	@Override
 	public List<Fix> propose(FixContext context, Finding finding) {
-		if (!finding.rule().equals(ResistorVoltageRule.ID) && !finding.rule().equals(SeriesStringRule.ID) || finding.part() == null
-				|| finding.value() == null || finding.limit() == null) {
-			return List.of();
-		}
-		Optional<Part> found = PartText.part(context.design(), finding.part());
-		if (found.isEmpty() || found.get().getKind() != PartKind.RESISTOR) {
+		Optional<Part> found = PartText.overVoltageResistor(context.design(), finding);
+		if (found.isEmpty()) {
 			return List.of();
 		}
 		Part part = found.get();

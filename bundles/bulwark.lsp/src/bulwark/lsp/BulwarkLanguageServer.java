@@ -39,9 +39,9 @@ public final class BulwarkLanguageServer {
 		// the plain runtime (which registers the EMF package) parses for the checker; the language's services
 		// for the editor come from a second injector with the IDE and server modules mixed in
 		Injector runtime = new BulwarkStandaloneSetup().createInjectorAndDoEMFRegistration();
-		Checks checks = new Checks(new DesignChecker(new DesignLoader(runtime, bulwark.lang.install.Installation.fromLaunch())));
+		OpenDesigns designs = new OpenDesigns(new DesignChecker(new DesignLoader(runtime, bulwark.lang.install.Installation.fromLaunch())));
 		Injector language = Guice.createInjector(
-				Modules2.mixin(new BulwarkRuntimeModule(), new BulwarkIdeModule(), new BulwarkServerModule(checks)));
+				Modules2.mixin(new BulwarkRuntimeModule(), new BulwarkIdeModule(), new BulwarkServerModule(designs)));
 		IResourceServiceProvider provider = language.getInstance(IResourceServiceProvider.class);
 		IResourceServiceProvider.Registry registry = new ResourceServiceProviderRegistryImpl();
 		registry.getExtensionToFactoryMap().put("bulwark", provider);

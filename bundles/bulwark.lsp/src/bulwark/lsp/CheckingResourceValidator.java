@@ -25,7 +25,7 @@ import bulwark.lang.design.Design;
  */
 public class CheckingResourceValidator extends ResourceValidatorImpl {
 	@Inject
-	private Checks checks;
+	private OpenDesigns designs;
 
 	@Override
 	public List<Issue> validate(Resource resource, CheckMode mode, CancelIndicator cancel) {
@@ -52,7 +52,7 @@ public class CheckingResourceValidator extends ResourceValidatorImpl {
 		String file = resource.getURI().isFile() ? resource.getURI().toFileString() : resource.getURI().lastSegment();
 		DesignResult result;
 		try {
-			result = checks.checker().check(new LoadedDesign(file, text, design, issues));
+			result = designs.checker().check(new LoadedDesign(file, text, design, issues));
 		} catch (RuntimeException | LinkageError e) {
 			// never a silent pass: say that the design was not checked, and why
 			Issue.IssueImpl failed = new Issue.IssueImpl();
@@ -69,7 +69,7 @@ public class CheckingResourceValidator extends ResourceValidatorImpl {
 		if (cancel.isCanceled()) {
 			return issues;
 		}
-		checks.put(resource.getURI().toString(), new Checks.Checked(text, result));
+		designs.put(resource.getURI().toString(), new OpenDesigns.Checked(text, result));
 		for (Finding f : result.findings()) {
 			if (!f.rule().text().equals("syntax") && !f.rule().text().equals("structure")) {
 				issues.add(issue(f, text));

@@ -22,11 +22,11 @@ import bulwark.check.report.PartSummary;
  */
 public class PartHoverService extends HoverService {
 	@Inject
-	private Checks checks;
+	private OpenDesigns designs;
 
 	@Override
 	public Hover hover(Document document, XtextResource resource, HoverParams params, CancelIndicator cancel) {
-		Checks.Checked checked = checks.get(resource.getURI().toString());
+		OpenDesigns.Checked checked = designs.get(resource.getURI().toString());
 		String text = document.getContents();
 		int offset = document.getOffSet(params.getPosition());
 		int start = offset, end = offset;
@@ -40,7 +40,7 @@ public class PartHoverService extends HoverService {
 		if (checked == null || word.isEmpty()) {
 			return super.hover(document, resource, params, cancel);
 		}
-		var summary = PartSummary.of(checked.result(), word, checks.checker().loader().installation());
+		var summary = PartSummary.of(checked.result(), word, designs.checker().loader().installation());
 		if (summary.isEmpty()) {
 			return super.hover(document, resource, params, cancel);
 		}

@@ -30,20 +30,20 @@ import bulwark.fix.QuickFixes;
 @SuppressWarnings("restriction")
 public class QuickFixActions implements ICodeActionService2 {
 	@Inject
-	private Checks checks;
+	private OpenDesigns designs;
 
 	@Override
 	public List<Either<Command, CodeAction>> getCodeActions(Options options) {
 		List<Either<Command, CodeAction>> actions = new ArrayList<>();
 		org.eclipse.emf.common.util.URI uri = options.getResource() != null ? options.getResource().getURI()
 				: org.eclipse.emf.common.util.URI.createURI(options.getURI());
-		Checks.Checked checked = checks.get(uri.toString());
+		OpenDesigns.Checked checked = designs.get(uri.toString());
 		Document document = options.getDocument();
 		if (checked == null || document != null && !checked.text().equals(document.getContents())) {
 			return actions; // the check of this text has not finished: no stale fixes
 		}
 		String file = uri.isFile() ? uri.toFileString() : uri.lastSegment();
-		Map<Finding, List<Fix>> fixes = QuickFixes.of(checks.checker(), checked.text(), file, checked.result());
+		Map<Finding, List<Fix>> fixes = QuickFixes.of(designs.checker(), checked.text(), file, checked.result());
 		for (Diagnostic d : options.getCodeActionParams().getContext().getDiagnostics()) {
 			String rule = d.getCode() == null ? null : d.getCode().isLeft() ? d.getCode().getLeft() : null;
 			for (Map.Entry<Finding, List<Fix>> e : fixes.entrySet()) {

@@ -16,7 +16,7 @@ import bulwark.lang.BulwarkStandaloneSetup;
  * server's own validator.
  */
 @Singleton
-public class Checks {
+public class OpenDesigns {
 	/** A document's text and what its check found. */
 	public record Checked(String text, DesignResult result) {
 	}
@@ -25,13 +25,13 @@ public class Checks {
 	private final Map<String, Checked> latest = new ConcurrentHashMap<>();
 
 	/** With a checker of its own (tests, and a server started without one). */
-	public Checks() {
+	public OpenDesigns() {
 		this(new DesignChecker(new DesignLoader(new BulwarkStandaloneSetup().createInjector(),
 				bulwark.lang.install.Installation.fromLaunch())));
 	}
 
 	/** With the checker the server made from the language's plain runtime. */
-	public Checks(DesignChecker checker) {
+	public OpenDesigns(DesignChecker checker) {
 		this.checker = checker;
 	}
 

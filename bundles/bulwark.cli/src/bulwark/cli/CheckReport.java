@@ -1,0 +1,68 @@
+package bulwark.cli;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+
+import javax.xml.stream.XMLStreamException;
+
+import bulwark.check.DesignChecker;
+import bulwark.check.DesignResult;
+import bulwark.check.report.HtmlReport;
+import bulwark.check.report.JUnitReport;
+import bulwark.check.report.JsonReport;
+import bulwark.check.report.SarifReport;
+import bulwark.check.report.TextReport;
+import bulwark.check.rules.RulePages;
+import bulwark.fix.QuickFixes;
+
+/** The report of a check run in the format the options ask for, with the verified fixes where it has room. */
+final class CheckReport {
+	private CheckReport() {
+	}
+
+	static void write(List<DesignResult> results, CheckOptions options, DesignChecker checker, Writer w)
+			throws IOException {
+		switch (options.format) {
+		case json:
+			JsonReport.write(results, Version.get(), Safety.CAUTION,
+					options.noFixes ? (r, f) -> List.of() : fixes(checker), w);
+			break;
+		case html:
+			HtmlReport.write(results, Version.get(), Safety.CAUTION, w);
+			break;
+		case sarif:
+			SarifReport.write(results, Version.get(), Safety.CAUTION,
+					rule -> RulePages.page(checker.loader().installation(), rule).orElse(null), w);
+			break;
+		case junit:
+			try {
+				JUnitReport.write(results, w);
+			} catch (XMLStreamException e) {
+				throw new IOException(e);
+			}
+			break;
+		case text:
+		default:
+			TextReport.write(results, w);
+		}
+	}
+
+	/** The verified quick fixes of each finding, worked out once per design when the report asks. */
+	private static java.util.function.BiFunction<DesignResult, bulwark.check.finding.Finding, List<bulwark.check.fix.Fix>> fixes(
+			DesignChecker checker) {
+		java.util.Map<DesignResult, java.util.Map<bulwark.check.finding.Finding, List<bulwark.check.fix.Fix>>> cache =
+				new java.util.IdentityHashMap<>();
+		return (r, f) -> cache.computeIfAbsent(r, d -> {
+			try {
+				String text = Files.readString(Path.of(d.file()), StandardCharsets.UTF_8);
+				return QuickFixes.of(checker, text, d.file(), d);
+			} catch (IOException | RuntimeException e) {
+				return java.util.Map.of(); // an unreadable file has no fixes; its findings say why
+			}
+		}).getOrDefault(f, List.of());
+	}
+}
