@@ -13,6 +13,10 @@ import bulwark.check.Status;
 import bulwark.check.WorstStress;
 import bulwark.check.policy.DefaultPolicy;
 import bulwark.check.policy.ReviewPolicy;
+import bulwark.check.finding.Finding;
+import bulwark.check.rules.ResistorVoltageRule;
+import bulwark.check.rules.SurgeEnergyRule;
+import bulwark.check.rules.ResistorPowerRule;
 
 /**
  * Mains applied as the sine it is: 230 V + 10 % (IEC 60038) is 253 V RMS, 357.8 V at the crest, at 50 Hz
@@ -186,5 +190,53 @@ class MainsWaveformTest {
 		bulwark.check.report.JsonReport.write(List.of(r), "test", "caution", json);
 		assertTrue(json.toString().contains("\"waveforms\": [") && json.toString().contains("\"volts\": ["),
 				json.toString());
+	}
+
+	/** 230 V mains through a 100 mA fuse into 1 kΩ: the fuse opens, but not before the resistor meets the crest. */
+	private static final String FUSED = HEAD + """
+			fuse F1 (a: tip, b: mid) { rated current 100 mA rated voltage 500 V %s}
+			resistor R1 (a: mid, b: gnd) { value 1 kΩ package 0805 rated power 250 mW rated pulse 2 J }
+			""";
+
+	@Test
+	void aFuseOpensOnlyAfterItsPreArcingIntegral() {
+		DesignResult r = Fixtures.check(String.format(FUSED, "rated i2t 20 mA²s "), MAINS_ONLY);
+		// until F1 opens, R1 carries i = 357.8 V·cos(ωt)/1000.1 Ω from the crest: ∫i²dt = I²·(t/2 + sin 2ωt/4ω),
+		// 1.28 mA²s per period (I_rms²·T = 0.2530² A² · 20 ms) [closed form]; 20 mA²s is reached after 15.6
+		// periods, 0.3125 s
+		double i = PEAK / 1000.1;
+		double clears = 0.020 / (i * i / 2);
+		Finding voltage = Fixtures.only(r, ResistorVoltageRule.ID);
+		assertTrue(voltage.caseName().contains("before F1 opens"), voltage.caseName());
+		// the 0805's 150 V element limit, derated to 120 V, meets the whole crest, 357.8 V·1000/1000.1
+		assertEquals(PEAK * 1000 / 1000.1, voltage.value(), 1e-3);
+		// its energy until then: the average power V_rms²/R over the interval, 64.0 W × 0.3125 s = 20 J, is far
+		// over its 2 J pulse rating (derated)
+		Finding energy = Fixtures.only(r, SurgeEnergyRule.ID);
+		double joules = RMS * RMS * 1000 / (1000.1 * 1000.1) * clears;
+		assertEquals(joules, energy.value(), 0.02 * joules);
+		assertTrue(energy.message().contains("after 312") || energy.message().contains("after 313"), energy.message());
+		assertTrue(r.findings().stream().noneMatch(f -> f.rule().equals(ResistorPowerRule.ID)),
+				"the thermal power rating is not judged on the pre-clearing instants: " + r.findings());
+	}
+
+	@Test
+	void aFuseWithoutAnIntegralTakesTheDefaultOfItsSize() {
+		DesignResult r = Fixtures.check(String.format(FUSED, ""), MAINS_ONLY);
+		// 2 A²s per A² of rated current [memory, IEC 60127-2's gate]: 0.02 A²s for 100 mA, as above
+		Finding energy = Fixtures.only(r, SurgeEnergyRule.ID);
+		assertTrue(energy.caseName().contains("pre-arcing I²t 20 mA²s"), energy.caseName());
+	}
+
+	@Test
+	void aFuseThatHoldsAddsNoClearingCase() {
+		DesignResult r = Fixtures.check(HEAD + """
+				fuse F1 (a: tip, b: mid) { rated current 1 A rated voltage 500 V }
+				resistor R1 (a: mid, b: gnd) { value 10 kΩ package axial_half rated power 10 W rated pulse 2 J }
+				""", MAINS_ONLY);
+		// 25.3 mA RMS through a 1 A fuse: it holds, and no case is named for its opening
+		assertTrue(r.cases().stream().noneMatch(c -> c.name().contains("before F1 opens") || c.name().contains("F1 open")),
+				r.cases().toString());
+		Fixtures.assertSilent(r, SurgeEnergyRule.ID);
 	}
 }

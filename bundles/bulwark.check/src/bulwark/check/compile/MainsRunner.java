@@ -8,6 +8,7 @@ import java.util.Map;
 import java.util.TreeSet;
 
 import bulwark.check.figures.Figures;
+import bulwark.check.parts.FuseRatings;
 import bulwark.check.stress.Measure;
 import bulwark.check.stress.StressCatalog;
 import bulwark.engine.circuit.Capacitor;
@@ -46,7 +47,8 @@ import bulwark.check.cases.SolvedCycle;
  * As for a surge, the instants that matter become outcomes of their own: for every part and every stress,
  * the instant where it peaks, named with the terminal positive then. A power rating is thermal: it is judged
  * on each part's power averaged over the steady cycle, carried by an outcome named for the cycle as a whole. A fuse whose RMS
- * current over the steady cycle exceeds its rating (fuse ratings are RMS) opens, and the case is solved again
+ * current over the steady cycle exceeds its rating (fuse ratings are RMS) opens once it has taken in its
+ * pre-arcing I²t; what the parts take until then is judged (see beforeClearing), and the case is solved again
  * with it open.
  */
 final class MainsRunner {
@@ -88,31 +90,116 @@ final class MainsRunner {
 
 	static List<CaseOutcome> run(CompiledDesign design, FaultCase c, PreparedCircuit circuit, DcSolver solver) {
 		Map<String, Device> opened = new LinkedHashMap<>();
+		List<CaseOutcome> outcomes = new ArrayList<>();
 		while (true) {
 			FaultCase named = opened.isEmpty() ? c : CaseRunner.withOpened(c, opened);
 			boolean reactive = circuit.circuit().devices().stream()
 					.anyMatch(d -> d instanceof Capacitor || d instanceof Inductor);
 			Run run = reactive ? transientRun(design, named, circuit, solver) : quasiStatic(design, named, circuit, solver);
 			if (run.failed()) {
-				return run.outcomes;
+				outcomes.addAll(run.outcomes);
+				return outcomes;
 			}
-			boolean more = false;
+			List<Fuse> opening = new ArrayList<>();
 			for (Device d : circuit.circuit().devices()) {
 				if (d instanceof Fuse f && !opened.containsKey(f.name()) && rms(run.steady, f.name()) > f.ratedAmps()) {
-					Fuse open = CaseRunner.opened(f);
-					opened.put(f.name(), open);
-					circuit = circuit.with(f.name(), open);
-					more = true;
+					opening.add(f);
 				}
 			}
-			if (!more) {
-				return run.outcomes;
+			if (opening.isEmpty()) {
+				outcomes.addAll(run.outcomes);
+				return outcomes;
+			}
+			outcomes.addAll(beforeClearing(design, named, run, opening));
+			for (Fuse f : opening) {
+				Fuse open = CaseRunner.opened(f);
+				opened.put(f.name(), open);
+				circuit = circuit.with(f.name(), open);
 			}
 		}
 	}
 
-	/** The outcomes of one waveform run and the steady cycle they came from (null when it failed). */
-	private record Run(List<CaseOutcome> outcomes, Cycle steady) {
+	/**
+	 * What the parts take while the fuses that will open are still whole: from switching on at the crest
+	 * until the slowest of them has taken in its pre-arcing I²t (a fuse opens then, not at once). Each
+	 * stress's instantaneous peak in that interval is judged as an instant of its own, and each part's energy
+	 * over it rides on one outcome for the pulse ratings. Power ratings are not judged on it: they are
+	 * thermal, and the interval is short; what it costs a part is its energy.
+	 */
+	private static List<CaseOutcome> beforeClearing(CompiledDesign design, FaultCase c, Run run, List<Fuse> opening) {
+		double clears = 0;
+		double largestI2t = 0;
+		for (Fuse f : opening) {
+			double i2t = FuseRatings.preArcingI2t(design.parts().get(f.name()), f.ratedAmps());
+			clears = Math.max(clears, clearingSeconds(run, f.name(), i2t));
+			largestI2t = Math.max(largestI2t, i2t);
+		}
+		Cycle window = run.switchOn.upTo(clears);
+		String names = String.join(", ", opening.stream().map(Fuse::name).toList());
+		String stage = String.format(Locale.ROOT, ", before %s open%s (pre-arcing I²t %s reached after %s)", names,
+				opening.size() == 1 ? "s" : "", Figures.engineering(largestI2t, "A²s"), Figures.engineering(clears, "s"));
+		VoltageSource source = source(c);
+		List<CaseOutcome> outcomes = new ArrayList<>(instants(design, c, stage, window, source, Map.of()));
+		Map<String, Double> energy = new LinkedHashMap<>();
+		for (String part : design.parts().keySet()) {
+			energy.put(part, energyBefore(run, part, clears));
+		}
+		FaultCase whole = new FaultCase(c.name() + stage, c.kind(), c.added(), c.replaced(), c.from(), c.to());
+		outcomes.add(new CaseOutcome(whole, run.switchOn.points.get(0), energy));
+		return outcomes;
+	}
+
+	/**
+	 * When a fuse has taken in the given ∫i²dt since switching on at the crest: along the switch-on run by the
+	 * trapezoidal rule, after it at the steady cycle's mean square [closed form: ∫i²dt = I_rms²·t over whole
+	 * periods].
+	 */
+	private static double clearingSeconds(Run run, String fuse, double i2t) {
+		Cycle on = run.switchOn;
+		double taken = 0;
+		for (int k = 1; k < on.points.size(); k++) {
+			double dt = on.times.get(k) - on.times.get(k - 1);
+			double a = square(on, fuse, k - 1), b = square(on, fuse, k);
+			double step = 0.5 * (a + b) * dt;
+			if (taken + step >= i2t) {
+				return on.times.get(k - 1) + dt * (i2t - taken) / step;
+			}
+			taken += step;
+		}
+		double meanSquare = Math.pow(rms(run.steady, fuse), 2);
+		return on.times.get(on.points.size() - 1) + (i2t - taken) / meanSquare;
+	}
+
+	private static double square(Cycle cycle, String device, int k) {
+		double i = cycle.points.get(k).device(device).current();
+		return i * i;
+	}
+
+	/** A part's energy from switching on until the given time: the switch-on run, then the steady average power. */
+	private static double energyBefore(Run run, String part, double seconds) {
+		Cycle on = run.switchOn;
+		double energy = 0;
+		for (int k = 1; k < on.points.size(); k++) {
+			double t0 = on.times.get(k - 1), t1 = on.times.get(k);
+			if (t0 >= seconds) {
+				return energy;
+			}
+			double p0 = Math.abs(on.points.get(k - 1).device(part).power()), p1 = Math.abs(on.points.get(k).device(part).power());
+			double end = Math.min(t1, seconds);
+			double pEnd = p0 + (p1 - p0) * (end - t0) / (t1 - t0);
+			energy += 0.5 * (p0 + pEnd) * (end - t0);
+		}
+		double last = on.times.get(on.points.size() - 1);
+		double average = mean(run.steady, k -> Math.abs(run.steady.points.get(k).device(part).power()));
+		return energy + Math.max(0, seconds - last) * average;
+	}
+
+	/**
+	 * The outcomes of one waveform run, the steady cycle they came from (null when it failed), and the run from
+	 * switching on at a crest, times from the switch (a sweep's cycle from its crest, as a memoryless circuit
+	 * switched on there follows it at once).
+	 */
+	private record Run(List<CaseOutcome> outcomes, Cycle steady, Cycle switchOn) {
 		boolean failed() {
 			return steady == null;
 		}
@@ -123,6 +210,27 @@ final class MainsRunner {
 	 * which cover one period and are averaged by their mean.
 	 */
 	private record Cycle(List<Double> times, List<DcSolution> points, double start, boolean evenlySpaced) {
+		/** The points up to the given time from the start, at least the first. */
+		Cycle upTo(double seconds) {
+			int n = 1;
+			while (n < points.size() && times.get(n) - start <= seconds) {
+				n++;
+			}
+			return new Cycle(times.subList(0, n), points.subList(0, n), start, false);
+		}
+
+		/** The same points from the i-th on, then the first ones again a period later, ending where it began. */
+		Cycle fromIndex(int i, double period) {
+			List<Double> t = new ArrayList<>();
+			List<DcSolution> p = new ArrayList<>();
+			int n = points.size();
+			for (int k = 0; k <= n; k++) {
+				int j = (i + k) % n;
+				t.add(times.get(j) - times.get(i) + (i + k >= n ? period : 0));
+				p.add(points.get(j));
+			}
+			return new Cycle(t, p, 0, false);
+		}
 	}
 
 	private static Run quasiStatic(CompiledDesign design, FaultCase c, PreparedCircuit circuit, DcSolver solver) {
@@ -146,7 +254,8 @@ final class MainsRunner {
 			previous = s;
 		}
 		Cycle cycle = new Cycle(times, points, 0, true);
-		return new Run(instants(design, c, "", cycle, source, averagePower(design, cycle)), cycle);
+		Cycle fromCrest = cycle.fromIndex(90 / PHASE_STEP_DEGREES, period);
+		return new Run(instants(design, c, "", cycle, source, averagePower(design, cycle)), cycle, fromCrest);
 	}
 
 	private static Run transientRun(CompiledDesign design, FaultCase c, PreparedCircuit circuit, DcSolver solver) {
@@ -157,6 +266,7 @@ final class MainsRunner {
 		TransientSolver transients = new TransientSolver(solver);
 		List<CaseOutcome> outcomes = new ArrayList<>();
 		Cycle steady = null;
+		Cycle switchOn = null;
 		for (double sign : new double[] { 1, -1 }) {
 			VoltageSource switched = new VoltageSource(source.name(), source.pins()[0], source.pins()[1],
 					new SwitchedSine(sign * sine.amplitude(), sine.hertz()), source.seriesOhms());
@@ -169,6 +279,7 @@ final class MainsRunner {
 			Cycle first = new Cycle(t.times(), t.points(), 0, false);
 			outcomes.addAll(instants(design, c, ", " + stage, first, switched, Map.of()));
 			if (sign > 0) {
+				switchOn = first;
 				PeriodicSteadyState.Result r = new PeriodicSteadyState(transients).run(on, t, period, maxStep,
 						MAX_PERIODS);
 				if (!r.settled()) {
@@ -180,13 +291,13 @@ final class MainsRunner {
 				outcomes.addAll(0, instants(design, c, settled, steady, switched, averagePower(design, steady)));
 			}
 		}
-		return new Run(outcomes, steady);
+		return new Run(outcomes, steady, switchOn);
 	}
 
 	/** The case named with where it stopped, and why. */
 	private static Run failed(FaultCase c, String where, SolveFailure failure) {
 		return new Run(List.of(new CaseOutcome(new FaultCase(c.name() + ", " + where, c.kind(), c.added(),
-				c.replaced(), c.from(), c.to()), failure)), null);
+				c.replaced(), c.from(), c.to()), failure)), null, null);
 	}
 
 	/**

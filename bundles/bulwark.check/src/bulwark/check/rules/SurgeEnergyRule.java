@@ -20,15 +20,18 @@ import bulwark.check.finding.RuleId;
 import bulwark.check.finding.RuleInfo;
 
 /**
- * A resistor absorbs more energy in a surge than its single-pulse rating, derated by the review policy. The
- * energy is ∫ p dt over the solved wave (SurgeRunner); the rating is what the part's pulse load curve allows
- * for one pulse of about 50 µs, written as {@code rated pulse}. A resistor that absorbs energy in a surge
- * but has no pulse rating gets a note (info), since its continuous power rating says nothing about a pulse.
+ * A resistor absorbs more energy in a pulse than its single-pulse rating, derated by the review policy. The
+ * pulses are a surge, ∫ p dt over the solved wave (SurgeRunner), and mains through a fuse that opens, ∫ p dt
+ * from switching on until the fuse has taken in its pre-arcing I²t (MainsRunner). The rating is what the
+ * part's pulse load curve allows for one pulse of about 50 µs, written as {@code rated pulse}; judging a
+ * longer pulse against it errs on the safe side, as the curve allows more energy for longer pulses [common
+ * practice]. A resistor that absorbs energy in a pulse but has no pulse rating gets a note (info), since its
+ * continuous power rating says nothing about a pulse.
  */
 public final class SurgeEnergyRule implements Rule {
 	public static final RuleId ID = RuleId.of("surge-energy");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.POWER, Severity.ERROR,
-			"a resistor absorbs more energy in a surge than its derated single-pulse rating");
+			"a resistor absorbs more energy in a surge, or before a fuse opens, than its derated single-pulse rating");
 	/** Energy below which an unrated resistor is not worth a note: a millijoule [common practice]. */
 	static final double NOTEWORTHY_JOULES = 1e-3;
 
@@ -61,7 +64,7 @@ public final class SurgeEnergyRule implements Rule {
 			if (rated.isEmpty()) {
 				if (worst.joules() >= NOTEWORTHY_JOULES) {
 					findings.accept(Finding.of(INFO, String.format(Locale.ROOT,
-							"%s absorbs %s in surge '%s' and has no pulse rating, so that is not judged: add 'rated pulse' "
+							"%s absorbs %s in '%s' and has no pulse rating, so that is not judged: add 'rated pulse' "
 									+ "from its pulse load curve (its power rating is for continuous dissipation)",
 							part.getName(), Figures.engineering(worst.joules(), "J"), worst.surge())).withSeverity(Severity.INFO)
 							.about(part.getName(), worst.surge(), where).judged(worst.joules(), null, "J"));
@@ -72,7 +75,7 @@ public final class SurgeEnergyRule implements Rule {
 			Limit limit = new Limit(rated.get(), "J", "its rated", d.factor(), d.source());
 			if (worst.joules() > limit.value()) {
 				findings.accept(Finding.of(INFO, String.format(Locale.ROOT,
-						"%s: energy %s in surge '%s', over %s, %s %% of the limit", part.getName(),
+						"%s: energy %s in '%s', over %s, %s %% of the limit", part.getName(),
 						Figures.over(worst.joules(), limit.value(), "J"), worst.surge(), limit.describe(),
 						Figures.percentOf(worst.joules(), limit.value()))).about(part.getName(), worst.surge(), where)
 						.judged("pulse", worst.joules(), limit.value(), "J"));

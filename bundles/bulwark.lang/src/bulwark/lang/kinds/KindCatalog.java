@@ -116,7 +116,9 @@ public final class KindCatalog {
 	private static final KindSpec FUSE = new KindSpec("fuse", TWO,
 			List.of(new SettingSpec("resistance", Unit.OHM, false, "cold resistance (0.1 Ω when omitted)")),
 			List.of(new SettingSpec("current", Unit.AMPERE, false, "rated current"),
-					new SettingSpec("voltage", Unit.VOLT, false, "rated voltage")));
+					new SettingSpec("voltage", Unit.VOLT, false, "rated voltage"),
+					new SettingSpec("i2t", Unit.AMPERE_SQUARED_SECOND, false,
+							"pre-arcing I²t: the ∫i²dt it takes in before it opens (2 A²s per A² of rated current when omitted)")));
 	private static final KindSpec RESETTABLE_FUSE = new KindSpec("resettable_fuse", TWO,
 			List.of(new SettingSpec("resistance", Unit.OHM, false, "resistance when cold (0.1 Ω when omitted)")),
 			List.of(new SettingSpec("hold", Unit.AMPERE, false, "rated hold current"),

@@ -22,7 +22,9 @@ public enum Unit {
 	HOUR("time", Units.HOUR, "h"),
 	HERTZ("frequency", Units.HERTZ, "Hz"),
 	/** A part's single-pulse energy rating (a surge). */
-	JOULE("energy", Units.JOULE, "J");
+	JOULE("energy", Units.JOULE, "J"),
+	/** A fuse's pre-arcing (melting) integral ∫i²dt, which it must take in before it opens. */
+	AMPERE_SQUARED_SECOND("melting integral", Units.AMPERE.pow(2).multiply(Units.SECOND), "A²s", "A2s");
 
 	private final String quantity;
 	private final javax.measure.Unit<?> measure;
