@@ -10,7 +10,7 @@ import bulwark.ui.stress.StressMapView;
 import bulwark.ui.sweep.SweepView;
 import bulwark.ui.topology.TopologyView;
 
-/** The editor with the findings below it, and the stress map and threshold sweep beside them. */
+/** The editor with the findings below it, and the stress map, threshold sweep, waveform and the rest beside them. */
 public class ReviewPerspective implements IPerspectiveFactory {
 	public static final String ID = "bulwark.ui.perspective";
 
@@ -21,6 +21,7 @@ public class ReviewPerspective implements IPerspectiveFactory {
 		var right = layout.createFolder("bulwark.ui.right", IPageLayout.RIGHT, 0.58f, layout.getEditorArea());
 		right.addView(StressMapView.ID);
 		right.addView(SweepView.ID);
+		right.addView(bulwark.ui.waveform.WaveformView.ID);
 		right.addView(CasesView.ID);
 		right.addView(TopologyView.ID);
 		right.addView(ChangesView.ID);

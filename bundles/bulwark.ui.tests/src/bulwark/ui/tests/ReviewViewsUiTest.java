@@ -94,6 +94,23 @@ class ReviewViewsUiTest {
 	}
 
 	@Test
+	void theWaveformOfAMainsCaseIsDrawn() throws Exception {
+		var waveform = (bulwark.ui.waveform.WaveformView) page().showView(bulwark.ui.waveform.WaveformView.ID);
+		DesignEditor editor = Application.openFile(page(), ROOT.resolve("examples/socket-live-indicator.bulwark"));
+		page().showView(bulwark.ui.waveform.WaveformView.ID);
+		assertTrue(waitUntil(() -> editor.lastResult() != null && waveform.shownTrace() != null), "no waveform drawn");
+		assertEquals(editor.lastResult().waveforms().size(), waveform.traces().size());
+		var trace = waveform.shownTrace();
+		// one steady cycle of 50 Hz mains, resampled for the plot
+		assertEquals(bulwark.check.WaveformTrace.SAMPLES, trace.seconds().length);
+		assertEquals(0.020, trace.seconds()[trace.seconds().length - 1], 0.020 * 0.01);
+		assertTrue(editor.lastResult().stresses().stream().anyMatch(s -> s.part().equals(trace.part())), trace.part());
+		assertTrue(java.util.Arrays.stream(trace.volts()).anyMatch(v -> Math.abs(v) > 1), "a flat trace");
+		Screenshot.save(PlatformUI.getWorkbench().getActiveWorkbenchWindow().getShell(),
+				ROOT.resolve("bundles/bulwark.ui.tests/target/screenshots/waveform.png"));
+	}
+
+	@Test
 	void aQuickFixThroughTheCtrl1Api() throws Exception {
 		Path dir = java.nio.file.Files.createTempDirectory("bulwark-fix");
 		Path lab = dir.resolve("lab.bulwark");
