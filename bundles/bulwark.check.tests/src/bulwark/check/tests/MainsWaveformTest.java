@@ -239,4 +239,18 @@ class MainsWaveformTest {
 				r.cases().toString());
 		Fixtures.assertSilent(r, SurgeEnergyRule.ID);
 	}
+
+	@Test
+	void theSwitchOnInrushIsAPulseForTheResistor() {
+		DesignResult r = Fixtures.check(DROPPER, MAINS_ONLY);
+		// switched on at the crest, the discharged 220 nF charges to about the crest through R1, and a resistor
+		// charging a capacitor takes ½·C·V² whatever its value [closed form, RC charging]: 14.08 mJ at 357.8 V;
+		// the steady cycle's own share is taken off, and the capacitor's steady voltage at the crest is within
+		// 0.3 % of it (1/ωC ≫ R)
+		double expected = 0.5 * 220e-9 * PEAK * PEAK;
+		Finding note = Fixtures.only(r, SurgeEnergyRule.ID);
+		assertEquals(expected, note.value(), 0.05 * expected);
+		assertEquals(bulwark.check.finding.Severity.INFO, note.severity(), "R1 has no pulse rating: a note asks for one");
+		assertTrue(note.caseName().endsWith("switched on at the crest"), note.caseName());
+	}
 }

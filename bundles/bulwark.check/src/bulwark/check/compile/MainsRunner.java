@@ -267,6 +267,8 @@ final class MainsRunner {
 		List<CaseOutcome> outcomes = new ArrayList<>();
 		Cycle steady = null;
 		Cycle switchOn = null;
+		Map<Double, Cycle> switchOns = new LinkedHashMap<>();
+		Map<Double, VoltageSource> sources = new LinkedHashMap<>();
 		for (double sign : new double[] { 1, -1 }) {
 			VoltageSource switched = new VoltageSource(source.name(), source.pins()[0], source.pins()[1],
 					new SwitchedSine(sign * sine.amplitude(), sine.hertz()), source.seriesOhms());
@@ -278,6 +280,8 @@ final class MainsRunner {
 			}
 			Cycle first = new Cycle(t.times(), t.points(), 0, false);
 			outcomes.addAll(instants(design, c, ", " + stage, first, switched, Map.of()));
+			switchOns.put(sign, first);
+			sources.put(sign, switched);
 			if (sign > 0) {
 				switchOn = first;
 				PeriodicSteadyState.Result r = new PeriodicSteadyState(transients).run(on, t, period, maxStep,
@@ -291,7 +295,50 @@ final class MainsRunner {
 				outcomes.addAll(0, instants(design, c, settled, steady, switched, averagePower(design, steady)));
 			}
 		}
+		for (var e : switchOns.entrySet()) {
+			// the inrush as a pulse: each part's energy over the switch-on beyond what the steady cycle gives it
+			boolean firstPositive = e.getKey() > 0;
+			FaultCase inrush = new FaultCase(c.name() + ", switched on at the crest", c.kind(), c.added(), c.replaced(),
+					firstPositive ? c.from() : c.to(), firstPositive ? c.to() : c.from());
+			Map<String, Double> energy = new LinkedHashMap<>();
+			for (String part : design.parts().keySet()) {
+				energy.put(part, inrushEnergy(e.getValue(), steady, part, period));
+			}
+			outcomes.add(new CaseOutcome(inrush, e.getValue().points.get(0), energy));
+		}
 		return new Run(outcomes, steady, switchOn);
+	}
+
+	/**
+	 * A part's switch-on pulse: its energy over the switch-on run less what the steady cycle, at the same phase,
+	 * would have given it then, ∫(|p| − |p_ss|)dt, never below nought. For a discharged capacitor charged through
+	 * a resistor this is the ½·C·V² the resistor takes [closed form, RC charging], whatever the steady current.
+	 */
+	private static double inrushEnergy(Cycle on, Cycle steady, String part, double period) {
+		double excess = 0;
+		for (int k = 1; k < on.points.size(); k++) {
+			double t0 = on.times.get(k - 1), t1 = on.times.get(k);
+			double a = Math.abs(on.points.get(k - 1).device(part).power()) - steadyPower(steady, part, t0, period);
+			double b = Math.abs(on.points.get(k).device(part).power()) - steadyPower(steady, part, t1, period);
+			excess += 0.5 * (a + b) * (t1 - t0);
+		}
+		return Math.max(0, excess);
+	}
+
+	/** |p| of a part in the steady cycle at the phase of time t (the cycle starts a whole number of periods on). */
+	private static double steadyPower(Cycle steady, String part, double t, double period) {
+		double phase = ((t % period) + period) % period;
+		List<Double> times = steady.times;
+		double start = times.get(0);
+		int k = 1;
+		while (k < times.size() - 1 && times.get(k) - start < phase) {
+			k++;
+		}
+		double ta = times.get(k - 1) - start, tb = times.get(k) - start;
+		double pa = Math.abs(steady.points.get(k - 1).device(part).power());
+		double pb = Math.abs(steady.points.get(k).device(part).power());
+		double w = tb > ta ? Math.min(1, Math.max(0, (phase - ta) / (tb - ta))) : 0;
+		return pa + w * (pb - pa);
 	}
 
 	/** The case named with where it stopped, and why. */

@@ -21,8 +21,9 @@ import bulwark.check.finding.RuleInfo;
 
 /**
  * A resistor absorbs more energy in a pulse than its single-pulse rating, derated by the review policy. The
- * pulses are a surge, ∫ p dt over the solved wave (SurgeRunner), and mains through a fuse that opens, ∫ p dt
- * from switching on until the fuse has taken in its pre-arcing I²t (MainsRunner). The rating is what the
+ * pulses are a surge, ∫ p dt over the solved wave (SurgeRunner); the inrush of mains switched on at the crest,
+ * the energy beyond the steady cycle's; and mains through a fuse that opens, ∫ p dt from switching on until
+ * the fuse has taken in its pre-arcing I²t (MainsRunner). The rating is what the
  * part's pulse load curve allows for one pulse of about 50 µs, written as {@code rated pulse}; judging a
  * longer pulse against it errs on the safe side, as the curve allows more energy for longer pulses [common
  * practice]. A resistor that absorbs energy in a pulse but has no pulse rating gets a note (info), since its
