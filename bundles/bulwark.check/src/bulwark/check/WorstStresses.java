@@ -12,6 +12,8 @@ import bulwark.check.stress.Limits;
 import bulwark.check.stress.Measure;
 import bulwark.check.stress.StressCatalog;
 import bulwark.lang.design.Part;
+import bulwark.check.parts.Settings;
+import bulwark.lang.design.PartKind;
 
 /** Each part's worst value of each of its stresses over the solved cases, against its derated limit. */
 final class WorstStresses {
@@ -45,7 +47,35 @@ final class WorstStresses {
 						limit.map(Limit::rated).orElse(null), limit.map(Limit::factor).orElse(null),
 						limit.map(l -> value / l.value()).orElse(null)));
 			}
+			pulse(part, cases, policy).ifPresent(result::add);
 		}
 		return result;
+	}
+
+	/**
+	 * A resistor's largest pulse energy — a surge, a switch-on inrush, the interval before a fuse opens —
+	 * against its derated pulse rating, whether or not it is over it: every judged figure is listed.
+	 */
+	private static Optional<WorstStress> pulse(Part part, List<SolvedCase> cases, ReviewPolicy policy) {
+		if (part.getKind() != PartKind.RESISTOR) {
+			return Optional.empty();
+		}
+		double worst = Double.NEGATIVE_INFINITY;
+		String at = null;
+		for (SolvedCase c : cases) {
+			Double e = c.pulseEnergy().get(part.getName());
+			if (e != null && e > worst) {
+				worst = e;
+				at = c.faultCase().name();
+			}
+		}
+		if (at == null) {
+			return Optional.empty();
+		}
+		Optional<Double> rated = Settings.rating(part, "pulse");
+		double factor = policy.derating(PartKind.RESISTOR, "pulse").factor();
+		double value = worst;
+		return Optional.of(new WorstStress(part.getName(), "pulse", "pulse energy", "J", value, at, rated.orElse(null),
+				rated.isPresent() ? factor : null, rated.map(r -> value / (r * factor)).orElse(null)));
 	}
 }

@@ -66,6 +66,11 @@ class SurgeEnergyRuleTest {
 		DesignResult r = Fixtures.check(holds, SURGE);
 		assertEquals(Fixtures.expected(holds, ID), Fixtures.actual(r, ID));
 		Fixtures.assertSilent(r, ID);
+		// a figure that passes is still listed: the JSON's stresses carry every judged figure
+		var pulse = r.stresses().stream().filter(s -> s.part().equals("R1") && s.rating().equals("pulse")).findFirst()
+				.orElseThrow(() -> new AssertionError("no pulse figure for R1: " + r.stresses()));
+		assertEquals(1.0, pulse.rated(), 1e-12);
+		assertTrue(pulse.utilisation() > 0.3 && pulse.utilisation() < 0.4, "0.34 J of 1 J: " + pulse);
 	}
 
 	@Test
