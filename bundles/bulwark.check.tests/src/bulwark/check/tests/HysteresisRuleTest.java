@@ -73,4 +73,46 @@ class HysteresisRuleTest {
 		assertEquals(Fixtures.expected(quiet, ID), Fixtures.actual(r, ID));
 		Fixtures.assertSilent(r, ID);
 	}
+
+	/**
+	 * A follower buffers the tip into a non-inverting Schmitt trigger: R1 = 10 kΩ from the buffer, R2 = 100 kΩ
+	 * from the output back to in_plus, in_minus at 2.5 V, rails 0–5 V. The buffer's output is a stiff
+	 * source, so when the output swings 5 V the input steps by 5 V·R1/(R1 + R2) = 0.4545 V, and the thresholds
+	 * are 2.5 V·(1 + R1/R2) = 2.75 V and 2.75 V − 5 V·R1/R2 = 2.25 V at the buffer [closed form, the
+	 * non-inverting Schmitt trigger of docs/sources.md#solver-oracles].
+	 */
+	static final String BUFFERED = """
+			design "buffered Schmitt input"
+			reference net gnd
+			net vcc
+			net tip
+			net vin
+			net plus
+			net ref
+			net out
+			terminal TIP at tip
+			terminal COM at gnd common
+			source V1 (plus: vcc, minus: gnd) { voltage 5 V }
+			resistor R_PULL (a: vcc, b: tip) { value 10 kΩ rated power 250 mW package 0805 }
+			comparator U_BUF (in_plus: tip, in_minus: vin, out: vin, supply_plus: vcc, supply_minus: gnd)
+			resistor R1 (a: vin, b: plus) { value 10 kΩ rated power 250 mW package 0805 }
+			resistor R2 (a: out, b: plus) { value 100 kΩ rated power 250 mW package 0805 }
+			resistor R_TOP (a: vcc, b: ref) { value 100 kΩ rated power 250 mW package 0805 }
+			resistor R_BOT (a: ref, b: gnd) { value 100 kΩ rated power 250 mW package 0805 }
+			comparator U1 (in_plus: plus, in_minus: ref, out: out, supply_plus: vcc, supply_minus: gnd)
+			""";
+
+	@Test
+	void aBufferedInputStepsByTheFeedbackDivider() {
+		var strict = Fixtures.policy("""
+				policy "strict"
+				  mains none
+				  minimum hysteresis 1 V
+				""");
+		DesignResult r = Fixtures.check(BUFFERED, strict);
+		Finding f = r.findings().stream().filter(x -> x.rule().equals(ID) && "U1".equals(x.part())).findFirst()
+				.orElseThrow(() -> new AssertionError("no hysteresis finding for U1: " + r.findings()));
+		// 0.4545 V less what the comparator's finite gain (1e5) and 50 Ω output take: within 1 %
+		assertEquals(5.0 * 10 / 110, f.value(), 0.01 * 5.0 * 10 / 110);
+	}
 }

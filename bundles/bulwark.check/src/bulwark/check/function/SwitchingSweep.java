@@ -84,14 +84,40 @@ public final class SwitchingSweep {
 			return new Outcome(Optional.empty(), null);
 		}
 		double r = rising.value().get();
-		// just before and just after the rising threshold, continuing from the short
-		List<DcSweep.Point> points = sweep.run(new double[] { LOWEST, r * (1 - 2 * RELATIVE), r * (1 + 2 * RELATIVE) });
-		DcResult before = points.get(1).result(), after = points.get(2).result();
+		// just before and just after the rising threshold, walked up to from the short along the sweep's own
+		// grid and closer steps, so that the point before stays on the branch the rising sweep was on (a jump
+		// from the short straight to the threshold can land on the other branch, and the step read is nothing)
+		double[] path = approach(r);
+		List<DcSweep.Point> points = sweep.run(path);
+		DcResult before = points.get(path.length - 2).result(), after = points.get(path.length - 1).result();
 		if (!(before instanceof DcSolution sb) || !(after instanceof DcSolution sa)) {
 			return new Outcome(Optional.empty(), "no solution beside the threshold");
 		}
+		if (high.test(sb) == high.test(sa)) {
+			return new Outcome(Optional.empty(), String.format(java.util.Locale.ROOT,
+					"%s did not switch between the two points beside its threshold (%.6g Ω), so its hysteresis is unknown",
+					c, r));
+		}
 		double step = Math.abs(differential(sa, c) - differential(sb, c));
 		return new Outcome(Optional.of(new Result(a.getName(), b.getName(), r, falling.value().get(), step)), null);
+	}
+
+	/** The short, the sweep's grid below the threshold, closer steps up to it, and the two points beside it. */
+	static double[] approach(double threshold) {
+		List<Double> path = new java.util.ArrayList<>();
+		double ratio = Math.pow(HIGHEST / LOWEST, 1.0 / STEPS);
+		double below = threshold * (1 - 2 * RELATIVE);
+		for (double v = LOWEST; v < threshold * 0.7; v *= ratio) {
+			path.add(v);
+		}
+		for (double gap : new double[] { 0.3, 0.1, 0.03, 0.01 }) {
+			if (threshold * (1 - gap) > LOWEST) {
+				path.add(threshold * (1 - gap));
+			}
+		}
+		path.add(Math.max(below, LOWEST));
+		path.add(threshold * (1 + 2 * RELATIVE));
+		return path.stream().mapToDouble(Double::doubleValue).toArray();
 	}
 
 	private static double differential(DcSolution s, String comparator) {

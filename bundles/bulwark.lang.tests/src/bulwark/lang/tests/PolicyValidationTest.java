@@ -1,5 +1,7 @@
 package bulwark.lang.tests;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
 import org.eclipse.xtext.testing.InjectWith;
 import org.eclipse.xtext.testing.extensions.InjectionExtension;
 import org.eclipse.xtext.testing.util.ParseHelper;
@@ -48,6 +50,13 @@ class PolicyValidationTest {
 				IssueCodes.UNKNOWN_RATING, "A capacitor has no rating 'power'; it has: voltage");
 		validation.assertError(parse("derate capacitor voltage to 0 %"), DesignPackage.Literals.DERATING,
 				IssueCodes.VALUE_OUT_OF_RANGE, "more than 0 %");
+	}
+
+	@Test
+	void aWrongDeratingIsReportedOnce() throws Exception {
+		long wrong = validation.validate(parse("derate capacitor power to 50 %")).stream()
+				.filter(i -> i.getMessage().contains("has no rating 'power'")).count();
+		assertEquals(1, wrong);
 	}
 
 	@Test

@@ -1,5 +1,7 @@
 package bulwark.lang.tests;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
 import org.eclipse.xtext.testing.InjectWith;
 import org.eclipse.xtext.testing.extensions.InjectionExtension;
 import org.eclipse.xtext.testing.util.ParseHelper;
@@ -51,6 +53,14 @@ class RequirementValidationTest {
 				"threshold is written in Ω, not voltage");
 		validation.assertError(parse("require battery_life 12"), DesignPackage.Literals.REQUIREMENT,
 				IssueCodes.MISSING_UNIT, "battery_life is written in h");
+	}
+
+	@Test
+	void eachProblemIsReportedOnce() throws Exception {
+		// the composed validators run once, through BulwarkValidator, not also registered on their own
+		long wrong = validation.validate(parse("require threshold 5 V")).stream()
+				.filter(i -> i.getMessage().contains("threshold is written in Ω")).count();
+		assertEquals(1, wrong);
 	}
 
 	@Test

@@ -5,6 +5,7 @@ import java.util.List;
 import org.eclipse.emf.ecore.EPackage;
 import org.eclipse.xtext.validation.AbstractDeclarativeValidator;
 import org.eclipse.xtext.validation.Check;
+import org.eclipse.xtext.validation.EValidatorRegistrar;
 
 import bulwark.lang.design.Definition;
 import bulwark.lang.design.DesignPackage;
@@ -14,6 +15,14 @@ import bulwark.lang.library.LibraryPath;
 
 /** Library files that can be used, and parts made from definitions of their own kind. */
 public class LibraryValidator extends AbstractDeclarativeValidator {
+	/**
+	 * Composed into BulwarkValidator (@ComposedChecks), which registers the checks: registering this one for
+	 * the package too would run each of its checks twice and report every problem twice.
+	 */
+	@Override
+	public void register(EValidatorRegistrar registrar) {
+	}
+
 	@Override
 	protected List<EPackage> getEPackages() {
 		return List.of(DesignPackage.eINSTANCE);

@@ -8,6 +8,7 @@ import org.eclipse.emf.ecore.EPackage;
 import org.eclipse.emf.ecore.EStructuralFeature;
 import org.eclipse.xtext.validation.AbstractDeclarativeValidator;
 import org.eclipse.xtext.validation.Check;
+import org.eclipse.xtext.validation.EValidatorRegistrar;
 
 import bulwark.lang.design.DcLevel;
 import bulwark.lang.design.DesignPackage;
@@ -39,6 +40,14 @@ public class PolicyValidator extends AbstractDeclarativeValidator {
 	public static final List<String> MINIMUMS = List.of("hysteresis");
 	/** How Monte Carlo draws toleranced values. */
 	public static final List<String> DISTRIBUTIONS = List.of("uniform", "normal");
+
+	/**
+	 * Composed into BulwarkValidator (@ComposedChecks), which registers the checks: registering this one for
+	 * the package too would run each of its checks twice and report every problem twice.
+	 */
+	@Override
+	public void register(EValidatorRegistrar registrar) {
+	}
 
 	@Override
 	protected List<EPackage> getEPackages() {

@@ -9,6 +9,7 @@ import java.util.Set;
 import org.eclipse.emf.ecore.EPackage;
 import org.eclipse.xtext.validation.AbstractDeclarativeValidator;
 import org.eclipse.xtext.validation.Check;
+import org.eclipse.xtext.validation.EValidatorRegistrar;
 
 import bulwark.lang.design.Design;
 import bulwark.lang.design.DesignPackage;
@@ -30,6 +31,14 @@ public class RequirementValidator extends AbstractDeclarativeValidator {
 			"battery_life", new Figure("battery_life", List.of(Unit.HOUR), "at least this long on the battery, terminals open"),
 			"hysteresis", new Figure("hysteresis", List.of(Unit.VOLT, Unit.OHM), "at least this much, at the input (V) or the terminals (Ω)"),
 			"led_test", new Figure("led_test", List.of(Unit.VOLT), "at least this open-circuit voltage, to light an LED under test"));
+
+	/**
+	 * Composed into BulwarkValidator (@ComposedChecks), which registers the checks: registering this one for
+	 * the package too would run each of its checks twice and report every problem twice.
+	 */
+	@Override
+	public void register(EValidatorRegistrar registrar) {
+	}
 
 	@Override
 	protected List<EPackage> getEPackages() {
