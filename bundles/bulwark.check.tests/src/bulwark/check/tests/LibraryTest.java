@@ -58,6 +58,21 @@ class LibraryTest {
 	}
 
 	@Test
+	void aLibraryWithAnErrorStopsTheCheck(@TempDir Path dir) throws IOException {
+		// a voltage written as a power rating: refused in a design, so refused in a library too — never 5 kW
+		write(dir, "lib/parts.bulwark", """
+				library "test parts"
+				define resistor CHIP_0805 { package 0805 rated power 5 kV }
+				""");
+		DesignResult r = Fixtures.checker().check(write(dir, "d.bulwark", DESIGN));
+		assertEquals(Status.ERROR, r.status(), r.findings().toString());
+		Finding f = r.findings().stream().filter(x -> x.message().startsWith("the library 'lib/parts.bulwark' has an error at 2:"))
+				.findFirst().orElseThrow(() -> new AssertionError(r.findings().toString()));
+		assertEquals(2, f.location().line(), "at the use line");
+		assertTrue(f.message().contains("power"), f.message());
+	}
+
+	@Test
 	void aMissingLibraryIsALocatedError(@TempDir Path dir) throws IOException {
 		DesignResult r = Fixtures.checker().check(write(dir, "d.bulwark", DESIGN));
 		assertEquals(Status.ERROR, r.status());

@@ -1,5 +1,16 @@
 package bulwark.lang.validation;
 
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.Set;
+import org.eclipse.emf.common.util.URI;
+import org.eclipse.emf.ecore.resource.Resource;
+import org.eclipse.emf.ecore.resource.ResourceSet;
+import org.eclipse.xtext.diagnostics.Severity;
+import org.eclipse.xtext.resource.XtextResource;
+import org.eclipse.xtext.util.CancelIndicator;
+import org.eclipse.xtext.validation.CheckMode;
+import org.eclipse.xtext.validation.Issue;
 import java.util.List;
 
 import org.eclipse.emf.ecore.EPackage;
@@ -37,6 +48,46 @@ public class LibraryValidator extends AbstractDeclarativeValidator {
 		if (l.file().isEmpty()) {
 			error(l.problem(), use, DesignPackage.Literals.USE__IMPORT_URI,
 					l.problem().startsWith("no library") ? IssueCodes.LIBRARY_NOT_FOUND : IssueCodes.LIBRARY_OUTSIDE);
+			return;
+		}
+		for (String problem : libraryErrors(use, l.file().get())) {
+			error(problem, use, DesignPackage.Literals.USE__IMPORT_URI, IssueCodes.LIBRARY_INVALID);
+		}
+	}
+
+	/** Libraries being validated on this thread: a library that uses itself, directly or not, is validated once. */
+	private static final ThreadLocal<Set<URI>> VALIDATING = ThreadLocal.withInitial(HashSet::new);
+
+	/**
+	 * The errors of the library a design uses, each with its place in the library: a library is validated like
+	 * the design itself (a power rating written in volts is refused there too), and a design whose library has
+	 * errors is not checked, so that no part takes a rating the language would refuse.
+	 */
+	private static List<String> libraryErrors(Use use, java.nio.file.Path file) {
+		URI uri = URI.createFileURI(file.toString());
+		Set<URI> validating = VALIDATING.get();
+		ResourceSet set = use.eResource().getResourceSet();
+		if (set == null || !validating.add(uri)) {
+			return List.of();
+		}
+		try {
+			Resource library = set.getResource(uri, true);
+			if (!(library instanceof XtextResource x)) {
+				return List.of();
+			}
+			List<String> problems = new ArrayList<>();
+			for (Issue issue : x.getResourceServiceProvider().getResourceValidator().validate(x, CheckMode.ALL,
+					CancelIndicator.NullImpl)) {
+				if (issue.getSeverity() == Severity.ERROR) {
+					problems.add("the library '" + use.getImportURI() + "' has an error at " + issue.getLineNumber() + ":"
+							+ issue.getColumn() + ": " + issue.getMessage() + " — fix the library; until then this design is not checked");
+				}
+			}
+			return problems;
+		} catch (RuntimeException e) {
+			return List.of("the library '" + use.getImportURI() + "' cannot be read: " + e.getMessage());
+		} finally {
+			validating.remove(uri);
 		}
 	}
 
