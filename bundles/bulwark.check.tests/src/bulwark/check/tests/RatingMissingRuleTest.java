@@ -10,6 +10,8 @@ import bulwark.check.finding.Severity;
 import bulwark.check.Status;
 import bulwark.check.rules.RatingMissingRule;
 import bulwark.check.finding.RuleId;
+import bulwark.check.rules.ResistorPowerRule;
+import bulwark.check.finding.Finding;
 
 class RatingMissingRuleTest {
 	private static final RuleId ID = RatingMissingRule.ID;
@@ -19,7 +21,7 @@ class RatingMissingRuleTest {
 			reference net gnd
 			net a
 			source V1 (plus: a, minus: gnd) { voltage 5 V }
-			resistor R1 (a: a, b: gnd) { value 1 kΩ package 0805 } #! rating-missing
+			resistor R1 (a: a, b: gnd) { value 1 kΩ rated voltage 150 V } #! rating-missing
 			resistor R2 (a: a, b: gnd) { value 1 kΩ package 0805 rated power 250 mW }
 			""";
 
@@ -53,9 +55,29 @@ class RatingMissingRuleTest {
 
 	@Test
 	void silentWhenRated() {
-		String rated = Fixtures.replaced(MISSING, "{ value 1 kΩ package 0805 } #! rating-missing", "{ value 1 kΩ package 0805 rated power 100 mW }");
+		String rated = Fixtures.replaced(MISSING, "{ value 1 kΩ rated voltage 150 V } #! rating-missing", "{ value 1 kΩ rated voltage 150 V rated power 100 mW }");
 		DesignResult r = Fixtures.check(rated);
 		assertEquals(Fixtures.expected(rated, ID), Fixtures.actual(r, ID));
 		Fixtures.assertSilent(r, ID);
+	}
+
+	@Test
+	void aPackageWithoutAPowerRatingIsJudgedOnItsUsualOne() {
+		// 0.96 W in an 0805 whose power rating was deleted: judged on the package's usual 125 mW [common
+		// practice], never a pass with a warning
+		String deleted = """
+				design "deleted rating"
+				reference net gnd
+				net a
+				source V1 (plus: a, minus: gnd) { voltage 31 V }
+				resistor R1 (a: a, b: gnd) { value 1 kΩ package 0805 }
+				""";
+		DesignResult r = Fixtures.check(deleted);
+		Fixtures.assertSilent(r, ID);
+		Finding power = Fixtures.only(r, ResistorPowerRule.ID);
+		assertEquals(31.0 * 31 / 1000, power.value(), 1e-9);
+		assertEquals(0.125, power.limit(), 0);
+		assertTrue(power.message().contains("over the assumed 0805 power rating 125 mW"), power.message());
+		assertEquals(Status.FAIL, r.status());
 	}
 }

@@ -157,7 +157,7 @@ class ReviewPolicyTest {
 
 	@Test
 	void severityChangesApply() {
-		String unrated = Fixtures.replaced(ACROSS, " rated power 1 W", "");
+		String unrated = Fixtures.replaced(ACROSS, " package 0805 rated power 1 W", "");
 		DesignResult r = Fixtures.check(unrated, Fixtures.policy(POLICY));
 		assertEquals(Severity.ERROR, Fixtures.only(r, RatingMissingRule.ID).severity());
 		assertEquals(Status.FAIL, r.status());

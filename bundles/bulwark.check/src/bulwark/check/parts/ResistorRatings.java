@@ -19,18 +19,37 @@ public final class ResistorRatings {
 	private ResistorRatings() {
 	}
 
-	/** What limits the voltage, and the limit. */
-	public record VoltageRating(double volts, String basis) {
+	/**
+	 * The power a package is usually rated for, W [common practice: thick-film chips 1/16 W (0402), 1/10 W
+	 * (0603), 1/8 W (0805), 1/4 W (1206), 1 W (2512); axial film parts by their name]: assumed, and said so in
+	 * the finding, where the design gives a package and no power rating, so that a deleted rating never turns
+	 * a fail into a pass. A part writes its own.
+	 */
+	public static final Map<String, Double> PACKAGE_WATTS = Map.of("0402", 0.0625, "0603", 0.1, "0805", 0.125,
+			"1206", 0.25, "2512", 1.0, "axial_quarter", 0.25, "axial_half", 0.5);
+
+	/** The power rating: rated, else the package's usual one; empty when the design says neither. */
+	public static Optional<Rating> power(Part part) {
+		return ratedOrByPackage(part, "power", PACKAGE_WATTS, pkg -> "the assumed " + pkg + " power rating");
+	}
+
+	/** A rating and what it is: "its rated", or the package's default with its source. */
+	public record Rating(double value, String basis) {
 	}
 
 	/** The limiting element voltage: rated, else by package; empty when the design says neither. */
-	public static Optional<VoltageRating> limitingElementVoltage(Part part) {
-		Optional<Double> rated = Settings.rating(part, "voltage");
+	public static Optional<Rating> limitingElementVoltage(Part part) {
+		return ratedOrByPackage(part, "voltage", PACKAGE_VOLTS, pkg -> "the " + pkg + " package's limiting element voltage of");
+	}
+
+	/** The part's written rating, else its package's value from the table, with what the basis is. */
+	private static Optional<Rating> ratedOrByPackage(Part part, String rating, Map<String, Double> byPackage,
+			java.util.function.Function<String, String> basis) {
+		Optional<Double> rated = Settings.rating(part, rating);
 		if (rated.isPresent()) {
-			return Optional.of(new VoltageRating(rated.get(), "its rated"));
+			return Optional.of(new Rating(rated.get(), "its rated"));
 		}
-		return Settings.wordOrNumber(part, "package").filter(PACKAGE_VOLTS::containsKey)
-				.map(pkg -> new VoltageRating(PACKAGE_VOLTS.get(pkg),
-						"the " + pkg.replace('_', ' ') + " package's limiting element voltage of"));
+		return Settings.wordOrNumber(part, "package").filter(byPackage::containsKey)
+				.map(pkg -> new Rating(byPackage.get(pkg), basis.apply(pkg.replace('_', ' '))));
 	}
 }

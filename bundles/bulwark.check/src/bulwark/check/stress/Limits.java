@@ -64,7 +64,10 @@ public final class Limits {
 	private static Optional<Rated> read(Part part, Measure measure) {
 		String rating = measure.rating();
 		if (part.getKind() == PartKind.RESISTOR && rating.equals("voltage")) {
-			return ResistorRatings.limitingElementVoltage(part).map(v -> new Rated(v.volts(), v.basis()));
+			return ResistorRatings.limitingElementVoltage(part).map(v -> new Rated(v.value(), v.basis()));
+		}
+		if (part.getKind() == PartKind.RESISTOR && rating.equals("power")) {
+			return ResistorRatings.power(part).map(v -> new Rated(v.value(), v.basis()));
 		}
 		Optional<Rated> written = Settings.rating(part, rating).map(v -> new Rated(v, "its rated"));
 		if (written.isPresent()) {

@@ -44,7 +44,7 @@ class CheckCommandTest {
 	void warningAloneExitsZero(@TempDir Path dir) throws Exception {
 		Path unrated = dir.resolve("unrated.bulwark");
 		Files.writeString(unrated, "design \"unrated\"\nreference net gnd\nnet a\n"
-				+ "source V1 (plus: a, minus: gnd) { voltage 5 V }\nresistor R1 (a: a, b: gnd) { value 1 kΩ package 0805 }\n");
+				+ "source V1 (plus: a, minus: gnd) { voltage 5 V }\nresistor R1 (a: a, b: gnd) { value 1 kΩ rated voltage 150 V }\n");
 		CliRun run = CliRun.of("check", unrated.toString());
 		assertEquals(0, run.exitCode(), run.err());
 		assertTrue(run.out().contains(":5:10: warning rating-missing R1 has no rating for power (resistor-power)"), run.out());

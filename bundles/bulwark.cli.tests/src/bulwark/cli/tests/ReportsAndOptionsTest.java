@@ -33,7 +33,7 @@ class ReportsAndOptionsTest {
 	void failOnDecidesWhatFails(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir) throws Exception {
 		java.nio.file.Path unrated = dir.resolve("unrated.bulwark");
 		java.nio.file.Files.writeString(unrated, "design \"unrated\"\nreference net gnd\nnet a\n"
-				+ "source V1 (plus: a, minus: gnd) { voltage 5 V }\nresistor R1 (a: a, b: gnd) { value 1 kΩ package 0805 }\n");
+				+ "source V1 (plus: a, minus: gnd) { voltage 5 V }\nresistor R1 (a: a, b: gnd) { value 1 kΩ rated voltage 150 V }\n");
 		assertEquals(0, CliRun.of("check", unrated.toString()).exitCode()); // a warning only
 		assertEquals(1, CliRun.of("check", "--fail-on", "warning", unrated.toString()).exitCode());
 		assertEquals(0, CliRun.of("check", "--fail-on", "never", CliRun.example(LAB)).exitCode());

@@ -36,6 +36,8 @@ class UnitParserTest {
 		assertUnit("kHz", Unit.HERTZ, 1e3);
 		assertUnit("ms", Unit.SECOND, 1e-3);
 		assertUnit("TΩ", Unit.OHM, 1e12);
+		assertUnit("fA", Unit.AMPERE, 1e-15); // a junction's saturation current
+		assertUnit("aA", Unit.AMPERE, 1e-18);
 	}
 
 	/** Values go to SI through the JSR 385 implementation, once, when the design is read. */

@@ -1,5 +1,7 @@
 package bulwark.lang.tests;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
 import org.eclipse.xtext.diagnostics.Diagnostic;
 import org.eclipse.xtext.testing.InjectWith;
 import org.eclipse.xtext.testing.extensions.InjectionExtension;
@@ -39,6 +41,22 @@ class ValidationTest {
 		Design d = parse("npn Q1 (collector: a, base: a, emitter: gnd) { beta 100 V }");
 		validation.assertError(d, DesignPackage.Literals.QUANTITY, IssueCodes.UNEXPECTED_UNIT, "plain number");
 		validation.assertNoErrors(parse("npn Q1 (collector: a, base: a, emitter: gnd) { beta 100 }"));
+	}
+
+	@Test
+	void smallCurrentsInFemtoamperesOrWithAnExponent() throws Exception {
+		Design d = parse("diode D1 (anode: a, cathode: gnd) { saturation 10 fA }\n"
+				+ "diode D2 (anode: a, cathode: gnd) { saturation 1e-14 A }\n"
+				+ "diode D3 (anode: a, cathode: gnd) { saturation 2.5E-3 pA }");
+		validation.assertNoErrors(d);
+		var parts = d.getMembers().stream().filter(bulwark.lang.design.Part.class::isInstance)
+				.map(bulwark.lang.design.Part.class::cast).toList();
+		// 10 fA = 1e-14 A = 1e-14 A; 2.5e-3 pA = 2.5e-15 A [SI prefixes, BIPM SI brochure table 7]
+		double[] expected = { 1e-14, 1e-14, 2.5e-15 };
+		for (int i = 0; i < 3; i++) {
+			double si = bulwark.lang.units.Quantities.si(parts.get(i).getSettings().get(0).getValue()).orElseThrow();
+			assertEquals(expected[i], si, expected[i] * 1e-12);
+		}
 	}
 
 	@Test

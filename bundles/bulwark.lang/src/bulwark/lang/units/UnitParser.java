@@ -6,6 +6,8 @@ import java.util.Optional;
 import javax.measure.Prefix;
 import javax.measure.UnitConverter;
 
+import static javax.measure.MetricPrefix.ATTO;
+import static javax.measure.MetricPrefix.FEMTO;
 import static javax.measure.MetricPrefix.GIGA;
 import static javax.measure.MetricPrefix.KILO;
 import static javax.measure.MetricPrefix.MEGA;
@@ -21,7 +23,8 @@ import static javax.measure.MetricPrefix.TERA;
  * (micro sign) and "μ" (Greek mu) and the ASCII "u" are accepted for micro.
  */
 public final class UnitParser {
-	private static final Map<String, Prefix> PREFIXES = Map.ofEntries(Map.entry("p", PICO), Map.entry("n", NANO),
+	private static final Map<String, Prefix> PREFIXES = Map.ofEntries(Map.entry("a", ATTO), Map.entry("f", FEMTO),
+			Map.entry("p", PICO), Map.entry("n", NANO),
 			Map.entry("u", MICRO), Map.entry("µ", MICRO), Map.entry("μ", MICRO), Map.entry("m", MILLI),
 			Map.entry("k", KILO), Map.entry("M", MEGA), Map.entry("G", GIGA), Map.entry("T", TERA));
 
