@@ -11,7 +11,7 @@ import bulwark.engine.circuit.Device;
  * {@code to} name the terminals a generated abuse case drives, positive at {@code from} (null otherwise).
  */
 public record FaultCase(String name, CaseKind kind, List<Device> added, Map<String, Device> replaced, String from,
-		String to) {
+		String to, boolean momentary) {
 	public FaultCase {
 		added = List.copyOf(added);
 		replaced = Map.copyOf(replaced);
@@ -19,6 +19,20 @@ public record FaultCase(String name, CaseKind kind, List<Device> added, Map<Stri
 
 	public FaultCase(String name, CaseKind kind, List<Device> added) {
 		this(name, kind, added, Map.of(), null, null);
+	}
+
+	/** A case that lasts as long as the circuit stays in it. */
+	public FaultCase(String name, CaseKind kind, List<Device> added, Map<String, Device> replaced, String from,
+			String to) {
+		this(name, kind, added, replaced, from, to, false);
+	}
+
+	/**
+	 * The same circuit for a moment only — until a fuse opens: its instantaneous stresses count, a thermal
+	 * (power) rating does not, and what the moment costs a part is its energy (a pulse).
+	 */
+	public FaultCase momentarily(String newName) {
+		return new FaultCase(newName, kind, added, replaced, from, to, true);
 	}
 
 	public static FaultCase normalOpen() {
@@ -41,12 +55,12 @@ public record FaultCase(String name, CaseKind kind, List<Device> added, Map<Stri
 
 	/** The same case at one instant of its transient. */
 	public FaultCase at(String instant) {
-		return new FaultCase(name + ", at " + instant, kind, added, replaced, from, to);
+		return new FaultCase(name + ", at " + instant, kind, added, replaced, from, to, momentary);
 	}
 
 	/** The same case at one instant, named with the terminal positive then and the other. */
 	public FaultCase at(String instant, String plus, String minus) {
 		return new FaultCase(name + ", " + plus + " + to " + minus + " −, at " + instant, kind, added, replaced, plus,
-				minus);
+				minus, momentary);
 	}
 }

@@ -16,6 +16,8 @@ import bulwark.engine.solve.DcSolver;
 import bulwark.engine.solve.PreparedCircuit;
 import bulwark.check.cases.FaultCase;
 import bulwark.check.cases.CaseOutcome;
+import bulwark.check.figures.Figures;
+import bulwark.check.parts.FuseRatings;
 
 /**
  * Solves a compiled design in each of its cases. Cases that add the same devices on the same nets (both
@@ -53,7 +55,7 @@ public final class CaseRunner {
 			} else if (c.isMains()) {
 				outcomes.addAll(MainsRunner.run(design, c, circuit, solver));
 			} else {
-				outcomes.add(openFuses(solver, c, circuit, solver.solve(circuit)));
+				outcomes.addAll(openFuses(design, solver, c, circuit, solver.solve(circuit)));
 			}
 		}
 		return outcomes;
@@ -78,26 +80,58 @@ public final class CaseRunner {
 		return circuit;
 	}
 
-	/** Opens every fuse over its rating, one round at a time, until none is; names them in the case. */
-	private static CaseOutcome openFuses(DcSolver solver, FaultCase c, PreparedCircuit circuit, DcResult result) {
+	/**
+	 * Opens every fuse over its rating, one round at a time, until none is; names them in the case. Before the
+	 * first round opens, the circuit stays whole until the slowest of those fuses has taken in its pre-arcing
+	 * I²t, t = I²t / I² [closed form, constant current]: that moment is an outcome of its own, its
+	 * instantaneous stresses judged, and each part's energy over it, P·t, a pulse.
+	 */
+	private static List<CaseOutcome> openFuses(CompiledDesign design, DcSolver solver, FaultCase c,
+			PreparedCircuit circuit, DcResult result) {
+		List<CaseOutcome> outcomes = new ArrayList<>();
 		Map<String, Device> opened = new LinkedHashMap<>();
 		while (result instanceof DcSolution s) {
-			boolean more = false;
+			List<Fuse> opening = new ArrayList<>();
 			for (Device d : circuit.circuit().devices()) {
 				if (d instanceof Fuse f && !opened.containsKey(f.name())
 						&& Math.abs(s.device(f.name()).current()) > f.ratedAmps()) {
-					Fuse open = opened(f);
-					opened.put(f.name(), open);
-					circuit = circuit.with(f.name(), open);
-					more = true;
+					opening.add(f);
 				}
 			}
-			if (!more) {
+			if (opening.isEmpty()) {
 				break;
+			}
+			if (opened.isEmpty()) {
+				outcomes.add(beforeOpening(design, c, s, opening));
+			}
+			for (Fuse f : opening) {
+				Fuse open = opened(f);
+				opened.put(f.name(), open);
+				circuit = circuit.with(f.name(), open);
 			}
 			result = solver.solve(circuit);
 		}
-		return new CaseOutcome(opened.isEmpty() ? c : withOpened(c, opened), result);
+		outcomes.add(new CaseOutcome(opened.isEmpty() ? c : withOpened(c, opened), result));
+		return outcomes;
+	}
+
+	private static CaseOutcome beforeOpening(CompiledDesign design, FaultCase c, DcSolution whole, List<Fuse> opening) {
+		double seconds = 0, largestI2t = 0;
+		for (Fuse f : opening) {
+			double i2t = FuseRatings.preArcingI2t(design.parts().get(f.name()), f.ratedAmps());
+			double amps = whole.device(f.name()).current();
+			seconds = Math.max(seconds, i2t / (amps * amps));
+			largestI2t = Math.max(largestI2t, i2t);
+		}
+		Map<String, Double> energy = new LinkedHashMap<>();
+		for (String part : design.parts().keySet()) {
+			energy.put(part, Math.abs(whole.device(part).power()) * seconds);
+		}
+		String names = String.join(", ", opening.stream().map(Fuse::name).toList());
+		FaultCase moment = c.momentarily(String.format(java.util.Locale.ROOT,
+				"%s, before %s open%s (pre-arcing I²t %s reached after %s)", c.name(), names, opening.size() == 1 ? "s" : "",
+				Figures.engineering(largestI2t, "A²s"), Figures.engineering(seconds, "s")));
+		return new CaseOutcome(moment, whole, energy);
 	}
 
 	/** A fuse that has opened: a tripped resettable one holds itself hot, any other is a gap. */

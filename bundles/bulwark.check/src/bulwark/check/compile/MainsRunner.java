@@ -144,7 +144,7 @@ final class MainsRunner {
 		for (String part : design.parts().keySet()) {
 			energy.put(part, energyBefore(run, part, clears));
 		}
-		FaultCase whole = new FaultCase(c.name() + stage, c.kind(), c.added(), c.replaced(), c.from(), c.to());
+		FaultCase whole = c.momentarily(c.name() + stage);
 		outcomes.add(new CaseOutcome(whole, run.switchOn.points.get(0), energy));
 		return outcomes;
 	}

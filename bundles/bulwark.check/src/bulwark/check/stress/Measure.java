@@ -30,6 +30,9 @@ public record Measure(String rating, String what, String unit, ToDoubleFunction<
 		if (c.isMains() && isPower()) {
 			return false; // a power rating is thermal: judged on the cycle's average, not on an instant
 		}
+		if (c.momentary() && isPower()) {
+			return false; // nor on a moment before a fuse opens: that is judged as a pulse
+		}
 		return !(notWhenReplaced && c.replaced().containsKey(part));
 	}
 
