@@ -330,10 +330,17 @@ final class MainsRunner {
 		double phase = ((t % period) + period) % period;
 		List<Double> times = steady.times;
 		double start = times.get(0);
-		int k = 1;
-		while (k < times.size() - 1 && times.get(k) - start < phase) {
-			k++;
+		// the first point at or after the phase, by bisection (the cycle's times increase)
+		int lo = 1, hi = times.size() - 1;
+		while (lo < hi) {
+			int mid = (lo + hi) >>> 1;
+			if (times.get(mid) - start < phase) {
+				lo = mid + 1;
+			} else {
+				hi = mid;
+			}
 		}
+		int k = lo;
 		double ta = times.get(k - 1) - start, tb = times.get(k) - start;
 		double pa = Math.abs(steady.points.get(k - 1).device(part).power());
 		double pb = Math.abs(steady.points.get(k).device(part).power());
