@@ -8,7 +8,7 @@ import picocli.CommandLine.Command;
 /** The top-level command: its subcommands do the work. */
 @Command(name = "bulwark", mixinStandardHelpOptions = true, versionProvider = Version.class,
 		description = { "Checks instrument input designs against their ratings and abuse at the terminals.", "",
-				Safety.CAUTION },
+				bulwark.check.report.Caution.TEXT },
 		subcommands = { CheckCommand.class, ClassroomCommand.class, LspCommand.class, ToleranceCommand.class, SolveCommand.class, CompareCommand.class, ExplainCommand.class, DemoCommand.class,
 				CommandLine.HelpCommand.class },
 		footer = { "", "Exit codes: 0 no error finding, 1 error findings, 2 a design could not be checked, "

@@ -28,14 +28,14 @@ final class CheckReport {
 			throws IOException {
 		switch (options.format) {
 		case json:
-			JsonReport.write(results, Version.get(), Safety.CAUTION,
+			JsonReport.write(results, Version.get(), bulwark.check.report.Caution.TEXT,
 					options.noFixes ? (r, f) -> List.of() : fixes(checker), w);
 			break;
 		case html:
-			HtmlReport.write(results, Version.get(), Safety.CAUTION, w);
+			HtmlReport.write(results, Version.get(), bulwark.check.report.Caution.TEXT, w);
 			break;
 		case sarif:
-			SarifReport.write(results, Version.get(), Safety.CAUTION,
+			SarifReport.write(results, Version.get(), bulwark.check.report.Caution.TEXT,
 					rule -> RulePages.page(checker.loader().installation(), rule).orElse(null), w);
 			break;
 		case junit:

@@ -60,6 +60,7 @@ final class Checks {
 		long error = results.stream().filter(r -> r.status() == Status.ERROR).count();
 		err.printf("bulwark: %d design(s) checked: %d pass, %d fail, %d not checked%n", results.size(), pass, fail,
 				error);
+		err.println("bulwark: " + bulwark.check.report.Caution.TEXT);
 		err.flush();
 		return exitCode(results, options.failOn);
 	}

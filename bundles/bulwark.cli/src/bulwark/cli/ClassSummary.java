@@ -31,6 +31,8 @@ final class ClassSummary {
 			}
 			s.append(',').append(ClassroomCommand.missedRequirements(r)).append('\n');
 		}
+		// the caution as the last row, in the first column, where a spreadsheet shows it
+		s.append(field(bulwark.check.report.Caution.TEXT)).append('\n');
 		return s.toString();
 	}
 
@@ -40,7 +42,7 @@ final class ClassSummary {
 				+ "table{border-collapse:collapse}td,th{border:1px solid #bbb;padding:.2em .5em}"
 				+ ".caution{border:2px solid #b23a48;padding:.6em}.pass{color:#4a7c59}.fail,.error{color:#b23a48}"
 				+ "</style></head><body>\n<h1>Class summary</h1>\n");
-		s.append("<p class=\"caution\"><strong>").append(HtmlReport.escape(Safety.CAUTION)).append("</strong></p>\n");
+		s.append("<p class=\"caution\"><strong>").append(HtmlReport.escape(bulwark.check.report.Caution.TEXT)).append("</strong></p>\n");
 		s.append("<p>").append(files.size()).append(" design(s) under the review policy '")
 				.append(HtmlReport.escape(policy)).append("'</p>\n");
 		s.append("<table><tr><th>design</th><th>status</th><th>errors</th><th>warnings</th><th>requirements missed</th>"

@@ -81,7 +81,7 @@ final class ClassroomCommand implements Callable<Integer> {
 			String page = pageName(dir.relativize(files.get(i)));
 			pages.add(page);
 			StringWriter html = new StringWriter();
-			HtmlReport.write(List.of(results.get(i)), Version.get(), Safety.CAUTION, html);
+			HtmlReport.write(List.of(results.get(i)), Version.get(), bulwark.check.report.Caution.TEXT, html);
 			Checks.writeAtomically(target.resolve(page), html.toString());
 		}
 		Checks.writeAtomically(target.resolve("summary.csv"), ClassSummary.csv(dir, files, results));

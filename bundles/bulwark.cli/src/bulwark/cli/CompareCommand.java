@@ -44,6 +44,8 @@ final class CompareCommand implements Callable<Integer> {
 			newError |= c.newError();
 		}
 		out.flush();
+		spec.commandLine().getErr().println("bulwark: " + bulwark.check.report.Caution.TEXT);
+		spec.commandLine().getErr().flush();
 		return newError ? ExitCodes.FINDINGS : ExitCodes.CLEAN;
 	}
 }

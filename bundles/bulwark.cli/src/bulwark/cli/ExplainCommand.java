@@ -33,6 +33,8 @@ final class ExplainCommand implements Callable<Integer> {
 		}
 		out.print(render(page.get()));
 		out.flush();
+		err.println("bulwark: " + bulwark.check.report.Caution.TEXT);
+		err.flush();
 		return ExitCodes.CLEAN;
 	}
 

@@ -69,6 +69,8 @@ final class SolveCommand implements Callable<Integer> {
 			text(chosen, out);
 		}
 		out.flush();
+		err.println("bulwark: " + bulwark.check.report.Caution.TEXT);
+		err.flush();
 		return chosen.result() instanceof DcSolution ? ExitCodes.CLEAN : ExitCodes.NOT_CHECKED;
 	}
 
@@ -78,6 +80,7 @@ final class SolveCommand implements Callable<Integer> {
 		w.setIndent("  ");
 		w.beginObject();
 		w.name("case").value(outcome.faultCase().name());
+		w.name("caution").value(bulwark.check.report.Caution.TEXT);
 		if (outcome.result() instanceof DcSolution s) {
 			w.name("converged").value(true);
 			w.name("iterations").value(s.iterations());

@@ -78,9 +78,9 @@ final class ToleranceCommand implements Callable<Integer> {
 				progress(err));
 		StringWriter report = new StringWriter();
 		switch (format) {
-		case json -> ToleranceReport.json(result, file.toString(), Safety.CAUTION, report);
-		case html -> ToleranceReport.html(result, file.toString(), Safety.CAUTION, report);
-		default -> ToleranceReport.text(result, file.toString(), Safety.CAUTION, report);
+		case json -> ToleranceReport.json(result, file.toString(), bulwark.check.report.Caution.TEXT, report);
+		case html -> ToleranceReport.html(result, file.toString(), bulwark.check.report.Caution.TEXT, report);
+		default -> ToleranceReport.text(result, file.toString(), bulwark.check.report.Caution.TEXT, report);
 		}
 		out.print(report);
 		out.flush();

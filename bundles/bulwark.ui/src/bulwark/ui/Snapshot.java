@@ -63,6 +63,7 @@ final class Snapshot {
 				lines.add("marked line " + (editor.lineOf(a) + 1) + ": " + TextReport.line(result.file(), f));
 			}
 		}
+		lines.add(bulwark.check.report.Caution.TEXT);
 		try {
 			Screenshot.save(window.getShell(), file);
 			Files.write(Path.of(file + ".txt"), lines, StandardCharsets.UTF_8);

@@ -39,6 +39,15 @@ public final class JUnitReport {
 			xml.writeStartElement("testsuite");
 			xml.writeAttribute("name", r.file());
 			xml.writeAttribute("tests", Integer.toString(names.size()));
+			// the caution, as a property of each suite: CI pages show properties beside the cases
+			xml.writeCharacters("\n    ");
+			xml.writeStartElement("properties");
+			xml.writeCharacters("\n      ");
+			xml.writeEmptyElement("property");
+			xml.writeAttribute("name", "caution");
+			xml.writeAttribute("value", Caution.TEXT);
+			xml.writeCharacters("\n    ");
+			xml.writeEndElement();
 			for (String name : names) {
 				List<Finding> errors = r.findings().stream()
 						.filter(f -> f.severity() == Severity.ERROR && !f.waived() && group(f).equals(name))

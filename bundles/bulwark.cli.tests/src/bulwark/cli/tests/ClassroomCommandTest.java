@@ -46,7 +46,8 @@ class ClassroomCommandTest {
 		String cho = Files.readString(out.resolve("cho.html"));
 		assertTrue(cho.contains("<td>3:16</td><td>error</td><td>syntax</td>"), cho);
 		List<String> csv = Files.readAllLines(out.resolve("summary.csv"));
-		assertEquals(5, csv.size());
+		assertEquals(6, csv.size());
+		assertTrue(csv.get(5).contains("IEC 61010-1"), "the caution, last: " + csv.get(5));
 		assertTrue(csv.get(1).startsWith("ana.bulwark,\"'=SUM(A1), \"\"divider\"\"\",pass,0,"), csv.get(1));
 		assertTrue(csv.get(2).startsWith("ben.bulwark,") && csv.get(2).contains(",fail,1,"), csv.get(2));
 		assertTrue(csv.get(3).contains(",error,"), csv.get(3));

@@ -27,8 +27,7 @@ public class OpenGuide extends AbstractHandler {
 		if (!Files.isRegularFile(file)) {
 			MessageDialog.openInformation(window.getShell(), "Bulwark help",
 					"The documentation is in the docs folder of the Bulwark installation; " + file + " was not found.\n\n"
-							+ "Caution: mains and surge energy can kill. Bulwark checks a model, not a built board. Follow "
-							+ "IEC 61010-1 and local codes; sign-off belongs to a competent, licensed person.");
+							+ bulwark.check.report.Caution.TEXT);
 			return null;
 		}
 		try {

@@ -21,8 +21,7 @@ import bulwark.ui.Application;
 public class StartView extends ViewPart {
 	public static final String ID = "bulwark.ui.start";
 
-	static final String CAUTION = "Caution: mains and surge energy can kill. Bulwark checks a model, not a built "
-			+ "board: follow IEC 61010-1 and local codes, and leave sign-off to a competent, licensed person.";
+	static final String CAUTION = bulwark.check.report.Caution.TEXT;
 
 	private ScrolledComposite scroll;
 	private int links;

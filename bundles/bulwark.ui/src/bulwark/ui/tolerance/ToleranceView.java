@@ -52,8 +52,7 @@ import bulwark.check.policy.Distribution;
  */
 public class ToleranceView extends ViewPart {
 	public static final String ID = "bulwark.ui.tolerance";
-	static final String CAUTION = "Caution: mains and surge energy can kill. Bulwark checks a model, not a built board. "
-			+ "Follow IEC 61010-1 and local codes; sign-off belongs to a competent, licensed person.";
+	static final String CAUTION = bulwark.check.report.Caution.TEXT;
 
 	/** One row: a figure with its corner extremes and its Monte Carlo percentiles (empty where not run). */
 	public record Row(Figure figure, Corners.Range corners, Statistics statistics) {
