@@ -41,6 +41,7 @@ public final class CaseRunner {
 		DcSolver solver = new DcSolver();
 		Map<String, PreparedCircuit> prepared = new HashMap<>();
 		List<CaseOutcome> outcomes = new ArrayList<>();
+		DcSolution before = null;
 		for (FaultCase c : CaseGenerator.cases(design, policy)) {
 			bulwark.check.budget.Budget.checkpoint("case '" + c.name() + "'");
 			PreparedCircuit circuit = prepared.computeIfAbsent(shape(c), k -> DcSolver.prepare(apply(design.circuit(), c)));
@@ -55,7 +56,13 @@ public final class CaseRunner {
 			} else if (c.isMains()) {
 				outcomes.addAll(MainsRunner.run(design, c, circuit, solver));
 			} else {
-				outcomes.addAll(openFuses(design, solver, c, circuit, solver.solve(circuit)));
+				BalancePoints.Settled settled = BalancePoints.settle(solver, circuit, solver.solve(circuit), before);
+				FaultCase named = settled.note() == null ? c
+						: new FaultCase(c.name() + " (" + settled.note() + ")", c.kind(), c.added(), c.replaced(), c.from(), c.to());
+				if (before == null && settled.result() instanceof DcSolution s) {
+					before = s; // the first case, the design as it rests: the state the others start from
+				}
+				outcomes.addAll(openFuses(design, solver, named, circuit, settled.result()));
 			}
 		}
 		return outcomes;

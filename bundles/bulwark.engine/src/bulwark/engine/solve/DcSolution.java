@@ -26,6 +26,20 @@ public final class DcSolution implements DcResult {
 		this.strategy = strategy;
 	}
 
+	/**
+	 * A start for a solve of this circuit from another solution's net voltages (of a circuit with the same nets,
+	 * for example this one with a device added): the branch currents stay this solution's.
+	 */
+	public DcSolution withNetVoltagesOf(DcSolution other) {
+		double[] start = unknowns.clone();
+		double[] nets = netVoltages.clone();
+		for (int n = 1; n < nets.length && n < other.netVoltages.length; n++) {
+			start[n - 1] = other.netVoltages[n];
+			nets[n] = other.netVoltages[n];
+		}
+		return new DcSolution(circuit, nets, devices, iterations, strategy, start);
+	}
+
 	public Circuit circuit() {
 		return circuit;
 	}
