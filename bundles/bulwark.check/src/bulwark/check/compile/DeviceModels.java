@@ -60,7 +60,8 @@ final class DeviceModels {
 		ComparatorModel base = ComparatorModel.GENERIC;
 		return new ComparatorModel(values.parameter(part, "gain").orElse(base.gain()),
 				values.parameter(part, "resistance").orElse(base.outputOhms()),
-				values.parameter(part, "quiescent").orElse(base.quiescentAmps()), false, base.clamp());
+				values.parameter(part, "quiescent").orElse(base.quiescentAmps()),
+				Settings.word(part, "output").map("open_drain"::equals).orElse(false), base.clamp());
 	}
 
 	static MosfetModel mosfet(Part part, Values values) {

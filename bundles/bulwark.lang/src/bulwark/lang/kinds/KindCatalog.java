@@ -77,7 +77,9 @@ public final class KindCatalog {
 			List.of("in_plus", "in_minus", "out", "supply_plus", "supply_minus"),
 			List.of(new SettingSpec("gain", null, false, "open-loop gain at the switching point (1e5 when omitted)"),
 					new SettingSpec("resistance", Unit.OHM, false, "output resistance (50 Ω when omitted)"),
-					new SettingSpec("quiescent", Unit.AMPERE, false, "supply current with no load (10 µA when omitted)")),
+					new SettingSpec("quiescent", Unit.AMPERE, false, "supply current with no load (10 µA when omitted)"),
+					SettingSpec.word("output", "push_pull (when omitted) drives both ways; open_drain only pulls down, "
+							+ "through its resistance, and needs a pull-up", List.of("push_pull", "open_drain"))),
 			List.of(new SettingSpec("input_margin", Unit.VOLT, false, "absolute-maximum input beyond either rail"),
 					new SettingSpec("clamp", Unit.AMPERE, false, "rated input clamp current"),
 					new SettingSpec("supply", Unit.VOLT, false, "rated supply voltage"),
