@@ -18,6 +18,7 @@ import bulwark.engine.circuit.Mosfet;
 import bulwark.engine.circuit.Mosfet.Channel;
 import bulwark.engine.circuit.Potentiometer;
 import bulwark.engine.circuit.Protector;
+import bulwark.engine.circuit.CurrentSource;
 import bulwark.engine.circuit.Resistor;
 import bulwark.engine.circuit.VoltageSource;
 import bulwark.lang.design.Design;
@@ -65,6 +66,11 @@ public final class DesignCompiler {
 			case SOURCE:
 				builder.add(new VoltageSource(part.getName(), pin(builder, part, "plus"), pin(builder, part, "minus"),
 						required(values, part, "voltage"), values.parameter(part, "resistance").orElse(0.0)));
+				break;
+			case CURRENT_SOURCE:
+				// the engine's source drives its current out of its second pin: plus
+				builder.add(new CurrentSource(part.getName(), pin(builder, part, "minus"), pin(builder, part, "plus"),
+						required(values, part, "current")));
 				break;
 			case BATTERY:
 				builder.add(new VoltageSource(part.getName(), pin(builder, part, "plus"), pin(builder, part, "minus"),

@@ -60,7 +60,8 @@ public final class StressCatalog {
 			Map.entry(PartKind.RESETTABLE_FUSE, List.of(VOLTAGE)),
 			Map.entry(PartKind.INDICATOR, List.of(POWER, VOLTAGE)),
 			Map.entry(PartKind.BATTERY, List.of(CHARGE)),
-			Map.entry(PartKind.SOURCE, List.of()));
+			Map.entry(PartKind.SOURCE, List.of()),
+			Map.entry(PartKind.CURRENT_SOURCE, List.of()));
 
 	private StressCatalog() {
 	}

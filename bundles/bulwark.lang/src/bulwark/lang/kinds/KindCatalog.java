@@ -25,6 +25,9 @@ public final class KindCatalog {
 			List.of(new SettingSpec("voltage", Unit.VOLT, true, "DC voltage of plus against minus"),
 					new SettingSpec("resistance", Unit.OHM, false, "internal resistance (0 Ω when omitted)")),
 			List.of());
+	/** An ideal current source: its current leaves by plus into the circuit and returns by minus. */
+	private static final KindSpec CURRENT_SOURCE = new KindSpec("current_source", List.of("plus", "minus"),
+			List.of(new SettingSpec("current", Unit.AMPERE, true, "current out of plus into the circuit")), List.of());
 	private static final KindSpec BATTERY = new KindSpec("battery", List.of("plus", "minus"),
 			List.of(new SettingSpec("emf", Unit.VOLT, true, "open-circuit voltage"),
 					new SettingSpec("resistance", Unit.OHM, false, "internal resistance (0 Ω when omitted)"),
@@ -141,6 +144,8 @@ public final class KindCatalog {
 			return RESISTOR;
 		case SOURCE:
 			return SOURCE;
+		case CURRENT_SOURCE:
+			return CURRENT_SOURCE;
 		case BATTERY:
 			return BATTERY;
 		case DIODE:
