@@ -3,14 +3,10 @@ package bulwark.check.tests;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.util.List;
 
-import org.eclipse.xtext.util.CancelIndicator;
 import org.junit.jupiter.api.Test;
 
-import bulwark.check.Preparation;
 import bulwark.check.cases.CaseOutcome;
-import bulwark.check.compile.CaseRunner;
 import bulwark.engine.solve.DcSolution;
 
 /**
@@ -24,17 +20,9 @@ class BalancePointTest {
 	private static final String BALANCED = HysteresisRuleTest.SCHMITT.replace(" #! hysteresis", "")
 			+ "case \"probe on 10 kΩ\" { connect 10 kΩ from TIP to COM }\n";
 
-	private static List<CaseOutcome> outcomes(String text) {
-		Preparation p = Fixtures.checker().prepare(text, "fixture.bulwark", CancelIndicator.NullImpl);
-		if (!(p instanceof Preparation.Ready ready)) {
-			throw new AssertionError("not prepared: " + p);
-		}
-		return CaseRunner.run(ready.design().compiled(), ready.design().policy());
-	}
-
 	@Test
 	void anUnstableBalanceIsLeftForTheStateTheCircuitReaches() {
-		CaseOutcome probe = outcomes(BALANCED).stream().filter(o -> o.faultCase().name().startsWith("probe on 10 kΩ"))
+		CaseOutcome probe = Fixtures.outcomes(BALANCED).stream().filter(o -> o.faultCase().name().startsWith("probe on 10 kΩ"))
 				.findFirst().orElseThrow();
 		DcSolution s = (DcSolution) probe.result();
 		var u1 = s.device("U1");
@@ -46,7 +34,7 @@ class BalancePointTest {
 	@Test
 	void aStableOperatingPointIsLeftAlone() {
 		// the open terminals: the output is at a rail, nothing to settle, the case keeps its name
-		CaseOutcome open = outcomes(BALANCED).get(0);
+		CaseOutcome open = Fixtures.outcomes(BALANCED).get(0);
 		assertTrue(!open.faultCase().name().contains("balance point"), open.faultCase().name());
 		assertTrue(((DcSolution) open.result()).device("U1").pinVoltage("out") > 2.9);
 	}

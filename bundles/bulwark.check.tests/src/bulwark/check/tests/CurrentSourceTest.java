@@ -3,13 +3,10 @@ package bulwark.check.tests;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 
-import org.eclipse.xtext.util.CancelIndicator;
 import org.junit.jupiter.api.Test;
 
 import bulwark.check.DesignResult;
-import bulwark.check.Preparation;
 import bulwark.check.Status;
-import bulwark.check.compile.CaseRunner;
 import bulwark.engine.solve.DcSolution;
 
 /** A `current_source` drives its current out of plus: 1 mA into 1 kΩ stands at 1 V [Ohm's law]. */
@@ -24,11 +21,7 @@ class CurrentSourceTest {
 
 	@Test
 	void itsCurrentLeavesByPlus() {
-		Preparation p = Fixtures.checker().prepare(DESIGN, "fixture.bulwark", CancelIndicator.NullImpl);
-		if (!(p instanceof Preparation.Ready ready)) {
-			throw new AssertionError("not prepared: " + p);
-		}
-		DcSolution s = (DcSolution) CaseRunner.run(ready.design().compiled(), ready.design().policy()).get(0).result();
+		DcSolution s = (DcSolution) Fixtures.outcomes(DESIGN).get(0).result();
 		assertEquals(1.0, s.voltage("a"), 1e-9);
 		assertEquals(1e-3, s.device("R1").current(), 1e-12);
 		DesignResult r = Fixtures.check(DESIGN);

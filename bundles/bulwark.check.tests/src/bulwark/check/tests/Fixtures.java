@@ -179,6 +179,15 @@ final class Fixtures {
 		return list.get(0);
 	}
 
+	/** The outcomes of the design's cases as the check solves them, under its own policy (for engine-level figures). */
+	static java.util.List<bulwark.check.cases.CaseOutcome> outcomes(String text) {
+		bulwark.check.Preparation p = checker().prepare(text, "fixture.bulwark", CancelIndicator.NullImpl);
+		if (!(p instanceof bulwark.check.Preparation.Ready ready)) {
+			throw new AssertionError("not prepared: " + p);
+		}
+		return bulwark.check.compile.CaseRunner.run(ready.design().compiled(), ready.design().policy());
+	}
+
 	static Path root() {
 		return Path.of(System.getProperty("bulwark.root", "../.."));
 	}

@@ -2,11 +2,8 @@ package bulwark.check.tests;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import org.eclipse.xtext.util.CancelIndicator;
 import org.junit.jupiter.api.Test;
 
-import bulwark.check.Preparation;
-import bulwark.check.compile.CaseRunner;
 import bulwark.engine.solve.DcSolution;
 
 /**
@@ -33,11 +30,7 @@ class OpenDrainOutputTest {
 	}
 
 	private static double out(String input) {
-		Preparation p = Fixtures.checker().prepare(design(input), "fixture.bulwark", CancelIndicator.NullImpl);
-		if (!(p instanceof Preparation.Ready ready)) {
-			throw new AssertionError("not prepared: " + p);
-		}
-		DcSolution normal = (DcSolution) CaseRunner.run(ready.design().compiled(), ready.design().policy()).get(0).result();
+		DcSolution normal = (DcSolution) Fixtures.outcomes(design(input)).get(0).result();
 		return normal.device("U1").pinVoltage("out");
 	}
 
