@@ -60,6 +60,16 @@ class ValidationTest {
 	}
 
 	@Test
+	void aNumberTooLargeToComputeWithIsALocatedError() throws Exception {
+		validation.assertError(parse("resistor R1 (a: a, b: gnd) { value 1" + "0".repeat(400) + " Ω }"),
+				DesignPackage.Literals.QUANTITY, IssueCodes.VALUE_OUT_OF_RANGE, "is too large to compute with");
+		validation.assertError(parse("resistor R1 (a: a, b: gnd) { value 1e400 Ω }"), DesignPackage.Literals.QUANTITY,
+				IssueCodes.VALUE_OUT_OF_RANGE, "is too large to compute with");
+		validation.assertError(parse("diode D1 (anode: a, cathode: gnd) { saturation 1e-400 A }"),
+				DesignPackage.Literals.QUANTITY, IssueCodes.VALUE_OUT_OF_RANGE, "is too small to compute with");
+	}
+
+	@Test
 	void unitOfTheWrongQuantity() throws Exception {
 		validation.assertError(parse("resistor R1 (a: a, b: gnd) { value 10 mA }"), DesignPackage.Literals.QUANTITY,
 				IssueCodes.WRONG_UNIT, "value is a resistance (Ω), not a current (A)");

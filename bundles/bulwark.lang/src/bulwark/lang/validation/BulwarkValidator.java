@@ -219,6 +219,31 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 		}
 	}
 
+	/**
+	 * A number the check can compute with: one too large for a double (a 1 followed by 400 zeros, 1e400) or
+	 * so small that it reads as nought would become infinity or zero in the solve, so it is refused here, at
+	 * its place, rather than later as a fault of no place.
+	 */
+	@Check
+	public void computableNumber(Quantity q) {
+		if (q.getMagnitude() == null) {
+			return;
+		}
+		double magnitude = Double.parseDouble(q.getMagnitude());
+		double factor = q.getUnit() == null ? 1 : UnitParser.parse(q.getUnit()).map(ScaledUnit::factor).orElse(1.0);
+		double si = magnitude * factor;
+		String shown = q.getMagnitude().length() > 16 ? q.getMagnitude().substring(0, 12) + "…" : q.getMagnitude();
+		if (Double.isInfinite(si)) {
+			error("the number " + shown + " is too large to compute with: write it with a prefix or an exponent "
+					+ "(at most about 1e300 in SI units)", q, DesignPackage.Literals.QUANTITY__MAGNITUDE,
+					IssueCodes.VALUE_OUT_OF_RANGE);
+		} else if (si == 0 && q.getMagnitude().split("[eE]")[0].matches(".*[1-9].*")
+				|| Math.abs(si) > 0 && Math.abs(si) < 1e-300) {
+			error("the number " + shown + " is too small to compute with: write 0, or a value above about 1e-300 "
+					+ "in SI units", q, DesignPackage.Literals.QUANTITY__MAGNITUDE, IssueCodes.VALUE_OUT_OF_RANGE);
+		}
+	}
+
 	/** A case's quantity: its unit (V or Ω), and more than zero unless it may be negative (a voltage). */
 	private void quantityOf(Quantity q, Unit unit, String what, org.eclipse.emf.ecore.EStructuralFeature feature,
 			boolean mayBeNegative) {
