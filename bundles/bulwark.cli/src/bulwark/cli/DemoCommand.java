@@ -30,7 +30,6 @@ final class DemoCommand implements Callable<Integer> {
 					+ " (run it with the bulwark launcher of the installation)");
 			return ExitCodes.USAGE;
 		}
-		spec.commandLine().getErr().println(bulwark.check.report.Caution.TEXT);
 		return Checks.run(List.of(examples), options, spec.commandLine().getOut(), spec.commandLine().getErr());
 	}
 }

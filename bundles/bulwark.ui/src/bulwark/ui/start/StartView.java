@@ -21,7 +21,6 @@ import bulwark.ui.Application;
 public class StartView extends ViewPart {
 	public static final String ID = "bulwark.ui.start";
 
-	static final String CAUTION = bulwark.check.report.Caution.TEXT;
 
 	private ScrolledComposite scroll;
 	private int links;
@@ -60,7 +59,7 @@ public class StartView extends ViewPart {
 		link(body, "<a>Rule catalogue</a>", () -> command("bulwark.ui.help.rule-catalogue"));
 
 		heading(body, "Safety");
-		paragraph(body, CAUTION);
+		paragraph(body, bulwark.check.report.Caution.TEXT);
 
 		scroll.setContent(body);
 		scroll.setExpandHorizontal(true);

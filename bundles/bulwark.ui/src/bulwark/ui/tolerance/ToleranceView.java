@@ -52,7 +52,6 @@ import bulwark.check.policy.Distribution;
  */
 public class ToleranceView extends ViewPart {
 	public static final String ID = "bulwark.ui.tolerance";
-	static final String CAUTION = bulwark.check.report.Caution.TEXT;
 
 	/** One row: a figure with its corner extremes and its Monte Carlo percentiles (empty where not run). */
 	public record Row(Figure figure, Corners.Range corners, Statistics statistics) {
@@ -270,9 +269,9 @@ public class ToleranceView extends ViewPart {
 	public void save(Path file) throws IOException {
 		StringWriter w = new StringWriter();
 		if (file.toString().endsWith(".txt")) {
-			ToleranceReport.text(result, resultFile, CAUTION, w);
+			ToleranceReport.text(result, resultFile, bulwark.check.report.Caution.TEXT, w);
 		} else {
-			ToleranceReport.html(result, resultFile, CAUTION, w);
+			ToleranceReport.html(result, resultFile, bulwark.check.report.Caution.TEXT, w);
 		}
 		AtomicFile.write(file, w.toString(), false);
 	}
