@@ -6,7 +6,8 @@ import java.util.Locale;
 /**
  * The time a check of one design may take. The check passes checkpoints (between cases, terminal pairs,
  * rules); past the deadline the next one throws {@link OverBudget}, and the design is reported as not
- * checked — the batch goes on. Held per thread, so parallel checks each have their own.
+ * checked — the batch goes on. Held per thread, so parallel checks each have their own; the threads one
+ * check shares its cases with run {@link #within} its budget.
  */
 public final class Budget {
 	/** The default budget per design [common practice: far beyond any input stage's check, which takes milliseconds]. */
@@ -37,6 +38,30 @@ public final class Budget {
 
 	public static void stop() {
 		CURRENT.remove();
+	}
+
+	/** The running check's budget on this thread, to hand to the threads that share its work (null outside a check). */
+	public static Budget current() {
+		return CURRENT.get();
+	}
+
+	/** Runs part of a check on this thread under the check's budget (none when {@code budget} is null). */
+	public static void within(Budget budget, Runnable work) {
+		Budget mine = CURRENT.get();
+		if (budget == null) {
+			CURRENT.remove();
+		} else {
+			CURRENT.set(budget);
+		}
+		try {
+			work.run();
+		} finally {
+			if (mine == null) {
+				CURRENT.remove();
+			} else {
+				CURRENT.set(mine);
+			}
+		}
 	}
 
 	/** Throws {@link OverBudget} when the running check is past its deadline; nothing outside a check. */

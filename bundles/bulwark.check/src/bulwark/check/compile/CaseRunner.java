@@ -1,11 +1,13 @@
 package bulwark.check.compile;
 
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
+import bulwark.check.budget.Budget;
 import bulwark.check.policy.ReviewPolicy;
 import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Device;
@@ -22,8 +24,9 @@ import bulwark.check.parts.FuseRatings;
 /**
  * Solves a compiled design in each of its cases. Cases that add the same devices on the same nets (both
  * polarities and every level across one pair of terminals) share one prepared circuit, so the symbolic work
- * is done once per pair. A fuse carrying more than its rated current opens: the case is solved again with
- * it open, which is what the rest of the circuit has to survive.
+ * is done once per pair; the mains and surge cases, each a run of many solves, share the machine's cores. A
+ * fuse carrying more than its rated current opens: the case is solved again with it open, which is what the
+ * rest of the circuit has to survive.
  */
 public final class CaseRunner {
 	/** An open fuse: a gap that still lets the solver see both of its nets [closed form: 1 nA at 1 V]. */
@@ -40,10 +43,16 @@ public final class CaseRunner {
 	public static List<CaseOutcome> run(CompiledDesign design, ReviewPolicy policy) {
 		DcSolver solver = new DcSolver();
 		Map<String, PreparedCircuit> prepared = new HashMap<>();
-		List<CaseOutcome> outcomes = new ArrayList<>();
+		List<FaultCase> cases = CaseGenerator.cases(design, policy);
+		List<List<CaseOutcome>> byCase = new ArrayList<>(Collections.nCopies(cases.size(), List.of()));
+		PreparedCircuit[] circuits = new PreparedCircuit[cases.size()];
+		List<Integer> waveforms = new ArrayList<>();
 		DcSolution before = null;
-		for (FaultCase c : CaseGenerator.cases(design, policy)) {
-			bulwark.check.budget.Budget.checkpoint("case '" + c.name() + "'");
+		// the DC cases in order (each may start from the state of the design at rest, the first one's); the
+		// mains and surge cases after them, in parallel: they share nothing but the prepared circuits
+		for (int i = 0; i < cases.size(); i++) {
+			FaultCase c = cases.get(i);
+			Budget.checkpoint("case '" + c.name() + "'");
 			PreparedCircuit circuit = prepared.computeIfAbsent(shape(c), k -> DcSolver.prepare(apply(design.circuit(), c)));
 			for (Device d : c.added()) {
 				circuit = circuit.with(d.name(), d);
@@ -51,20 +60,35 @@ public final class CaseRunner {
 			for (Map.Entry<String, Device> r : c.replaced().entrySet()) {
 				circuit = circuit.with(r.getKey(), r.getValue());
 			}
-			if (c.isSurge()) {
-				outcomes.addAll(SurgeRunner.run(design, c, circuit, solver));
-			} else if (c.isMains()) {
-				outcomes.addAll(MainsRunner.run(design, c, circuit, solver));
-			} else {
-				BalancePoints.Settled settled = BalancePoints.settle(solver, circuit, solver.solve(circuit), before);
-				FaultCase named = settled.note() == null ? c
-						: new FaultCase(c.name() + " (" + settled.note() + ")", c.kind(), c.added(), c.replaced(), c.from(), c.to());
-				if (before == null && settled.result() instanceof DcSolution s) {
-					before = s; // the first case, the design as it rests: the state the others start from
-				}
-				outcomes.addAll(openFuses(design, solver, named, circuit, settled.result()));
+			circuits[i] = circuit;
+			if (c.isSurge() || c.isMains()) {
+				waveforms.add(i);
+				continue;
 			}
+			BalancePoints.Settled settled = BalancePoints.settle(solver, circuit, solver.solve(circuit), before);
+			FaultCase named = settled.note() == null ? c
+					: new FaultCase(c.name() + " (" + settled.note() + ")", c.kind(), c.added(), c.replaced(), c.from(), c.to());
+			if (before == null && settled.result() instanceof DcSolution s) {
+				before = s; // the first case, the design as it rests: the state the others start from
+			}
+			byCase.set(i, openFuses(design, solver, named, circuit, settled.result()));
 		}
+		Budget budget = Budget.current();
+		List<List<CaseOutcome>> solved = waveforms.parallelStream().map(i -> {
+			List<List<CaseOutcome>> one = new ArrayList<>(1);
+			Budget.within(budget, () -> {
+				FaultCase c = cases.get(i);
+				Budget.checkpoint("case '" + c.name() + "'");
+				one.add(c.isSurge() ? SurgeRunner.run(design, c, circuits[i], solver)
+						: MainsRunner.run(design, c, circuits[i], solver));
+			});
+			return one.get(0);
+		}).toList();
+		for (int k = 0; k < waveforms.size(); k++) {
+			byCase.set(waveforms.get(k), solved.get(k));
+		}
+		List<CaseOutcome> outcomes = new ArrayList<>();
+		byCase.forEach(outcomes::addAll);
 		return outcomes;
 	}
 

@@ -12,6 +12,7 @@ import bulwark.check.parts.FuseRatings;
 import bulwark.check.stress.Measure;
 import bulwark.check.stress.StressCatalog;
 import bulwark.engine.circuit.Capacitor;
+import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Device;
 import bulwark.engine.circuit.Inductor;
 import bulwark.engine.circuit.Fuse;
@@ -370,7 +371,9 @@ final class MainsRunner {
 			}
 		}
 		chosen.add(crest);
+		Circuit circuit = cycle.points.get(0).circuit();
 		for (Part part : design.parts().values()) {
+			int device = circuit.deviceIndex(part.getName());
 			for (Measure m : StressCatalog.of(part.getKind())) {
 				if (!m.appliesIn(c, part.getName())) {
 					continue;
@@ -378,7 +381,7 @@ final class MainsRunner {
 				int best = 0;
 				double bestValue = Double.NEGATIVE_INFINITY;
 				for (int i = 0; i < cycle.points.size(); i++) {
-					double v = m.of(cycle.points.get(i).device(part.getName()));
+					double v = m.of(cycle.points.get(i).device(device));
 					if (v > bestValue) {
 						bestValue = v;
 						best = i;
@@ -408,8 +411,7 @@ final class MainsRunner {
 
 	/** The source's EMF at the i-th point, positive when the case's first terminal is positive. */
 	private static double sourceVolts(Cycle cycle, VoltageSource source, int i) {
-		return cycle.points.get(i).device(source.name()).pinVoltages()[0]
-				- cycle.points.get(i).device(source.name()).pinVoltages()[1];
+		return cycle.points.get(i).device(source.name()).voltage();
 	}
 
 	/**
@@ -417,18 +419,17 @@ final class MainsRunner {
 	 * content a sweep resolves), or the trapezoidal rule over a transient's accepted points, over the period.
 	 */
 	private static Map<String, Double> averagePower(CompiledDesign design, Cycle cycle) {
-		// one pass over each point's devices, rather than a look-up per part and point
 		int n = cycle.points.size();
 		Map<String, double[]> powers = new LinkedHashMap<>();
 		for (String part : design.parts().keySet()) {
 			powers.put(part, new double[n]);
 		}
-		for (int i = 0; i < n; i++) {
-			for (var d : cycle.points.get(i).devices().entrySet()) {
-				double[] p = powers.get(d.getKey());
-				if (p != null) {
-					p[i] = d.getValue().power();
-				}
+		Circuit circuit = cycle.points.get(0).circuit();
+		for (var e : powers.entrySet()) {
+			int device = circuit.deviceIndex(e.getKey());
+			double[] p = e.getValue();
+			for (int i = 0; i < n; i++) {
+				p[i] = cycle.points.get(i).device(device).power();
 			}
 		}
 		Map<String, Double> average = new LinkedHashMap<>();

@@ -31,8 +31,8 @@ public final class DefaultPolicy {
 			new ReviewPolicy.HysteresisMinimum(Optional.of(MINIMUM_HYSTERESIS_VOLTS), Optional.empty()), Map.of(),
 			new ReviewPolicy.WaiverDemands(true, true), Distribution.UNIFORM);
 
-	static Map<String, Derating> derating() {
-		Map<String, Derating> d = new LinkedHashMap<>();
+	static Map<ReviewPolicy.RatingKey, Derating> derating() {
+		Map<ReviewPolicy.RatingKey, Derating> d = new LinkedHashMap<>();
 		d.put(ReviewPolicy.key(PartKind.RESISTOR, "power"), new Derating(0.6, NASA + ", film resistors"));
 		d.put(ReviewPolicy.key(PartKind.RESISTOR, "voltage"), new Derating(0.8, NASA + ", film resistors"));
 		d.put(ReviewPolicy.key(PartKind.POTENTIOMETER, "power"), new Derating(0.6, NASA + ", film resistors"));

@@ -50,7 +50,7 @@ public final class PolicyCompiler {
 		boolean noMains = false;
 		List<Double> levels = new ArrayList<>();
 		List<SurgeLevel> surges = new ArrayList<>();
-		Map<String, Derating> derating = new LinkedHashMap<>(base.derating());
+		Map<ReviewPolicy.RatingKey, Derating> derating = new LinkedHashMap<>(base.derating());
 		Map<RuleId, Severity> severities = new HashMap<>(base.severities());
 		Optional<Double> minVolts = base.minimumHysteresisVolts();
 		Optional<Double> minOhms = base.minimumHysteresisOhms();

@@ -13,7 +13,7 @@ import bulwark.lang.design.PartKind;
  * each rating a part may use, how much hysteresis a comparator must have, which rules are raised or lowered,
  * what every waiver must carry, and how Monte Carlo draws toleranced values. {@link DefaultPolicy} gives the values used when no policy is named.
  */
-public record ReviewPolicy(String title, Abuse abuse, Map<String, Derating> derating, HysteresisMinimum hysteresis,
+public record ReviewPolicy(String title, Abuse abuse, Map<RatingKey, Derating> derating, HysteresisMinimum hysteresis,
 		Map<RuleId, Severity> severities, WaiverDemands waivers, Distribution distribution) {
 
 	public ReviewPolicy {
@@ -110,8 +110,13 @@ public record ReviewPolicy(String title, Abuse abuse, Map<String, Derating> dera
 		public static final Derating NONE = new Derating(1.0, "no derating");
 	}
 
-	public static String key(PartKind kind, String rating) {
-		return kind.getLiteral() + " " + rating;
+	/** The derating table's key of one rating of one kind. */
+	public static RatingKey key(PartKind kind, String rating) {
+		return new RatingKey(kind, rating);
+	}
+
+	/** One rating of one kind of part, as the derating table is keyed. */
+	public record RatingKey(PartKind kind, String rating) {
 	}
 
 	/** The derating of one rating of one kind; {@link Derating#NONE} when the policy sets none. */

@@ -36,15 +36,15 @@ public record Measure(String rating, String what, String unit, ToDoubleFunction<
 		return !(notWhenReplaced && c.replaced().containsKey(part));
 	}
 
-	/**
-	 * The figure the rating is judged on in this case, NaN when the case does not judge it: the value at the
-	 * solved instant, except a power rating under mains, judged on the part's power averaged over the cycle.
-	 */
 	/** The figure judged of a part in a solved case (see below). */
 	public double judged(SolvedCase c, String part) {
 		return judged(c.faultCase(), c.solution().device(part), c.averagePower(), part);
 	}
 
+	/**
+	 * The figure the rating is judged on in this case, NaN when the case does not judge it: the value at the
+	 * solved instant, except a power rating under mains, judged on the part's power averaged over the cycle.
+	 */
 	public double judged(FaultCase c, OperatingPoint point, java.util.Map<String, Double> averagePower, String part) {
 		if (c.isMains() && isPower()) {
 			Double average = averagePower.get(part);

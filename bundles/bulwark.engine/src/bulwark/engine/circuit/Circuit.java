@@ -16,10 +16,31 @@ public final class Circuit {
 
 	private final List<String> netNames;
 	private final List<Device> devices;
+	/** Where each device and net is, by name: built once, shared by copies that keep the names. */
+	private final Map<String, Integer> deviceIndices;
+	private final Map<String, Integer> netIndices;
 
 	private Circuit(List<String> netNames, List<Device> devices) {
 		this.netNames = Collections.unmodifiableList(new ArrayList<>(netNames));
 		this.devices = Collections.unmodifiableList(new ArrayList<>(devices));
+		this.deviceIndices = indices(this.devices.stream().map(Device::name).toList());
+		this.netIndices = indices(this.netNames);
+	}
+
+	private Circuit(Circuit names, List<Device> devices) {
+		this.netNames = names.netNames;
+		this.devices = Collections.unmodifiableList(devices);
+		this.deviceIndices = names.deviceIndices;
+		this.netIndices = names.netIndices;
+	}
+
+	/** Name → first index (a name used twice keeps its first place, as a search from the start would find). */
+	private static Map<String, Integer> indices(List<String> names) {
+		Map<String, Integer> map = new java.util.HashMap<>();
+		for (int i = 0; i < names.size(); i++) {
+			map.putIfAbsent(names.get(i), i);
+		}
+		return Collections.unmodifiableMap(map);
 	}
 
 	/** Starts a circuit whose reference net has the given name. */
@@ -50,22 +71,18 @@ public final class Circuit {
 	public Circuit withDevice(int index, Device replacement) {
 		List<Device> all = new ArrayList<>(devices);
 		all.set(index, replacement);
-		return new Circuit(netNames, all);
+		return replacement.name().equals(devices.get(index).name()) ? new Circuit(this, all) : new Circuit(netNames, all);
 	}
 
 	/** Index of the named device, or −1. */
 	public int deviceIndex(String name) {
-		for (int i = 0; i < devices.size(); i++) {
-			if (devices.get(i).name().equals(name)) {
-				return i;
-			}
-		}
-		return -1;
+		Integer i = deviceIndices.get(name);
+		return i == null ? -1 : i;
 	}
 
 	public int netIndex(String name) {
-		int i = netNames.indexOf(name);
-		if (i < 0) {
+		Integer i = netIndices.get(name);
+		if (i == null) {
 			throw new IllegalArgumentException("no net named " + name);
 		}
 		return i;

@@ -1,27 +1,29 @@
 package bulwark.engine.circuit;
 
 import bulwark.engine.device.ComparatorModel;
+import bulwark.engine.device.ComparatorStage;
 import bulwark.engine.mna.SolutionView;
 import bulwark.engine.mna.Stamp;
 
 /**
  * A comparator with pins in_plus, in_minus, out, supply_plus, supply_minus; see {@link ComparatorModel}.
- * The four input clamp junctions are stamped like diodes, with junction limiting; the output stage's
- * linearisation is taken by central differences, because its currents depend smoothly on all five pins.
+ * The four input clamp junctions are stamped like diodes, with junction limiting; the output stage
+ * ({@link ComparatorStage}) is linearised with its exact derivatives, on all five pins.
  */
 public final class Comparator extends MultiTerminal {
-	private static final int INP = 0, INN = 1, OUT = 2, VP = 3, VN = 4;
-	/** Relative step of the central differences of the output stage. */
-	private static final double DIFFERENCE_STEP = 1e-7;
-	/** Current scale over which the output's return current moves from one rail to the other. */
-	private static final double RETURN_SPLIT = 1e-6;
+	private static final int INP = ComparatorStage.IN_PLUS, INN = ComparatorStage.IN_MINUS, OUT = ComparatorStage.OUT,
+			VP = ComparatorStage.SUPPLY_PLUS, VN = ComparatorStage.SUPPLY_MINUS;
+	/** The pins whose equations the output stage's currents enter, in the stage's order. */
+	private static final int[] STAGE_ROWS = { OUT, VP, VN };
 
 	private final ComparatorModel model;
+	private final ComparatorStage stage;
 
 	public Comparator(String name, int inPlus, int inMinus, int out, int supplyPlus, int supplyMinus,
 			ComparatorModel model) {
 		super(name, inPlus, inMinus, out, supplyPlus, supplyMinus);
 		this.model = model;
+		this.stage = new ComparatorStage(model);
 	}
 
 	@Override
@@ -61,28 +63,17 @@ public final class Comparator extends MultiTerminal {
 		clamp(s, state, 3, VN, INN);
 		limitInputDifference(s, v, state);
 		// output stage: currents into out, supply_plus, supply_minus as functions of all five pin voltages
-		double[] i0 = stage(v);
-		double[][] g = new double[3][5];
-		for (int k = 0; k < 5; k++) {
-			double h = DIFFERENCE_STEP * Math.max(1, Math.abs(v[k]));
-			double keep = v[k];
-			v[k] = keep + h;
-			double[] up = stage(v);
-			v[k] = keep - h;
-			double[] down = stage(v);
-			v[k] = keep;
-			for (int r = 0; r < 3; r++) {
-				g[r][k] = (up[r] - down[r]) / (2 * h);
-			}
-		}
-		int[] rows = { OUT, VP, VN };
+		double[] i0 = new double[3];
+		double[] g = new double[15];
+		stage.evaluate(v, i0, g);
 		for (int r = 0; r < 3; r++) {
+			int row = pins[STAGE_ROWS[r]];
 			double linear = 0;
 			for (int k = 0; k < 5; k++) {
-				s.netNet(pins[rows[r]], pins[k], g[r][k]);
-				linear += g[r][k] * v[k];
+				s.netNet(row, pins[k], g[5 * r + k]);
+				linear += g[5 * r + k] * v[k];
 			}
-			s.injectNet(pins[rows[r]], -(i0[r] - linear));
+			s.injectNet(row, -(i0[r] - linear));
 		}
 	}
 
@@ -115,26 +106,6 @@ public final class Comparator extends MultiTerminal {
 		JunctionStamp.stamp(s, model.clamp(), pins[a], pins[k], state, 2 * which);
 	}
 
-	/** Currents into out, supply_plus and supply_minus from the output stage and the quiescent current. */
-	private double[] stage(double[] v) {
-		double span = v[VP] - v[VN];
-		double vd = v[INP] - v[INN];
-		double out;
-		if (model.openDrain()) {
-			// on (sinking to the lower rail) when vin+ < vin−
-			double on = (1 - Math.tanh(2 * model.gain() * vd / Math.max(Math.abs(span), 1e-3))) / 2;
-			out = (v[OUT] - v[VN]) / model.outputOhms() * on;
-		} else {
-			double target = v[VN] + span * (1 + Math.tanh(2 * model.gain() * vd / Math.max(Math.abs(span), 1e-3))) / 2;
-			out = (v[OUT] - target) / model.outputOhms();
-		}
-		double sourced = -out; // current the output delivers into its load
-		double upper = (1 + Math.tanh(sourced / RETURN_SPLIT)) / 2;
-		double iPlus = model.quiescentAmps() + sourced * upper;
-		double iMinus = -model.quiescentAmps() + sourced * (1 - upper);
-		return new double[] { out, iPlus, iMinus };
-	}
-
 	@Override
 	public double[] pinCurrents(SolutionView x) {
 		double[] v = new double[5];
@@ -145,7 +116,8 @@ public final class Comparator extends MultiTerminal {
 		double c2 = model.clamp().current(v[VN] - v[INP]);
 		double c3 = model.clamp().current(v[INN] - v[VP]);
 		double c4 = model.clamp().current(v[VN] - v[INN]);
-		double[] st = stage(v);
+		double[] st = new double[3];
+		stage.evaluate(v, st, null);
 		double[] i = new double[5];
 		i[INP] = c1 - c2;
 		i[INN] = c3 - c4;

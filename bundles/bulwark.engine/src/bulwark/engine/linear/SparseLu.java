@@ -31,6 +31,7 @@ public final class SparseLu {
 	private int singularColumn = -1;
 	/** True once a full factorisation has fixed the pivots and the patterns of L and U. */
 	private boolean factored;
+	private int pivotSearches;
 	/** Scratch in pivot order for {@link #refactor}. */
 	private final double[] work;
 
@@ -55,6 +56,35 @@ public final class SparseLu {
 	}
 
 	/**
+	 * A factorisation that starts from the pivots and the L and U patterns of another of the same matrix
+	 * pattern and column order (an earlier solve of the same circuit), so that its first {@link #factor} is a
+	 * numerical refactorisation; it pivots afresh if a reused pivot has become small, as every refactorisation does.
+	 */
+	public SparseLu(SparseLu pivotsOf) {
+		this(pivotsOf.n, pivotsOf.q);
+		if (pivotsOf.factored) {
+			System.arraycopy(pivotsOf.pinv, 0, pinv, 0, n);
+			System.arraycopy(pivotsOf.lp, 0, lp, 0, n + 1);
+			System.arraycopy(pivotsOf.up, 0, up, 0, n + 1);
+			li = Arrays.copyOf(pivotsOf.li, pivotsOf.li.length);
+			lx = new double[li.length];
+			ui = Arrays.copyOf(pivotsOf.ui, pivotsOf.ui.length);
+			ux = new double[ui.length];
+			factored = true;
+		}
+	}
+
+	/** True once a factorisation succeeded, so that its pivots can seed another's. */
+	public boolean factored() {
+		return factored;
+	}
+
+	/** How many times this factorisation chose its pivots afresh (0 when it only ever refactored). */
+	public int pivotSearches() {
+		return pivotSearches;
+	}
+
+	/**
 	 * Factors A (not modified), reusing the pivots and the patterns of the last factorisation when it can
 	 * (A's pattern is the same at every Newton iterate), and pivoting afresh when a reused pivot has
 	 * become small. False when no usable pivot was found; see {@link #singularColumn()}.
@@ -63,6 +93,7 @@ public final class SparseLu {
 		if (factored && refactor(a)) {
 			return true;
 		}
+		pivotSearches++;
 		factored = fullFactor(a);
 		return factored;
 	}

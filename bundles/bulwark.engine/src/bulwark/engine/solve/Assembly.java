@@ -3,6 +3,7 @@ package bulwark.engine.solve;
 import java.util.Arrays;
 
 import bulwark.engine.linear.CscMatrix;
+import bulwark.engine.linear.SparseLu;
 import bulwark.engine.mna.SolutionView;
 import bulwark.engine.mna.Stamp;
 import bulwark.engine.mna.TransientStep;
@@ -15,6 +16,9 @@ final class Assembly implements Stamp, SolutionView {
 	private final Layout layout;
 	final CscMatrix matrix;
 	final double[] rhs;
+	/** The factorisation of this run's matrices, seeded with the pivots of the circuit's last solve. */
+	final SparseLu lu;
+	private int pivotSearchesKept;
 	private final double[][] states;
 	private double[] x;
 	private int device;
@@ -29,6 +33,7 @@ final class Assembly implements Stamp, SolutionView {
 		this.layout = layout;
 		matrix = layout.pattern.copy();
 		rhs = new double[layout.size];
+		lu = layout.pivots.fresh();
 		histories = new double[layout.devices.length][];
 		for (int i = 0; i < histories.length; i++) {
 			histories[i] = new double[layout.devices[i].historySize()];
@@ -49,17 +54,26 @@ final class Assembly implements Stamp, SolutionView {
 		limited = false;
 		matrix.clear();
 		Arrays.fill(rhs, 0);
-		cursor = 0;
 		for (device = 0; device < layout.devices.length; device++) {
+			cursor = layout.plan.deviceStart[device];
+			deviceEnd = layout.plan.deviceStart[device + 1];
 			layout.devices[device].stamp(this);
 		}
-		recording = false;
+		deviceEnd = 0;
 		if (nodeGmin > 0) {
 			for (int i = 0; i < layout.nodes; i++) {
 				add(i, i, nodeGmin);
 			}
 		}
 		return !limited;
+	}
+
+	/** After a converged run: lets later solves of the circuit start from its pivots, if it chose new ones. */
+	void keepPivots() {
+		if (lu.pivotSearches() != pivotSearchesKept) {
+			layout.pivots.keep(lu);
+			pivotSearchesKept = lu.pivotSearches();
+		}
 	}
 
 	/** Forgets the devices' memory of earlier iterates, before a fresh Newton run. */
@@ -154,44 +168,21 @@ final class Assembly implements Stamp, SolutionView {
 		add(layout.branchOffset[device] + k, layout.branchOffset[device] + j, value);
 	}
 
-	/**
-	 * Devices stamp the same places in the same order at every iterate, so the slots found by the first
-	 * assembly are replayed afterwards; each replayed call is checked against the recorded (row, column)
-	 * and falls back to a search when it differs.
-	 */
-	private int[] replayRow = new int[64], replayCol = new int[64], replaySlot = new int[64];
-	private int replayLength;
+	/** The next call of the present device in the layout's {@link StampPlan}, and the end of its stretch. */
 	private int cursor;
-	private boolean recording = true;
+	private int deviceEnd;
 
 	private void add(int row, int col, double value) {
-		int slot;
-		if (!recording && cursor < replayLength && replayRow[cursor] == row && replayCol[cursor] == col) {
-			slot = replaySlot[cursor++];
-		} else {
+		int slot = cursor < deviceEnd ? layout.plan.slotIf(cursor, row, col) : -1;
+		cursor++;
+		if (slot < 0) {
 			slot = matrix.slot(row, col);
-			if (recording) {
-				record(row, col, slot);
-			} else {
-				cursor++;
-			}
 		}
 		if (slot < 0) {
 			// a device stamped a place its dry run did not: a bug in that device, never a user error
 			throw new IllegalStateException(layout.devices[device].name() + " stamped outside its pattern");
 		}
 		matrix.addAt(slot, value);
-	}
-
-	private void record(int row, int col, int slot) {
-		if (replayLength == replayRow.length) {
-			replayRow = java.util.Arrays.copyOf(replayRow, 2 * replayLength);
-			replayCol = java.util.Arrays.copyOf(replayCol, 2 * replayLength);
-			replaySlot = java.util.Arrays.copyOf(replaySlot, 2 * replayLength);
-		}
-		replayRow[replayLength] = row;
-		replayCol[replayLength] = col;
-		replaySlot[replayLength++] = slot;
 	}
 
 	@Override

@@ -10,18 +10,20 @@ import bulwark.engine.circuit.Circuit;
 public final class DcSolution implements DcResult {
 	private final Circuit circuit;
 	private final double[] netVoltages;
-	private final Map<String, OperatingPoint> devices;
+	/** Every device's operating point, in the circuit's order. */
+	private final OperatingPoint[] points;
+	private Map<String, OperatingPoint> byName;
 	private final int iterations;
 	private final Strategy strategy;
 	/** Every unknown of the nodal equations, to start a neighbouring solve from (continuation). */
 	final double[] unknowns;
 
-	DcSolution(Circuit circuit, double[] netVoltages, Map<String, OperatingPoint> devices, int iterations,
-			Strategy strategy, double[] unknowns) {
+	DcSolution(Circuit circuit, double[] netVoltages, OperatingPoint[] points, int iterations, Strategy strategy,
+			double[] unknowns) {
 		this.unknowns = unknowns.clone();
 		this.circuit = circuit;
 		this.netVoltages = netVoltages.clone();
-		this.devices = Collections.unmodifiableMap(new LinkedHashMap<>(devices));
+		this.points = points;
 		this.iterations = iterations;
 		this.strategy = strategy;
 	}
@@ -37,7 +39,7 @@ public final class DcSolution implements DcResult {
 			start[n - 1] = other.netVoltages[n];
 			nets[n] = other.netVoltages[n];
 		}
-		return new DcSolution(circuit, nets, devices, iterations, strategy, start);
+		return new DcSolution(circuit, nets, points, iterations, strategy, start);
 	}
 
 	public Circuit circuit() {
@@ -54,16 +56,29 @@ public final class DcSolution implements DcResult {
 
 	/** Operating point of the named device; throws if there is none by that name. */
 	public OperatingPoint device(String name) {
-		OperatingPoint p = devices.get(name);
-		if (p == null) {
+		int i = circuit.deviceIndex(name);
+		if (i < 0) {
 			throw new IllegalArgumentException("no device named " + name);
 		}
-		return p;
+		return points[i];
 	}
 
-	/** All devices in the order of the circuit. */
+	/** Operating point of the device at {@code index} in the circuit's order ({@link Circuit#deviceIndex}). */
+	public OperatingPoint device(int index) {
+		return points[index];
+	}
+
+	/** All devices in the order of the circuit, by name. */
 	public Map<String, OperatingPoint> devices() {
-		return devices;
+		Map<String, OperatingPoint> map = byName;
+		if (map == null) {
+			map = new LinkedHashMap<>();
+			for (OperatingPoint p : points) {
+				map.put(p.device(), p);
+			}
+			byName = map = Collections.unmodifiableMap(map);
+		}
+		return map;
 	}
 
 	/** Newton iterations used in all, over every step of the strategy. */

@@ -1,8 +1,5 @@
 package bulwark.engine.solve;
 
-import java.util.LinkedHashMap;
-import java.util.Map;
-import java.util.Optional;
 
 import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Device;
@@ -82,7 +79,7 @@ public final class DcSolver {
 			return solution(layout, assembly, plain.x, plain.iterations, Strategy.NEWTON);
 		}
 		if (plain.singularAt >= 0 && !nonlinear) {
-			return TopologyCheck.heldOnlyByLeakage(circuit).orElse(singular(layout, plain.singularAt));
+			return singular(layout, plain.singularAt);
 		}
 		int spent = plain.iterations;
 
@@ -129,10 +126,6 @@ public final class DcSolver {
 		if (scale >= 1) {
 			return solution(layout, assembly, x, spent, Strategy.SOURCE_STEPPING);
 		}
-		Optional<SolveFailure> leakageOnly = TopologyCheck.heldOnlyByLeakage(circuit);
-		if (leakageOnly.isPresent()) {
-			return leakageOnly.get();
-		}
 		if (plain.singularAt >= 0) {
 			return singular(layout, plain.singularAt);
 		}
@@ -154,7 +147,7 @@ public final class DcSolver {
 		int n = layout.size;
 		double[] x = x0.clone();
 		double[] xNew = new double[n];
-		SparseLu lu = new SparseLu(n, layout.order);
+		SparseLu lu = assembly.lu;
 		assembly.resetStates();
 		boolean updateSmall = false;
 		boolean updateSettled = false;
@@ -163,6 +156,7 @@ public final class DcSolver {
 			boolean clean = assembly.assemble(x, scale, nodeGmin, step);
 			boolean settled = updateSmall || (iteration > LOOSE_AFTER && updateSettled);
 			if (settled && clean && residualSmall(layout, assembly, x)) {
+				assembly.keepPivots();
 				return new Attempt(x, iteration - 1, -1, worst);
 			}
 			if (!lu.factor(assembly.matrix)) {
@@ -170,6 +164,7 @@ public final class DcSolver {
 			}
 			lu.solve(assembly.rhs, xNew);
 			if (!nonlinear) {
+				assembly.keepPivots();
 				return new Attempt(xNew.clone(), 1, -1, 0);
 			}
 			double worstRatio = -1;
@@ -230,7 +225,7 @@ public final class DcSolver {
 		Circuit circuit = layout.circuit;
 		double[] v = new double[circuit.netCount()];
 		System.arraycopy(x, 0, v, 1, layout.nodes);
-		Map<String, OperatingPoint> points = new LinkedHashMap<>();
+		OperatingPoint[] points = new OperatingPoint[layout.devices.length];
 		for (int i = 0; i < layout.devices.length; i++) {
 			Device d = layout.devices[i];
 			int[] pins = d.pins();
@@ -239,8 +234,8 @@ public final class DcSolver {
 				pinV[p] = v[pins[p]];
 			}
 			double[] currents = d.pinCurrents(assembly.view(x, i));
-			points.put(d.name(), new OperatingPoint(d.name(), d.pinNames(), pinV, currents, d.junctionNames(),
-					d.reverseVoltages(assembly.view(x, i))));
+			points[i] = new OperatingPoint(d.name(), d.pinNames(), pinV, currents, d.junctionNames(),
+					d.reverseVoltages(assembly.view(x, i)));
 		}
 		return new DcSolution(circuit, v, points, iterations, strategy, x);
 	}

@@ -23,6 +23,10 @@ final class Layout {
 	final CscMatrix pattern;
 	/** Fill-reducing column order for the sparse LU. */
 	final int[] order;
+	/** Where each device's stamp calls land, replayed by every assembly. */
+	final StampPlan plan;
+	/** The pivots of the last successful factorisation, shared by every solve of this pattern. */
+	final PivotMemory pivots;
 
 	/** The same numbering, pattern and order for a circuit whose device at {@code index} was replaced. */
 	private Layout(Layout base, Circuit circuit) {
@@ -33,6 +37,8 @@ final class Layout {
 		size = base.size;
 		pattern = base.pattern;
 		order = base.order;
+		plan = base.plan;
+		pivots = base.pivots;
 	}
 
 	Layout withCircuit(Circuit replaced) {
@@ -52,10 +58,12 @@ final class Layout {
 		}
 		size = row;
 		PatternBuilder builder = new PatternBuilder(size);
-		new PatternRecorder(this, builder).record();
+		plan = new StampPlan(devices.length);
+		new PatternRecorder(this, builder, plan).record();
 		pattern = builder.build();
+		plan.resolve(pattern);
 		order = MinimumDegree.order(pattern);
-
+		pivots = new PivotMemory(size, order);
 	}
 
 	/** Row of a net, or −1 for the reference net. */

@@ -18,7 +18,7 @@ public final class PreparedCircuit {
 		this.layout = new Layout(circuit);
 		this.structural = circuit.devices().isEmpty()
 				? new SolveFailure(SolveFailure.Reason.EMPTY_CIRCUIT, null, "the circuit has no devices")
-				: TopologyCheck.check(circuit).orElse(null);
+				: TopologyCheck.check(circuit).or(() -> TopologyCheck.heldOnlyByLeakage(circuit)).orElse(null);
 	}
 
 	private PreparedCircuit(Layout layout, SolveFailure structural) {

@@ -8,9 +8,9 @@ import bulwark.engine.circuit.Circuit;
 import bulwark.engine.circuit.Device;
 
 /**
- * Finds the two structural faults that make the nodal equations singular before any arithmetic is done,
- * so that the failure can name the net or device responsible: a net without a DC path to the reference,
- * and a loop of ideal voltage sources.
+ * Finds the structural faults of a circuit before any arithmetic is done, so that the failure can name the
+ * net or device responsible: a net without a DC path to the reference and a loop of ideal voltage sources,
+ * which make the nodal equations singular, and a net held only by leakage, whose solution means nothing.
  */
 final class TopologyCheck {
 	private TopologyCheck() {
@@ -62,8 +62,9 @@ final class TopologyCheck {
 
 	/**
 	 * Nets held to the rest of the circuit only by leakage (a comparator input with nothing else on it): their
-	 * voltage is set by picoamperes, and a comparator's gain turns that into an undefined output. Named when a
-	 * solve fails, so the failure points at the net that needs holding rather than where the pivot broke.
+	 * voltage is set by picoamperes, and a comparator's gain turns that into an undefined output. Named
+	 * before solving: Newton may converge there or break down at some pivot, and neither answer means
+	 * anything; the failure points at the net that needs holding.
 	 */
 	static Optional<SolveFailure> heldOnlyByLeakage(Circuit circuit) {
 		int n = circuit.netCount();
