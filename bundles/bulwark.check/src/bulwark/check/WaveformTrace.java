@@ -8,7 +8,8 @@ import bulwark.check.cases.SolvedCycle;
  * solver's own steps crowd where the waveform turns fast). Every judged figure comes from the solved points,
  * never from these samples.
  */
-public record WaveformTrace(String caseName, String part, double[] seconds, double[] volts, double[] amps) {
+public record WaveformTrace(String caseName, String part, String method, double[] seconds, double[] volts,
+		double[] amps) {
 	public static final int SAMPLES = 120;
 
 	/** The part's trace over the cycle. */
@@ -35,6 +36,6 @@ public record WaveformTrace(String caseName, String part, double[] seconds, doub
 			v[k] = vs[segment] + w * (vs[next] - vs[segment]);
 			i[k] = is[segment] + w * (is[next] - is[segment]);
 		}
-		return new WaveformTrace(caseName, part, t, v, i);
+		return new WaveformTrace(caseName, part, cycle.method(), t, v, i);
 	}
 }

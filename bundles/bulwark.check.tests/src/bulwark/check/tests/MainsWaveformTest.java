@@ -133,9 +133,16 @@ class MainsWaveformTest {
 				diode D1 (anode: mid, cathode: gnd) { rated reverse 1000 V }
 				""";
 		String withMemory = plain + "capacitor C1 (a: tip, b: gnd) { value 1 pF rated voltage 1000 V }\n";
-		double swept = worst(Fixtures.check(plain, MAINS_ONLY), "R1", "power").value();
-		double integrated = worst(Fixtures.check(withMemory, MAINS_ONLY), "R1", "power").value();
+		DesignResult sweep = Fixtures.check(plain, MAINS_ONLY);
+		DesignResult integratedResult = Fixtures.check(withMemory, MAINS_ONLY);
+		double swept = worst(sweep, "R1", "power").value();
+		double integrated = worst(integratedResult, "R1", "power").value();
 		assertEquals(swept, integrated, 0.005 * swept);
+		// each says how it was solved
+		assertEquals("quasi-static sweep of 36 operating points, each continued from the last",
+				sweep.waveforms().get(0).method());
+		assertTrue(integratedResult.waveforms().get(0).method().startsWith("transient analysis"),
+				integratedResult.waveforms().toString());
 	}
 
 	@Test
@@ -167,6 +174,7 @@ class MainsWaveformTest {
 		bulwark.check.WaveformTrace t = r.waveforms().stream().findFirst()
 				.orElseThrow(() -> new AssertionError("no waveform for the mains case: " + r.cases()));
 		assertTrue(t.caseName().startsWith("230 V 50 Hz mains (358 V peak), steady state after"), t.caseName());
+		assertTrue(t.method().startsWith("transient analysis from switch-on, steady after "), t.method());
 		assertEquals(t.seconds().length, t.volts().length);
 		assertEquals(t.seconds().length, t.amps().length);
 		assertEquals(bulwark.check.WaveformTrace.SAMPLES, t.seconds().length);
@@ -190,6 +198,8 @@ class MainsWaveformTest {
 		bulwark.check.report.JsonReport.write(List.of(r), "test", "caution", json);
 		assertTrue(json.toString().contains("\"waveforms\": [") && json.toString().contains("\"volts\": ["),
 				json.toString());
+		assertTrue(json.toString().contains("\"method\": \"transient analysis from switch-on"), json.toString());
+		assertTrue(html.toString().contains("Solved by transient analysis from switch-on"), html.toString());
 	}
 
 	/** 230 V mains through a 100 mA fuse into 1 kΩ: the fuse opens, but not before the resistor meets the crest. */

@@ -140,7 +140,7 @@ final class MainsRunner {
 		String stage = String.format(Locale.ROOT, ", before %s open%s (pre-arcing I²t %s reached after %s)", names,
 				opening.size() == 1 ? "s" : "", Figures.engineering(largestI2t, "A²s"), Figures.engineering(clears, "s"));
 		VoltageSource source = source(c);
-		List<CaseOutcome> outcomes = new ArrayList<>(instants(design, c, stage, window, source, Map.of()));
+		List<CaseOutcome> outcomes = new ArrayList<>(instants(design, c, stage, window, source, Map.of(), null));
 		Map<String, Double> energy = new LinkedHashMap<>();
 		for (String part : design.parts().keySet()) {
 			energy.put(part, energyBefore(run, part, clears));
@@ -256,7 +256,9 @@ final class MainsRunner {
 		}
 		Cycle cycle = new Cycle(times, points, 0, true);
 		Cycle fromCrest = cycle.fromIndex(90 / PHASE_STEP_DEGREES, period);
-		return new Run(instants(design, c, "", cycle, source, averagePower(design, cycle)), cycle, fromCrest);
+		String method = String.format(Locale.ROOT, "quasi-static sweep of %d operating points, each continued from the last",
+				points.size());
+		return new Run(instants(design, c, "", cycle, source, averagePower(design, cycle), method), cycle, fromCrest);
 	}
 
 	private static Run transientRun(CompiledDesign design, FaultCase c, PreparedCircuit circuit, DcSolver solver) {
@@ -280,7 +282,7 @@ final class MainsRunner {
 				return failed(c, stage, t.failure());
 			}
 			Cycle first = new Cycle(t.times(), t.points(), 0, false);
-			outcomes.addAll(instants(design, c, ", " + stage, first, switched, Map.of()));
+			outcomes.addAll(instants(design, c, ", " + stage, first, switched, Map.of(), null));
 			switchOns.put(sign, first);
 			sources.put(sign, switched);
 			if (sign > 0) {
@@ -293,7 +295,11 @@ final class MainsRunner {
 				TransientResult p = r.period();
 				steady = new Cycle(p.times(), p.points(), p.times().get(0), false);
 				String settled = String.format(Locale.ROOT, ", steady state after %d period(s)", r.periods());
-				outcomes.addAll(0, instants(design, c, settled, steady, switched, averagePower(design, steady)));
+				String method = String.format(Locale.ROOT, "transient analysis from switch-on, steady after %d period(s): "
+						+ "whole periods integrated until every net ends a period within %.2g %% of the largest voltage + %s "
+						+ "of where it ended the last", r.periods(), PeriodicSteadyState.RELATIVE * 100,
+						Figures.engineering(PeriodicSteadyState.VOLTS, "V"));
+				outcomes.addAll(0, instants(design, c, settled, steady, switched, averagePower(design, steady), method));
 			}
 		}
 		for (var e : switchOns.entrySet()) {
@@ -362,7 +368,7 @@ final class MainsRunner {
 	 * a path to a part whose average power is over its limit is traced at the crest).
 	 */
 	private static List<CaseOutcome> instants(CompiledDesign design, FaultCase c, String stage, Cycle cycle,
-			VoltageSource source, Map<String, Double> averages) {
+			VoltageSource source, Map<String, Double> averages, String method) {
 		TreeSet<Integer> chosen = new TreeSet<>();
 		int crest = 0;
 		for (int i = 1; i < cycle.points.size(); i++) {
@@ -404,7 +410,7 @@ final class MainsRunner {
 					firstPositive ? c.from() : c.to(), firstPositive ? c.to() : c.from());
 			List<Double> fromStart = cycle.times.stream().map(t -> t - cycle.start).toList();
 			outcomes.add(new CaseOutcome(whole, cycle.points.get(crest), Map.of(), averages,
-					new SolvedCycle(fromStart, cycle.points)));
+					new SolvedCycle(fromStart, cycle.points, method)));
 		}
 		return outcomes;
 	}

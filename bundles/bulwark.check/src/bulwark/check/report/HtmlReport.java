@@ -77,6 +77,7 @@ public final class HtmlReport {
 		for (WaveformTrace t : r.waveforms()) {
 			w.write("<h4>" + escape(t.part()) + " over the cycle, " + escape(t.caseName()) + "</h4>\n");
 			w.write(WaveformPlot.svg(t));
+			w.write("<p class=\"method\">Solved by " + escape(t.method()) + ".</p>\n");
 		}
 		if (!r.cases().isEmpty()) {
 			w.write("<h3>Cases</h3>\n<ul>");

@@ -129,6 +129,7 @@ public final class JsonReport {
 			w.beginObject();
 			w.name("case").value(t.caseName());
 			w.name("part").value(t.part());
+			w.name("method").value(t.method());
 			series(w.name("seconds"), t.seconds());
 			series(w.name("volts"), t.volts());
 			series(w.name("amps"), t.amps());
