@@ -18,7 +18,6 @@ import bulwark.engine.solve.DcSolver;
 import bulwark.engine.solve.PreparedCircuit;
 import bulwark.check.cases.FaultCase;
 import bulwark.check.cases.CaseOutcome;
-import bulwark.check.figures.Figures;
 import bulwark.check.parts.FuseRatings;
 
 /**
@@ -158,10 +157,7 @@ public final class CaseRunner {
 		for (String part : design.parts().keySet()) {
 			energy.put(part, Math.abs(whole.device(part).power()) * seconds);
 		}
-		String names = String.join(", ", opening.stream().map(Fuse::name).toList());
-		FaultCase moment = c.momentarily(String.format(java.util.Locale.ROOT,
-				"%s, before %s open%s (pre-arcing I²t %s reached after %s)", c.name(), names, opening.size() == 1 ? "s" : "",
-				Figures.engineering(largestI2t, "A²s"), Figures.engineering(seconds, "s")));
+		FaultCase moment = c.momentarily(c.name() + ", " + FuseRatings.beforeClearing(opening, largestI2t, seconds));
 		return new CaseOutcome(moment, whole, energy);
 	}
 
@@ -171,11 +167,12 @@ public final class CaseRunner {
 				f.ratedAmps(), f.resettable());
 	}
 
-	/** The case with these fuses opened, named for them ("…, F1 open"). */
+	/** The case with these fuses opened, named for them ("…, F1 open"; "…, F2 tripped" for resettable ones). */
 	static FaultCase withOpened(FaultCase c, Map<String, Device> opened) {
 		Map<String, Device> replaced = new LinkedHashMap<>(c.replaced());
 		replaced.putAll(opened);
-		return new FaultCase(c.name() + ", " + String.join(", ", opened.keySet()) + " open", c.kind(), c.added(),
-				replaced, c.from(), c.to());
+		boolean tripped = opened.values().stream().allMatch(d -> d instanceof Fuse f && f.resettable());
+		return new FaultCase(c.name() + ", " + String.join(", ", opened.keySet()) + (tripped ? " tripped" : " open"),
+				c.kind(), c.added(), replaced, c.from(), c.to());
 	}
 }

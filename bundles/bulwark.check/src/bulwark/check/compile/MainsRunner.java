@@ -136,9 +136,7 @@ final class MainsRunner {
 			largestI2t = Math.max(largestI2t, i2t);
 		}
 		Cycle window = run.switchOn.upTo(clears);
-		String names = String.join(", ", opening.stream().map(Fuse::name).toList());
-		String stage = String.format(Locale.ROOT, ", before %s open%s (pre-arcing I²t %s reached after %s)", names,
-				opening.size() == 1 ? "s" : "", Figures.engineering(largestI2t, "A²s"), Figures.engineering(clears, "s"));
+		String stage = ", " + FuseRatings.beforeClearing(opening, largestI2t, clears);
 		VoltageSource source = source(c);
 		List<CaseOutcome> outcomes = new ArrayList<>(instants(design, c, stage, window, source, Map.of(), null));
 		Map<String, Double> energy = new LinkedHashMap<>();

@@ -128,7 +128,9 @@ public final class KindCatalog {
 			List.of(new SettingSpec("resistance", Unit.OHM, false, "resistance when cold (0.1 Ω when omitted)")),
 			List.of(new SettingSpec("hold", Unit.AMPERE, false, "rated hold current"),
 					new SettingSpec("trip", Unit.AMPERE, false, "rated trip current"),
-					new SettingSpec("voltage", Unit.VOLT, false, "rated voltage")));
+					new SettingSpec("voltage", Unit.VOLT, false, "rated voltage"),
+					new SettingSpec("i2t", Unit.AMPERE_SQUARED_SECOND, false,
+							"the ∫i²dt it takes in before it trips (125 A²s per A² of hold current when omitted)")));
 	private static final KindSpec INDICATOR = new KindSpec("indicator", TWO,
 			List.of(new SettingSpec("resistance", Unit.OHM, true, "resistance of the lamp, buzzer or LED string"),
 					new SettingSpec("activation", Unit.AMPERE, false, "current at which it is on (1 mA when omitted)")),
