@@ -15,6 +15,10 @@ public class BulwarkRuntimeModule extends AbstractBulwarkRuntimeModule {
 		return SyntaxErrorMessages.class;
 	}
 
+	public Class<? extends org.eclipse.xtext.linking.ILinkingDiagnosticMessageProvider> bindILinkingDiagnosticMessageProvider() {
+		return bulwark.lang.scoping.LinkingMessages.class;
+	}
+
 	/** A design sees what its own file declares and the definitions of the libraries it uses, nothing else. */
 	@Override
 	public Class<? extends IGlobalScopeProvider> bindIGlobalScopeProvider() {

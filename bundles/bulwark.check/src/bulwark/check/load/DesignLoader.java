@@ -21,6 +21,7 @@ import bulwark.lang.design.Design;
 import bulwark.lang.design.Document;
 import bulwark.lang.design.Library;
 import bulwark.lang.design.Policy;
+import bulwark.lang.diagnostics.FirstSyntaxErrors;
 import bulwark.lang.install.Installation;
 import bulwark.lang.library.LibraryPath;
 
@@ -97,8 +98,8 @@ public final class DesignLoader {
 			throw new IllegalStateException(e);
 		}
 		IResourceValidator validator = resource.getResourceServiceProvider().getResourceValidator();
-		List<Issue> issues = validator.validate(resource, CheckMode.ALL,
-				cancel == null ? CancelIndicator.NullImpl : cancel);
+		List<Issue> issues = FirstSyntaxErrors.of(resource,
+				validator.validate(resource, CheckMode.ALL, cancel == null ? CancelIndicator.NullImpl : cancel));
 		Document root = resource.getContents().isEmpty() ? null : (Document) resource.getContents().get(0);
 		return new Parsed(root, issues);
 	}

@@ -135,7 +135,7 @@ class ValidationTest {
 		validation.assertError(parse(terminals + "case \"x\" { short T1 to T1 }"), DesignPackage.Literals.SHORT,
 				IssueCodes.SAME_TERMINAL);
 		validation.assertError(parse(terminals + "case \"x\" { short T1 to T9 }"), DesignPackage.Literals.SHORT,
-				org.eclipse.xtext.diagnostics.Diagnostic.LINKING_DIAGNOSTIC, "T9");
+				bulwark.lang.validation.IssueCodes.UNKNOWN_NAME, "T9");
 	}
 
 	@Test
@@ -192,6 +192,6 @@ class ValidationTest {
 	@Test
 	void undeclaredNetIsALinkingError() throws Exception {
 		validation.assertError(parse("resistor R1 (a: nowhere, b: gnd) { value 1 kΩ }"),
-				DesignPackage.Literals.PIN_BINDING, Diagnostic.LINKING_DIAGNOSTIC, "nowhere");
+				DesignPackage.Literals.PIN_BINDING, bulwark.lang.validation.IssueCodes.UNKNOWN_NAME, "nowhere");
 	}
 }

@@ -30,6 +30,7 @@ import bulwark.lang.design.Terminal;
 import bulwark.lang.design.Waiver;
 import bulwark.lang.design.Tolerance;
 import bulwark.lang.kinds.KindCatalog;
+import bulwark.lang.naming.Suggestion;
 import bulwark.lang.kinds.KindSpec;
 import bulwark.lang.kinds.SettingSpec;
 import bulwark.lang.units.ScaledUnit;
@@ -114,7 +115,8 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 		Set<String> bound = new HashSet<>();
 		for (PinBinding b : part.getPins()) {
 			if (!spec.pins().contains(b.getPin())) {
-				error("A " + spec.kind() + " has no pin '" + b.getPin() + "'; its pins are " + String.join(", ", spec.pins()),
+				error("A " + spec.kind() + " has no pin '" + b.getPin() + "'" + Suggestion.didYouMean(b.getPin(), spec.pins())
+						+ "; its pins are " + String.join(", ", spec.pins()),
 						b, DesignPackage.Literals.PIN_BINDING__PIN, IssueCodes.UNKNOWN_PIN);
 			} else if (!bound.add(b.getPin())) {
 				error("Pin '" + b.getPin() + "' is connected twice", b, DesignPackage.Literals.PIN_BINDING__PIN,
@@ -171,14 +173,18 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 		for (Setting s : settings) {
 			boolean isRating = s instanceof Rating;
 			Optional<SettingSpec> known = isRating ? spec.rating(s.getName()) : spec.parameter(s.getName());
-			if (known.isEmpty()) {
+			if (known.isEmpty() && s.getName() != null) {
 				List<SettingSpec> options = isRating ? spec.ratings() : spec.parameters();
 				String list = options.isEmpty() ? "none"
 						: options.stream().map(SettingSpec::name).collect(Collectors.joining(", "));
-				error("A " + spec.kind() + " has no " + (isRating ? "rating" : "parameter") + " '" + s.getName()
-						+ "'; it has: " + list, s, DesignPackage.Literals.SETTING__NAME,
+				error("A " + spec.kind() + " has no " + (isRating ? "rating" : "parameter") + " '" + s.getName() + "'"
+						+ Suggestion.didYouMean(s.getName(), options.stream().map(SettingSpec::name).toList()) + "; it has: "
+						+ list, s, DesignPackage.Literals.SETTING__NAME,
 						isRating ? IssueCodes.UNKNOWN_RATING : IssueCodes.UNKNOWN_PARAMETER);
 				continue;
+			}
+			if (known.isEmpty()) {
+				continue; // a setting without a name: the syntax error says so
 			}
 			if (!(isRating ? ratings : parameters).add(s.getName())) {
 				error("'" + s.getName() + "' is given twice", s, DesignPackage.Literals.SETTING__NAME,

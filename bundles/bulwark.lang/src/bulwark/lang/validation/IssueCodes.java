@@ -4,6 +4,10 @@ package bulwark.lang.validation;
 public final class IssueCodes {
 	private static final String PREFIX = "bulwark.lang.";
 
+	/** A syntax error; the message says which. */
+	public static final String SYNTAX = PREFIX + "syntax";
+	/** A name that nothing of that sort in scope has. */
+	public static final String UNKNOWN_NAME = PREFIX + "unknownName";
 	public static final String UNKNOWN_UNIT = PREFIX + "unknownUnit";
 	public static final String WRONG_UNIT = PREFIX + "wrongUnit";
 	public static final String MISSING_UNIT = PREFIX + "missingUnit";

@@ -21,6 +21,7 @@ import bulwark.lang.design.SeverityChange;
 import bulwark.lang.design.Surge;
 import bulwark.lang.design.WaiverDemand;
 import bulwark.lang.kinds.KindCatalog;
+import bulwark.lang.naming.Suggestion;
 import bulwark.lang.kinds.KindSpec;
 import bulwark.lang.kinds.SettingSpec;
 import bulwark.lang.units.ScaledUnit;
@@ -76,7 +77,8 @@ public class PolicyValidator extends AbstractDeclarativeValidator {
 		KindSpec spec = KindCatalog.of(d.getKind());
 		if (d.getRating() != null && spec.rating(d.getRating()).isEmpty()) {
 			String list = spec.ratings().stream().map(SettingSpec::name).collect(Collectors.joining(", "));
-			error("A " + spec.kind() + " has no rating '" + d.getRating() + "'; it has: "
+			error("A " + spec.kind() + " has no rating '" + d.getRating() + "'"
+					+ Suggestion.didYouMean(d.getRating(), spec.ratings().stream().map(SettingSpec::name).toList()) + "; it has: "
 					+ (list.isEmpty() ? "none" : list), d, DesignPackage.Literals.DERATING__RATING, IssueCodes.UNKNOWN_RATING);
 		}
 		if (d.getPercent() != null) {
