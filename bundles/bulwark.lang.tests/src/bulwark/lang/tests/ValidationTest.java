@@ -2,7 +2,6 @@ package bulwark.lang.tests;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import org.eclipse.xtext.diagnostics.Diagnostic;
 import org.eclipse.xtext.testing.InjectWith;
 import org.eclipse.xtext.testing.extensions.InjectionExtension;
 import org.eclipse.xtext.testing.util.ParseHelper;
