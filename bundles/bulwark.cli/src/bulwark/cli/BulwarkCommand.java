@@ -1,6 +1,7 @@
 package bulwark.cli;
 
 import java.io.PrintWriter;
+import java.util.List;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -22,19 +23,17 @@ public final class BulwarkCommand implements Runnable {
 		spec.commandLine().usage(spec.commandLine().getOut());
 	}
 
-	private static String subcommandName(CommandLine cl) {
-		return cl.getParent() == null ? "" : " " + cl.getCommandName();
-	}
-
 	/** Runs the command line with the given streams and returns its exit code; never calls System.exit. */
 	public static int run(String[] args, PrintWriter out, PrintWriter err) {
+		CommandLine.tracer().setLevel(CommandLine.TraceLevel.OFF); // the library's own warnings are not ours to print
 		CommandLine cli = new CommandLine(new BulwarkCommand());
 		cli.setOut(out);
 		cli.setErr(err);
 		cli.setParameterExceptionHandler((ex, given) -> {
-			CommandLine failed = ex.getCommandLine();
-			failed.getErr().println("bulwark: " + ex.getMessage());
-			failed.getErr().println("Try 'bulwark help" + subcommandName(failed) + "'.");
+			List<String> lines = UsageErrors.of(ex, given);
+			PrintWriter e = ex.getCommandLine().getErr();
+			e.println("bulwark: " + lines.get(0));
+			lines.subList(1, lines.size()).forEach(e::println);
 			return ExitCodes.USAGE;
 		});
 		cli.setExecutionExceptionHandler((ex, failed, parsed) -> {
