@@ -17,6 +17,7 @@ import bulwark.check.DesignResult;
 import bulwark.check.finding.Finding;
 import bulwark.check.load.LoadedDesign;
 import bulwark.lang.design.Design;
+import bulwark.lang.diagnostics.FirstSyntaxErrors;
 
 /**
  * The language server's validation: the language's own issues, then — when the text is a sound design —
@@ -29,7 +30,9 @@ public class CheckingResourceValidator extends ResourceValidatorImpl {
 
 	@Override
 	public List<Issue> validate(Resource resource, CheckMode mode, CancelIndicator cancel) {
-		List<Issue> issues = new ArrayList<>(super.validate(resource, mode, cancel));
+		List<Issue> language = super.validate(resource, mode, cancel);
+		// one error per broken statement, as the command line reports them
+		List<Issue> issues = new ArrayList<>(resource instanceof XtextResource r ? FirstSyntaxErrors.of(r, language) : language);
 		boolean errors = issues.stream().anyMatch(i -> i.getSeverity() == Severity.ERROR);
 		if (errors || cancel.isCanceled() || resource.getContents().isEmpty()
 				|| !(resource.getContents().get(0) instanceof Design design) || !(resource instanceof XtextResource x)

@@ -192,6 +192,29 @@ class LanguageServerTest {
 	}
 
 	@Test
+	void aSyntaxErrorIsOneDiagnosticInBulwarksWordsAndCode() throws Exception {
+		String broken = dir.resolve("broken.bulwark").toUri().toString();
+		String source = "design \"x\"\nreference net gnd\n// a note\nnet a\nresistor R1 (a: a, b: gdn) { value 1 kΩ }\n";
+		server.getTextDocumentService().didOpen(new DidOpenTextDocumentParams(new TextDocumentItem(broken, "bulwark", 1, source)));
+		List<Diagnostic> found = diagnosticsFor(broken, "bulwark.lang.syntax");
+		// the comment's two slashes and the word after them are one mistake; the misspelt net waits for the syntax
+		assertEquals(1, found.size(), found.toString());
+		assertEquals("comments start with '#': write # in place of //", found.get(0).getMessage());
+		assertEquals(2, found.get(0).getRange().getStart().getLine());
+		// fixed, the name that refers to nothing is named with the nearest one, under Bulwark's code
+		server.getTextDocumentService().didChange(new org.eclipse.lsp4j.DidChangeTextDocumentParams(
+				new org.eclipse.lsp4j.VersionedTextDocumentIdentifier(broken, 2),
+				List.of(new org.eclipse.lsp4j.TextDocumentContentChangeEvent(source.replace("//", "#")))));
+		List<Diagnostic> named = diagnosticsFor(broken, "bulwark.lang.unknownName");
+		Diagnostic unknown = named.stream().filter(d -> "bulwark.lang.unknownName".equals(d.getCode().getLeft())).findFirst()
+				.orElseThrow();
+		assertEquals("no net 'gdn' in this design (did you mean 'gnd'?)", unknown.getMessage());
+		for (Diagnostic d : named) {
+			assertTrue(d.getCode() != null && !d.getCode().getLeft().startsWith("org."), d.toString());
+		}
+	}
+
+	@Test
 	void anUnknownMethodGetsTheProtocolsError() throws Exception {
 		CompletableFuture<Object> answer = client.getRemoteEndpoint().request("bulwark/noSuchMethod", null);
 		try {
