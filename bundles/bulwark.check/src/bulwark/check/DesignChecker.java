@@ -27,6 +27,7 @@ import bulwark.check.policy.ReviewPolicy;
 import bulwark.check.rules.CheckContext;
 import bulwark.check.rules.Rule;
 import bulwark.check.rules.RuleRegistry;
+import bulwark.check.rules.SingleFaultRule;
 import bulwark.check.cases.SolvedCase;
 import bulwark.engine.solve.DcResult;
 import bulwark.engine.solve.DcSolution;
@@ -57,6 +58,7 @@ public final class DesignChecker {
 	private final PolicyFiles policies;
 	private final Duration budget;
 	private final List<Rule> rules;
+	private final boolean singleFaults;
 
 	public DesignChecker(DesignLoader loader) {
 		this(loader, null);
@@ -76,11 +78,25 @@ public final class DesignChecker {
 	}
 
 	private DesignChecker(DesignLoader loader, ReviewPolicy policy, Duration budget, List<Rule> rules) {
+		this(loader, policy, budget, rules, false);
+	}
+
+	private DesignChecker(DesignLoader loader, ReviewPolicy policy, Duration budget, List<Rule> rules,
+			boolean singleFaults) {
 		this.loader = loader;
 		this.forcedPolicy = policy;
 		this.policies = new PolicyFiles(loader, RuleRegistry.ids());
 		this.budget = budget;
 		this.rules = List.copyOf(rules);
+		this.singleFaults = singleFaults;
+	}
+
+	/**
+	 * The same checker with the single-fault analysis asked for in every design's policy (at the severity the
+	 * policy gives it, else the rule's own): {@code bulwark check --single-faults}.
+	 */
+	public DesignChecker withSingleFaults() {
+		return new DesignChecker(loader, forcedPolicy, budget, rules, true);
 	}
 
 	/**
@@ -88,7 +104,7 @@ public final class DesignChecker {
 	 * rule which crashes is seen as a failure, never as a pass.
 	 */
 	public DesignChecker withRules(List<Rule> replacement) {
-		return new DesignChecker(loader, forcedPolicy, budget, replacement);
+		return new DesignChecker(loader, forcedPolicy, budget, replacement, singleFaults);
 	}
 
 	/** The loader this checker parses with; quick fixes parse their copies with it. */
@@ -196,7 +212,9 @@ public final class DesignChecker {
 		List<Finding> findings = new ArrayList<>(ready.findings());
 		Design design = loaded.design();
 		String title = design.getTitle();
-		ReviewPolicy policy = ready.policy();
+		ReviewPolicy policy = singleFaults && !SingleFaultRule.askedFor(ready.policy())
+				? ready.policy().withSeverity(SingleFaultRule.ID, Severity.WARNING)
+				: ready.policy();
 		CompiledDesign compiled = ready.compiled();
 		List<SolvedCase> solved = new ArrayList<>();
 		List<CaseResult> caseResults = new ArrayList<>();

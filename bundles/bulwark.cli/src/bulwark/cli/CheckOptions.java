@@ -42,6 +42,11 @@ public final class CheckOptions {
 			description = "Time one design's check may take; past it the design is reported as not checked and the batch goes on (default: ${DEFAULT-VALUE}).")
 	double budget;
 
+	@Option(names = "--single-faults", description = "Also fail each part in turn (shorted, open) and solve every case"
+			+ " again: a warning for each fault that puts another part over its absolute rating (rule single-fault;"
+			+ " each fault costs about one whole check).")
+	boolean singleFaults;
+
 	@Option(names = "--no-fixes", description = "Leave out the quick fixes the JSON report otherwise gives each finding (each is checked by a full re-check, which costs time on large batches).")
 	boolean noFixes;
 

@@ -46,6 +46,9 @@ final class Checks {
 			}
 			checker = Language.checker(policy.policy().get(), budget, options.library);
 		}
+		if (options.singleFaults) {
+			checker = checker.withSingleFaults();
+		}
 		List<DesignResult> results = checkAll(checker, files, options.jobs, progress(files.size(), err));
 		StringWriter report = new StringWriter();
 		CheckReport.write(results, options, checker, report);

@@ -26,7 +26,7 @@ class PackageLayersTest {
 	private static final Map<String, Integer> LAYER = Map.ofEntries(Map.entry("finding", 0), Map.entry("figures", 0),
 			Map.entry("io", 0), Map.entry("budget", 0), Map.entry("series", 0), Map.entry("fix", 0), Map.entry("load", 1),
 			Map.entry("policy", 2), Map.entry("cases", 3), Map.entry("parts", 4), Map.entry("stress", 5),
-			Map.entry("compile", 6), Map.entry("topology", 7), Map.entry("function", 7), Map.entry("rules", 8),
+			Map.entry("compile", 6), Map.entry("topology", 7), Map.entry("function", 7), Map.entry("faults", 7), Map.entry("rules", 8),
 			Map.entry("tolerance", 9), Map.entry("", 10), Map.entry("compare", 11), Map.entry("report", 11));
 	private static final Pattern USE = Pattern.compile("\\bbulwark\\.check((?:\\.[a-z]+)*)\\.[A-Z]");
 	private static final Pattern COMMENT = Pattern.compile("//[^\\n]*|/\\*.*?\\*/", Pattern.DOTALL);

@@ -45,6 +45,13 @@ public record ReviewPolicy(String title, Abuse abuse, Map<RatingKey, Derating> d
 		return new ReviewPolicy(otherTitle, otherAbuse, derating, hysteresis, severities, waivers, distribution);
 	}
 
+	/** The same policy with one rule's severity set. */
+	public ReviewPolicy withSeverity(RuleId rule, Severity severity) {
+		Map<RuleId, Severity> changed = new java.util.HashMap<>(severities);
+		changed.put(rule, severity);
+		return new ReviewPolicy(title, abuse, derating, hysteresis, changed, waivers, distribution);
+	}
+
 	/** The same policy with no derating: every part may use all of each rating. */
 	public ReviewPolicy notDerated() {
 		return new ReviewPolicy(title, abuse, Map.of(), hysteresis, severities, waivers, distribution);

@@ -17,7 +17,8 @@ public final class RuleRegistry {
 			new SeriesStringRule(), new SurgeEnergyRule(), new DevicePowerRule(), new DiodeReverseRule(), new ForwardCurrentRule(),
 			new BaseEmitterRule(), new TransistorVoltageRule(), new TransistorCurrentRule(), new CapacitorVoltageRule(),
 			new ProtectorBlockingRule(), new FuseVoltageRule(), new BatteryChargeRule(), new ComparatorInputRule(),
-			new ClampCurrentRule(), new InputRangeRule(), new ReversePathRule(), new HysteresisRule(), new RequirementRule(), new RatingMissingRule(), new PreferredValueRule());
+			new ClampCurrentRule(), new InputRangeRule(), new ReversePathRule(), new HysteresisRule(), new RequirementRule(), new RatingMissingRule(), new PreferredValueRule(),
+			new SingleFaultRule());
 
 	private static final Set<RuleId> IDS = ALL.stream().map(r -> r.info().id())
 			.collect(Collectors.toCollection(LinkedHashSet::new));

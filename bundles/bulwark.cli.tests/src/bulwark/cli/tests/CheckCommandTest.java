@@ -197,4 +197,20 @@ class CheckCommandTest {
 		assertEquals(0, help.exitCode());
 		assertTrue(help.out().contains("IEC 61010-1"), help.out());
 	}
+
+	@Test
+	void singleFaultsAreAnalysedOnAskingForThem() {
+		// every demo design, every part failed in turn under the built-in policy (mains as waveforms included):
+		// never a fault of Bulwark's own; the capacitive dropper shorted puts the mains on the surge resistor, the
+		// bilge switch tester's transistor does not survive its base resistor shorted
+		CliRun socket = CliRun.of("check", "--single-faults", CliRun.example("socket-live-indicator.bulwark"));
+		assertTrue(socket.out().contains("warning single-fault with C_DROP short, case "), socket.out());
+		assertTrue(!socket.out().contains("internal"), socket.out());
+		CliRun marina = CliRun.of("check", "--single-faults", CliRun.example("marina-bilge-switch-tester.bulwark"));
+		assertTrue(marina.out().contains("warning single-fault with R_BASE short, case "), marina.out());
+		CliRun all = CliRun.of("check", "--single-faults", CliRun.root().resolve("examples").toString());
+		assertTrue(all.err().contains("0 not checked"), all.err());
+		CliRun without = CliRun.of("check", CliRun.example("marina-bilge-switch-tester.bulwark"));
+		assertTrue(!without.out().contains("single-fault"), without.out());
+	}
 }

@@ -1,0 +1,105 @@
+package bulwark.check.tests;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+
+import bulwark.check.DesignResult;
+import bulwark.check.finding.Finding;
+import bulwark.check.policy.ReviewPolicy;
+import bulwark.check.rules.SingleFaultRule;
+
+/**
+ * Single faults: each part failed in turn, every case solved again, and a finding where another part then
+ * exceeds its absolute rating. Each figure below by hand, in the comment beside it.
+ */
+class SingleFaultRuleTest {
+	private static final ReviewPolicy ASKED_FOR = Fixtures.policy("""
+			policy "100 V on the terminals, single faults"
+			  mains none
+			  level 100 V
+			  severity "single-fault" warning
+			""");
+
+	/** Two equal resistors in series across the terminals; R2 is the weaker. */
+	private static final String TWO_EQUAL = """
+			design "two equal resistors in series"
+			reference net gnd
+			net in
+			net mid
+			terminal IN at in
+			terminal COM at gnd common
+			resistor R1 (a: in, b: mid) { value 10 kΩ rated power 2 W rated voltage 500 V } #! single-fault
+			resistor R2 (a: mid, b: gnd) { value 10 kΩ rated power 500 mW rated voltage 500 V }
+			""";
+
+	@Test
+	void shortingOneOfTwoEqualResistorsQuadruplesTheOthersPower() {
+		DesignResult r = Fixtures.check(TWO_EQUAL, ASKED_FOR);
+		assertEquals(Fixtures.expected(TWO_EQUAL, SingleFaultRule.ID), Fixtures.actual(r, SingleFaultRule.ID));
+		// normally each takes (V/2)²/R = 50² / 10 kΩ = 250 mW; with R1 shorted R2 takes V²/R = 100² / 10 kΩ = 1 W
+		// [closed form, a divider], twice its absolute 500 mW; R2 shorted leaves R1 its 1 W of 2 W, and an open
+		// one carries nothing
+		Finding f = Fixtures.only(r, SingleFaultRule.ID);
+		assertEquals("R1", f.part());
+		assertEquals(1.0, f.value(), 1e-6);
+		assertEquals(0.5, f.limit(), 0);
+		assertTrue(f.message().startsWith("with R1 short, case '"), f.message());
+		assertTrue(f.message().contains("puts power 1 W on R2 (rated 500 mW, 200 % of it): the protection of R2 relies on"
+				+ " R1 alone"), f.message());
+		// the normal check, derated to 60 %, passes: 250 mW of R2's 300 mW
+		assertTrue(r.findings().stream().noneMatch(x -> x.rule().text().equals("resistor-power")), r.findings().toString());
+	}
+
+	@Test
+	void silentWhenEachSurvivesTheOthersFailure() {
+		String strong = Fixtures.replaced(Fixtures.replaced(TWO_EQUAL, "rated power 500 mW", "rated power 2 W"),
+				" #! single-fault", "");
+		DesignResult r = Fixtures.check(strong, ASKED_FOR);
+		assertEquals(Fixtures.expected(strong, SingleFaultRule.ID), Fixtures.actual(r, SingleFaultRule.ID));
+		Fixtures.assertSilent(r, SingleFaultRule.ID);
+	}
+
+	@Test
+	void notRunUnlessAskedFor() {
+		DesignResult r = Fixtures.check(TWO_EQUAL, Fixtures.policy("""
+				policy "100 V on the terminals"
+				  mains none
+				  level 100 V
+				"""));
+		Fixtures.assertSilent(r, SingleFaultRule.ID);
+	}
+
+	@Test
+	void aShortedBlockingDiodeExposesTheLedToTheReversedLevel() {
+		// (the normal check passes the LED: RSH keeps its reverse voltage near nought while D1 blocks)
+		// reversed, D1 blocks the 100 V and RSH holds the LED at nought; with D1 shorted (1 mΩ) R1 and RSH divide
+		// the 100 V, the LED's reverse leakage drawing nothing: 100 V × 100 kΩ / 120 kΩ = 83.3 V against its 5 V
+		// [closed form, a divider]
+		String blocked = """
+				design "a blocking diode before an indicator"
+				reference net gnd
+				net in
+				net mid
+				net lamp
+				terminal IN at in
+				terminal COM at gnd common
+				diode D1 (anode: in, cathode: mid) { rated reverse 1000 V rated forward 1 A }
+				resistor R1 (a: mid, b: lamp) { value 20 kΩ rated power 2 W rated voltage 500 V }
+				led LED1 (anode: lamp, cathode: gnd) { forward 2 V rated reverse 5 V rated forward 20 mA }
+				resistor RSH (a: lamp, b: gnd) { value 100 kΩ rated power 2 W rated voltage 500 V }
+				""";
+		DesignResult r = Fixtures.check(blocked, ASKED_FOR);
+		List<Finding> faults = r.findings().stream().filter(f -> f.rule().equals(SingleFaultRule.ID)).toList();
+		Finding diode = faults.stream().filter(f -> f.part().equals("D1")).findFirst()
+				.orElseThrow(() -> new AssertionError("no finding for D1 shorted: " + r.findings()));
+		assertTrue(diode.message().startsWith("with D1 short, "), diode.message());
+		assertTrue(diode.message().contains("on LED1"), diode.message());
+		assertEquals(100 * 100e3 / 120e3, diode.value(), 0.5);
+		assertTrue(r.findings().stream().noneMatch(f -> f.rule().text().equals("diode-reverse")), r.findings().toString());
+		assertEquals(5, diode.limit(), 0);
+	}
+}
