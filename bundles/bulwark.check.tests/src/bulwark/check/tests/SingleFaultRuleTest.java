@@ -40,12 +40,12 @@ class SingleFaultRuleTest {
 	void shortingOneOfTwoEqualResistorsQuadruplesTheOthersPower() {
 		DesignResult r = Fixtures.check(TWO_EQUAL, ASKED_FOR);
 		assertEquals(Fixtures.expected(TWO_EQUAL, SingleFaultRule.ID), Fixtures.actual(r, SingleFaultRule.ID));
-		// normally each takes (V/2)²/R = 50² / 10 kΩ = 250 mW; with R1 shorted R2 takes V²/R = 100² / 10 kΩ = 1 W
-		// [closed form, a divider], twice its absolute 500 mW; R2 shorted leaves R1 its 1 W of 2 W, and an open
-		// one carries nothing
+		// normally each takes (V/2)²/R = 50² / 10 kΩ = 250 mW; with R1 shorted (1 Ω) R2 takes
+		// (100 V × 10 kΩ / 10.001 kΩ)² / 10 kΩ = 0.9998 W ≈ V²/R [closed form, a divider], twice its absolute
+		// 500 mW; R2 shorted leaves R1 its 1 W of 2 W, and an open one carries nothing
 		Finding f = Fixtures.only(r, SingleFaultRule.ID);
 		assertEquals("R1", f.part());
-		assertEquals(1.0, f.value(), 1e-6);
+		assertEquals(Math.pow(100 * 10e3 / (10e3 + 1), 2) / 10e3, f.value(), 1e-9);
 		assertEquals(0.5, f.limit(), 0);
 		assertTrue(f.message().startsWith("with R1 short, case '"), f.message());
 		assertTrue(f.message().contains("puts power 1 W on R2 (rated 500 mW, 200 % of it): the protection of R2 relies on"
@@ -76,7 +76,7 @@ class SingleFaultRuleTest {
 	@Test
 	void aShortedBlockingDiodeExposesTheLedToTheReversedLevel() {
 		// (the normal check passes the LED: RSH keeps its reverse voltage near nought while D1 blocks)
-		// reversed, D1 blocks the 100 V and RSH holds the LED at nought; with D1 shorted (1 mΩ) R1 and RSH divide
+		// reversed, D1 blocks the 100 V and RSH holds the LED at nought; with D1 shorted (1 Ω) R1 and RSH divide
 		// the 100 V, the LED's reverse leakage drawing nothing: 100 V × 100 kΩ / 120 kΩ = 83.3 V against its 5 V
 		// [closed form, a divider]
 		String blocked = """

@@ -12,15 +12,16 @@ import bulwark.engine.circuit.Resistor;
 import bulwark.lang.design.Part;
 
 /**
- * A design with one part failed: a short is a milliohm between the pins it joins, an open part a gigaohm
- * across each of its pins (so that the nets it leaves keep a path the solver can see, as an open fuse does)
- * [common practice: the values only need to be far below and far above every other resistance of an input
- * stage]. The failed part leaves the design's parts: it is no longer what its text describes, and nothing
- * judges it.
+ * A design with one part failed: a short is 1 Ω between the pins it joins, an open part a gigaohm across each
+ * of its pins (so that the nets it leaves keep a path the solver can see, as an open fuse does) [common
+ * practice: far below and far above every other resistance of an input stage]. Not lower: a milliohm beside
+ * the picosiemens across each junction at rest left a net joined only through the short and a junction
+ * without a usable pivot, a failure of the arithmetic, not of the design. The failed part leaves the design's
+ * parts: it is no longer what its text describes, and nothing judges it.
  */
 public final class FaultInjector {
 	/** A shorted part or pin pair, Ω. */
-	public static final double SHORT_OHMS = 1e-3;
+	public static final double SHORT_OHMS = 1;
 	/** An open part, Ω [the same gap as an open fuse: 1 nA at 1 V]. */
 	public static final double OPEN_OHMS = 1e9;
 
