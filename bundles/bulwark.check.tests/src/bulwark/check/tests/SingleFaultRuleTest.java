@@ -37,7 +37,7 @@ class SingleFaultRuleTest {
 			""";
 
 	@Test
-	void shortingOneOfTwoEqualResistorsQuadruplesTheOthersPower() {
+	void shortingOneOfTwoEqualResistorsQuadruplesTheOthersPower() throws Exception {
 		DesignResult r = Fixtures.check(TWO_EQUAL, ASKED_FOR);
 		assertEquals(Fixtures.expected(TWO_EQUAL, SingleFaultRule.ID), Fixtures.actual(r, SingleFaultRule.ID));
 		// normally each takes (V/2)²/R = 50² / 10 kΩ = 250 mW; with R1 shorted (1 Ω) R2 takes
@@ -50,6 +50,11 @@ class SingleFaultRuleTest {
 		assertTrue(f.message().startsWith("with R1 short, case '"), f.message());
 		assertTrue(f.message().contains("puts power 1 W on R2 (rated 500 mW, 200 % of it): the protection of R2 relies on"
 				+ " R1 alone"), f.message());
+		// the report carries the fault and each consequence for tools that must not parse the message
+		java.io.StringWriter json = new java.io.StringWriter();
+		bulwark.check.report.JsonReport.write(List.of(r), "test", "caution", json);
+		assertTrue(json.toString().contains("\"singleFault\": {") && json.toString().contains("\"mode\": \"short\"")
+				&& json.toString().contains("\"rating\": \"power\""), json.toString());
 		// the normal check, derated to 60 %, passes: 250 mW of R2's 300 mW
 		assertTrue(r.findings().stream().noneMatch(x -> x.rule().text().equals("resistor-power")), r.findings().toString());
 	}

@@ -30,4 +30,19 @@ public sealed interface FindingDetail {
 	/** One missing rating (the name a part writes after 'rated') and the rule that needs it. */
 	record Missing(String rating, RuleId rule) {
 	}
+
+	/** The part failed, how, and every consequence of it: other parts over their absolute ratings, cases unsolved. */
+	record SingleFault(String part, String mode, List<Consequence> consequences) implements FindingDetail {
+		public SingleFault {
+			consequences = List.copyOf(consequences);
+		}
+	}
+
+	/**
+	 * One consequence of a fault: a part's rating exceeded in a case (value and absolute rating in the unit),
+	 * or a case that cannot be solved ({@code unsolved} its reason, the rest null).
+	 */
+	record Consequence(String caseName, String part, String rating, Double value, Double rated, String unit,
+			String unsolved) {
+	}
 }

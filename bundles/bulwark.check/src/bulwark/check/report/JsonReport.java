@@ -243,6 +243,22 @@ public final class JsonReport {
 				w.beginObject().name("rating").value(m.rating()).name("rule").value(m.rule().text()).endObject();
 			}
 			w.endArray();
+		} else if (f.detail() instanceof FindingDetail.SingleFault fault) {
+			w.name("singleFault").beginObject().name("part").value(fault.part()).name("mode").value(fault.mode());
+			w.name("consequences").beginArray();
+			for (FindingDetail.Consequence c : fault.consequences()) {
+				w.beginObject().name("case").value(c.caseName());
+				if (c.unsolved() != null) {
+					w.name("unsolved").value(c.unsolved());
+				} else {
+					w.name("part").value(c.part()).name("rating").value(c.rating());
+					number(w.name("value"), c.value());
+					number(w.name("rated"), c.rated());
+					w.name("unit").value(c.unit());
+				}
+				w.endObject();
+			}
+			w.endArray().endObject();
 		}
 	}
 }

@@ -11,6 +11,7 @@ import bulwark.check.faults.SingleFaultAnalysis;
 import bulwark.check.figures.Figures;
 import bulwark.check.finding.Concern;
 import bulwark.check.finding.Finding;
+import bulwark.check.finding.FindingDetail;
 import bulwark.check.finding.Locations;
 import bulwark.check.finding.RuleId;
 import bulwark.check.finding.RuleInfo;
@@ -57,10 +58,21 @@ public final class SingleFaultRule implements Rule {
 			Part failed = context.design().parts().get(fault.part());
 			FaultConsequence worst = consequences.get(0);
 			Finding f = Finding.of(INFO, message(fault, worst, consequences.size() - 1))
-					.about(fault.part(), worst.caseName(), Locations.of(failed, DesignPackage.Literals.MEMBER__NAME));
+					.about(fault.part(), worst.caseName(), Locations.of(failed, DesignPackage.Literals.MEMBER__NAME))
+					.with(detail(fault, consequences));
 			Overstress o = worst.overstress();
 			findings.accept(o == null ? f : f.judged(o.measure().rating(), o.value(), o.limit().value(), o.measure().unit()));
 		}
+	}
+
+	private static FindingDetail.SingleFault detail(Fault fault, List<FaultConsequence> consequences) {
+		List<FindingDetail.Consequence> list = consequences.stream().map(c -> {
+			Overstress o = c.overstress();
+			return o == null ? new FindingDetail.Consequence(c.caseName(), null, null, null, null, null, c.unsolved())
+					: new FindingDetail.Consequence(c.caseName(), o.part().getName(), o.measure().rating(), o.value(),
+							o.limit().value(), o.measure().unit(), null);
+		}).toList();
+		return new FindingDetail.SingleFault(fault.part(), fault.mode().words(), list);
 	}
 
 	/**
