@@ -46,6 +46,22 @@ public class Application implements IApplication {
 				public WorkbenchWindowAdvisor createWorkbenchWindowAdvisor(IWorkbenchWindowConfigurer c) {
 					return new WorkbenchWindowAdvisor(c) {
 						@Override
+						public org.eclipse.ui.application.ActionBarAdvisor createActionBarAdvisor(
+								org.eclipse.ui.application.IActionBarConfigurer bars) {
+							return new org.eclipse.ui.application.ActionBarAdvisor(bars) {
+								@Override
+								protected void fillStatusLine(org.eclipse.jface.action.IStatusLineManager line) {
+									// the caution is always in sight, whatever is open: an item of its own, which
+									// no part's status message replaces
+									var caution = new org.eclipse.ui.texteditor.StatusLineContributionItem(
+											"bulwark.ui.caution", true, bulwark.check.report.Caution.TEXT.length());
+									caution.setText(bulwark.check.report.Caution.TEXT);
+									line.add(caution);
+								}
+							};
+						}
+
+						@Override
 						public void preWindowOpen() {
 							c.setInitialSize(new Point(1200, 760));
 							c.setShowStatusLine(true);
