@@ -52,10 +52,11 @@ public class Application implements IApplication {
 								@Override
 								protected void fillStatusLine(org.eclipse.jface.action.IStatusLineManager line) {
 									// the caution is always in sight, whatever is open: an item of its own, which
-									// no part's status message replaces
+									// no part's status message replaces; the whole text is its tooltip
 									var caution = new org.eclipse.ui.texteditor.StatusLineContributionItem(
-											"bulwark.ui.caution", true, bulwark.check.report.Caution.TEXT.length());
-									caution.setText(bulwark.check.report.Caution.TEXT);
+											"bulwark.ui.caution", true, bulwark.check.report.Caution.SHORT.length() + 2);
+									caution.setText(bulwark.check.report.Caution.SHORT);
+									caution.setToolTipText(bulwark.check.report.Caution.TEXT);
 									line.add(caution);
 								}
 							};
