@@ -139,6 +139,11 @@ class ReviewViewsUiTest {
 		assertTrue(waitUntil(() -> findings.shownFindings() != null
 				&& findings.shownFindings().stream().anyMatch(f -> f.rule().text().equals("resistor-power"))));
 		var finding = findings.shownFindings().stream().filter(f -> f.rule().text().equals("resistor-power")).findFirst().orElseThrow();
+		// the dialogs name the finding, and warn first: R_DROP is at 1280 % of its limit, more than ten times over
+		assertTrue(bulwark.ui.findings.WaivePrompt.why(finding).contains(finding.message()));
+		assertEquals("R_DROP is at 1280 % of its limit, more than 10 times over. A waiver says the part survives this;"
+				+ " a part that far over its rating is usually a design to change. Waive it all the same?",
+				bulwark.ui.findings.WaivePrompt.farOver(finding).orElseThrow());
 		findings.waive(finding, "the \"lamp\" test lasts 10 ms", "A. Reviewer");
 		assertTrue(waitUntil(() -> editor.lastResult().findings().stream()
 				.anyMatch(f -> f.rule().text().equals("resistor-power") && f.waived())), "the finding is not waived");

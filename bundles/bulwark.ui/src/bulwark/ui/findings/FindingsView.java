@@ -176,14 +176,19 @@ public class FindingsView extends ViewPart {
 			MessageDialog.openInformation(getSite().getShell(), "Waive", "Only a finding on a part can be waived.");
 			return;
 		}
-		InputDialog why = new InputDialog(getSite().getShell(), "Waive " + f.rule() + " on " + f.part(),
-				"Why is this finding acceptable? (kept with the waiver in every report)", "",
+		String title = "Waive " + f.rule() + " on " + f.part();
+		var warning = WaivePrompt.farOver(f);
+		if (warning.isPresent() && !MessageDialog.openConfirm(getSite().getShell(), title, warning.get())) {
+			return;
+		}
+		InputDialog why = new InputDialog(getSite().getShell(), title, WaivePrompt.why(f), "",
 				t -> t.isBlank() ? "A justification is needed" : null);
 		if (why.open() != Window.OK) {
 			return;
 		}
-		InputDialog who = new InputDialog(getSite().getShell(), "Waive " + f.rule() + " on " + f.part(),
-				"Who accepts it?", System.getProperty("user.name", ""), t -> t.isBlank() ? "A name is needed" : null);
+		// left empty: the one who accepts a finding writes their own name, never the login's
+		InputDialog who = new InputDialog(getSite().getShell(), title, "Who accepts it? (your name)", "",
+				t -> t.isBlank() ? "A name is needed" : null);
 		if (who.open() == Window.OK) {
 			waive(f, why.getValue(), who.getValue());
 		}
