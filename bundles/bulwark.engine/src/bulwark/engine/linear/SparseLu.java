@@ -66,10 +66,16 @@ public final class SparseLu {
 			System.arraycopy(pivotsOf.pinv, 0, pinv, 0, n);
 			System.arraycopy(pivotsOf.lp, 0, lp, 0, n + 1);
 			System.arraycopy(pivotsOf.up, 0, up, 0, n + 1);
-			li = Arrays.copyOf(pivotsOf.li, pivotsOf.li.length);
-			lx = new double[li.length];
-			ui = Arrays.copyOf(pivotsOf.ui, pivotsOf.ui.length);
-			ux = new double[ui.length];
+			if (pivotsOf.li.length != li.length) { // the other's factors outgrew the first size
+				li = new int[pivotsOf.li.length];
+				lx = new double[li.length];
+			}
+			if (pivotsOf.ui.length != ui.length) {
+				ui = new int[pivotsOf.ui.length];
+				ux = new double[ui.length];
+			}
+			System.arraycopy(pivotsOf.li, 0, li, 0, li.length);
+			System.arraycopy(pivotsOf.ui, 0, ui, 0, ui.length);
 			factored = true;
 		}
 	}

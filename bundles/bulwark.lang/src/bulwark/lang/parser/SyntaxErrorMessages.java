@@ -199,7 +199,7 @@ public class SyntaxErrorMessages extends SyntaxErrorMessageProvider {
 
 	/** A token at the top level that no statement starts with. */
 	private static String cannotStart(TokenStream tokens, Token found) {
-		boolean policy = tokens.size() > 0 && firstVisible(tokens) != null && text(firstVisible(tokens)).equals("policy");
+		boolean policy = text(firstVisible(tokens)).equals("policy");
 		String list = policy ? POLICY_ENTRIES : DESIGN_STATEMENTS;
 		switch (text(found)) {
 		case "use", "purpose", "revision", "policy":
