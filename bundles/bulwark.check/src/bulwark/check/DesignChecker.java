@@ -1,7 +1,5 @@
 package bulwark.check;
 
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
@@ -42,6 +40,7 @@ import bulwark.check.finding.SourceLocation;
 import bulwark.check.finding.Locations;
 import bulwark.check.finding.LanguageFindings;
 import bulwark.check.load.InputLimits;
+import bulwark.check.load.TextFiles;
 import bulwark.check.cases.CaseResult;
 import bulwark.check.cases.PartStress;
 import bulwark.check.finding.CheckerRules;
@@ -173,16 +172,9 @@ public final class DesignChecker {
 
 	/** A design file's text, or (a result of status error) why it is not read. */
 	private static Object read(Path file) {
-		try {
-			if (Files.size(file) > 4L * InputLimits.MAX_CHARACTERS) { // refuse before reading it into memory
-				return notChecked(file.toString(), "the file has " + Files.size(file) + " bytes; designs are limited to "
-						+ InputLimits.MAX_CHARACTERS + " characters", SourceLocation.NONE);
-			}
-			return Files.readString(file, StandardCharsets.UTF_8);
-		} catch (Exception e) {
-			return notChecked(file.toString(),
-					"cannot read the file: " + e.getClass().getSimpleName() + ": " + e.getMessage(), SourceLocation.NONE);
-		}
+		TextFiles.Read read = TextFiles.read(file, "the design");
+		return read instanceof TextFiles.Text t ? t.text()
+				: notChecked(file.toString(), ((TextFiles.Refused) read).reason(), SourceLocation.NONE);
 	}
 
 	/**
@@ -198,6 +190,10 @@ public final class DesignChecker {
 		} catch (RuntimeException e) {
 			return notChecked(loaded.file(), CheckerRules.INTERNAL, "not checked: Bulwark met a fault of its own (" + e
 					+ "); please report it with the design");
+		} catch (OutOfMemoryError e) {
+			// what this design's check allocated is garbage once we return: the other designs of a batch go on
+			return notChecked(loaded.file(), CheckerRules.BUDGET, "not checked: too large — the check of this design needed "
+					+ "more than the " + Runtime.getRuntime().maxMemory() / (1024 * 1024) + " MB of memory it runs in");
 		} finally {
 			Budget.stop();
 		}

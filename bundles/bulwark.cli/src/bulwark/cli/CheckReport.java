@@ -2,8 +2,6 @@ package bulwark.cli;
 
 import java.io.IOException;
 import java.io.Writer;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 
@@ -11,6 +9,7 @@ import javax.xml.stream.XMLStreamException;
 
 import bulwark.check.DesignChecker;
 import bulwark.check.DesignResult;
+import bulwark.check.load.TextFiles;
 import bulwark.check.report.HtmlReport;
 import bulwark.check.report.JUnitReport;
 import bulwark.check.report.JsonReport;
@@ -57,11 +56,14 @@ final class CheckReport {
 		java.util.Map<DesignResult, java.util.Map<bulwark.check.finding.Finding, List<bulwark.check.fix.Fix>>> cache =
 				new java.util.IdentityHashMap<>();
 		return (r, f) -> cache.computeIfAbsent(r, d -> {
+			if (d.status() == bulwark.check.Status.ERROR) {
+				return java.util.Map.of(); // not checked (refused, unreadable, too large): never read again for fixes
+			}
 			try {
-				String text = Files.readString(Path.of(d.file()), StandardCharsets.UTF_8);
-				return QuickFixes.of(checker, text, d.file(), d);
-			} catch (IOException | RuntimeException e) {
-				return java.util.Map.of(); // an unreadable file has no fixes; its findings say why
+				TextFiles.Read read = TextFiles.read(Path.of(d.file()), "the design");
+				return read instanceof TextFiles.Text t ? QuickFixes.of(checker, t.text(), d.file(), d) : java.util.Map.of();
+			} catch (RuntimeException | OutOfMemoryError e) {
+				return java.util.Map.of(); // no fixes offered; the findings stand as checked
 			}
 		}).getOrDefault(f, List.of());
 	}

@@ -1,7 +1,6 @@
 package bulwark.check.policy;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.FileTime;
@@ -20,6 +19,7 @@ import bulwark.check.finding.LanguageFindings;
 import bulwark.check.finding.Severity;
 import bulwark.check.load.DesignLoader;
 import bulwark.check.load.LoadedPolicy;
+import bulwark.check.load.TextFiles;
 
 /**
  * Reads review policy files, once per file version: a batch of a thousand designs naming one policy parses
@@ -51,9 +51,10 @@ public final class PolicyFiles {
 		try {
 			real = file.toRealPath();
 			version = new Version(real, Files.getLastModifiedTime(real), Files.size(real));
+		} catch (java.nio.file.NoSuchFileException e) {
+			return failed("there is no review policy " + file);
 		} catch (IOException e) {
-			return failed("cannot read the review policy " + file + ": " + e.getClass().getSimpleName() + ": "
-					+ e.getMessage());
+			return failed("cannot read the review policy " + file + ": " + e.getMessage());
 		}
 		return cache.computeIfAbsent(version, v -> load(v.file()));
 	}
@@ -86,15 +87,9 @@ public final class PolicyFiles {
 	}
 
 	private Resolution load(Path file) {
-		try {
-			if (Files.size(file) > 4L * InputLimits.MAX_CHARACTERS) {
-				return failed("the review policy " + file + " is too large to be one");
-			}
-			return parse(Files.readString(file, StandardCharsets.UTF_8), file.toString());
-		} catch (IOException | RuntimeException e) {
-			return failed("cannot read the review policy " + file + ": " + e.getClass().getSimpleName() + ": "
-					+ e.getMessage());
-		}
+		TextFiles.Read read = TextFiles.read(file, "the review policy");
+		return read instanceof TextFiles.Text t ? parse(t.text(), file.toString())
+				: failed(((TextFiles.Refused) read).reason());
 	}
 
 	/** A problem of the policy file, its place in that file written into the message. */

@@ -46,6 +46,11 @@ public final class LibraryPath {
 		}
 	}
 
+	/** The file name ending of designs and libraries. */
+	public static final String EXTENSION = ".bulwark";
+	/** Largest library file read, in bytes: as for a design, four million characters of four bytes. */
+	static final long MAX_BYTES = 16_000_000L;
+
 	private LibraryPath() {
 	}
 
@@ -75,6 +80,10 @@ public final class LibraryPath {
 					? "'" + written + "' must be relative to the design's folder or the library path"
 					: "'" + written + "' is not a file name");
 		}
+		if (!relative.getFileName().toString().endsWith(EXTENSION)) {
+			return Located.refused("'" + written + "' is not a parts library: a library is a Bulwark file whose name ends in "
+					+ EXTENSION + " and whose first word is 'library'");
+		}
 		URI uri = context == null ? null : context.getURI();
 		List<Path> roots = new ArrayList<>();
 		if (uri != null && uri.isFile()) {
@@ -94,7 +103,12 @@ public final class LibraryPath {
 			}
 			case INSIDE -> {
 				if (Files.isRegularFile(place.file())) {
-					return Located.found(place.file());
+					return tooLarge(place.file()) ? Located.refused("the library '" + written + "' is larger than "
+							+ MAX_BYTES / 1_000_000 + " MB; a parts library is a few thousand lines") : Located.found(place.file());
+				}
+				if (Files.exists(place.file()) && !Files.isDirectory(place.file())) {
+					return Located.refused("'" + written + "' is not a regular file (a pipe, a device or a socket); "
+							+ "a library must be a file");
 				}
 			}
 			}
@@ -103,6 +117,14 @@ public final class LibraryPath {
 			return Located.refused("'" + written + "' leaves the design's folder; libraries stay in it or on the library path");
 		}
 		return Located.refused("no library file '" + written + "' in " + roots);
+	}
+
+	private static boolean tooLarge(Path file) {
+		try {
+			return Files.size(file) > MAX_BYTES;
+		} catch (java.io.IOException e) {
+			return false; // the loader says why it cannot read it
+		}
 	}
 
 	private static boolean looksAbsolute(String written) {

@@ -34,6 +34,7 @@ public final class IssueCodes {
 	public static final String LIBRARY_NOT_FOUND = PREFIX + "libraryNotFound";
 	public static final String LIBRARY_OUTSIDE = PREFIX + "libraryOutside";
 	public static final String LIBRARY_INVALID = PREFIX + "libraryInvalid";
+	public static final String LIBRARY_CYCLE = PREFIX + "libraryCycle";
 	public static final String DEFINITION_KIND = PREFIX + "definitionKind";
 	public static final String KEYWORD_AS_NAME = PREFIX + "keywordAsName";
 	public static final String SELF_CONNECTED = PREFIX + "selfConnected";

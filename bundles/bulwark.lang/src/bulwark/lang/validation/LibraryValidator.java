@@ -46,13 +46,31 @@ public class LibraryValidator extends AbstractDeclarativeValidator {
 		}
 		LibraryPath.Located l = LibraryPath.locate(use.eResource(), use.getImportURI());
 		if (l.file().isEmpty()) {
-			error(l.problem(), use, DesignPackage.Literals.USE__IMPORT_URI,
-					l.problem().startsWith("no library") ? IssueCodes.LIBRARY_NOT_FOUND : IssueCodes.LIBRARY_OUTSIDE);
+			String code = l.problem().startsWith("no library") ? IssueCodes.LIBRARY_NOT_FOUND
+					: l.problem().contains(" not a ") || l.problem().contains("larger than") ? IssueCodes.LIBRARY_INVALID
+							: IssueCodes.LIBRARY_OUTSIDE;
+			error(l.problem(), use, DesignPackage.Literals.USE__IMPORT_URI, code);
 			return;
 		}
-		for (String problem : libraryErrors(use, l.file().get())) {
-			error(problem, use, DesignPackage.Literals.USE__IMPORT_URI, IssueCodes.LIBRARY_INVALID);
+		URI target = URI.createFileURI(l.file().get().toString());
+		if (target.equals(ownFile(use)) || VALIDATING.get().contains(target)) {
+			warning("'" + use.getImportURI() + "' is already being read: the libraries use each other in a circle; "
+					+ "remove this use", use, DesignPackage.Literals.USE__IMPORT_URI, IssueCodes.LIBRARY_CYCLE);
+			return;
 		}
+		for (Issue problem : libraryProblems(use, l.file().get())) {
+			if (problem.getSeverity() == Severity.ERROR) {
+				error(problem.getMessage(), use, DesignPackage.Literals.USE__IMPORT_URI, IssueCodes.LIBRARY_INVALID);
+			} else {
+				warning(problem.getMessage(), use, DesignPackage.Literals.USE__IMPORT_URI, IssueCodes.LIBRARY_CYCLE);
+			}
+		}
+	}
+
+	private static URI ownFile(Use use) {
+		URI own = use.eResource().getURI();
+		return own != null && own.isFile() ? URI.createFileURI(java.nio.file.Path.of(own.toFileString()).toAbsolutePath()
+				.normalize().toString()) : null;
 	}
 
 	/** Libraries being validated on this thread: a library that uses itself, directly or not, is validated once. */
@@ -63,7 +81,7 @@ public class LibraryValidator extends AbstractDeclarativeValidator {
 	 * the design itself (a power rating written in volts is refused there too), and a design whose library has
 	 * errors is not checked, so that no part takes a rating the language would refuse.
 	 */
-	private static List<String> libraryErrors(Use use, java.nio.file.Path file) {
+	private static List<Issue> libraryProblems(Use use, java.nio.file.Path file) {
 		URI uri = URI.createFileURI(file.toString());
 		Set<URI> validating = VALIDATING.get();
 		ResourceSet set = use.eResource().getResourceSet();
@@ -75,20 +93,31 @@ public class LibraryValidator extends AbstractDeclarativeValidator {
 			if (!(library instanceof XtextResource x)) {
 				return List.of();
 			}
-			List<String> problems = new ArrayList<>();
+			List<Issue> problems = new ArrayList<>();
 			for (Issue issue : x.getResourceServiceProvider().getResourceValidator().validate(x, CheckMode.ALL,
 					CancelIndicator.NullImpl)) {
 				if (issue.getSeverity() == Severity.ERROR) {
-					problems.add("the library '" + use.getImportURI() + "' has an error at " + issue.getLineNumber() + ":"
-							+ issue.getColumn() + ": " + issue.getMessage() + " — fix the library; until then this design is not checked");
+					problems.add(problem(Severity.ERROR, "the library '" + use.getImportURI() + "' has an error at "
+							+ issue.getLineNumber() + ":" + issue.getColumn() + ": " + issue.getMessage()
+							+ " — fix the library; until then this design is not checked"));
+				} else if (IssueCodes.LIBRARY_CYCLE.equals(issue.getCode())) {
+					problems.add(problem(Severity.WARNING, "the library '" + use.getImportURI() + "' at "
+							+ issue.getLineNumber() + ":" + issue.getColumn() + ": " + issue.getMessage()));
 				}
 			}
 			return problems;
 		} catch (RuntimeException e) {
-			return List.of("the library '" + use.getImportURI() + "' cannot be read: " + e.getMessage());
+			return List.of(problem(Severity.ERROR, "the library '" + use.getImportURI() + "' cannot be read: " + e.getMessage()));
 		} finally {
 			validating.remove(uri);
 		}
+	}
+
+	private static Issue problem(Severity severity, String message) {
+		Issue.IssueImpl issue = new Issue.IssueImpl();
+		issue.setSeverity(severity);
+		issue.setMessage(message);
+		return issue;
 	}
 
 	@Check
