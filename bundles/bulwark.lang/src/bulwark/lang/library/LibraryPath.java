@@ -21,14 +21,24 @@ import bulwark.lang.install.Installation;
  * server's) searches the folders of {@link Installation#fromLaunch()}.
  */
 public final class LibraryPath {
+	/** Why a name finds no library. */
+	public enum Refusal {
+		/** No file of that name in any of the folders. */
+		NOT_FOUND,
+		/** The name is not a relative file name, or it leads out of the folders. */
+		OUTSIDE,
+		/** The file is there but cannot be a library: another kind of file, not a regular file, too large. */
+		NOT_A_LIBRARY
+	}
+
 	/** The found file, or why there is none. */
-	public record Located(Optional<Path> file, String problem) {
+	public record Located(Optional<Path> file, Refusal refusal, String problem) {
 		static Located found(Path p) {
-			return new Located(Optional.of(p), null);
+			return new Located(Optional.of(p), null, null);
 		}
 
-		static Located refused(String why) {
-			return new Located(Optional.empty(), why);
+		static Located refused(Refusal refusal, String why) {
+			return new Located(Optional.empty(), refusal, why);
 		}
 	}
 
@@ -72,16 +82,16 @@ public final class LibraryPath {
 	/** Locates what a resource names in a {@code use}. */
 	public static Located locate(Resource context, String written) {
 		if (written == null || written.isBlank()) {
-			return Located.refused("name the library file, for example use \"lib/generic-parts.bulwark\"");
+			return Located.refused(Refusal.OUTSIDE, "name the library file, for example use \"lib/generic-parts.bulwark\"");
 		}
 		Path relative = Confinement.relativeName(written);
 		if (relative == null) {
-			return Located.refused(written.contains(":") || written.startsWith("~") || looksAbsolute(written)
+			return Located.refused(Refusal.OUTSIDE, written.contains(":") || written.startsWith("~") || looksAbsolute(written)
 					? "'" + written + "' must be relative to the design's folder or the library path"
 					: "'" + written + "' is not a file name");
 		}
 		if (!relative.getFileName().toString().endsWith(EXTENSION)) {
-			return Located.refused("'" + written + "' is not a parts library: a library is a Bulwark file whose name ends in "
+			return Located.refused(Refusal.NOT_A_LIBRARY, "'" + written + "' is not a parts library: a library is a Bulwark file whose name ends in "
 					+ EXTENSION + " and whose first word is 'library'");
 		}
 		URI uri = context == null ? null : context.getURI();
@@ -99,24 +109,24 @@ public final class LibraryPath {
 			switch (place.verdict()) {
 			case CLIMBS_OUT -> escapes = true;
 			case LINKS_OUT, UNREADABLE -> {
-				return Located.refused(place.problem());
+				return Located.refused(Refusal.OUTSIDE, place.problem());
 			}
 			case INSIDE -> {
 				if (Files.isRegularFile(place.file())) {
-					return tooLarge(place.file()) ? Located.refused("the library '" + written + "' is larger than "
+					return tooLarge(place.file()) ? Located.refused(Refusal.NOT_A_LIBRARY, "the library '" + written + "' is larger than "
 							+ MAX_BYTES / 1_000_000 + " MB; a parts library is a few thousand lines") : Located.found(place.file());
 				}
 				if (Files.exists(place.file()) && !Files.isDirectory(place.file())) {
-					return Located.refused("'" + written + "' is not a regular file (a pipe, a device or a socket); "
+					return Located.refused(Refusal.NOT_A_LIBRARY, "'" + written + "' is not a regular file (a pipe, a device or a socket); "
 							+ "a library must be a file");
 				}
 			}
 			}
 		}
 		if (escapes) {
-			return Located.refused("'" + written + "' leaves the design's folder; libraries stay in it or on the library path");
+			return Located.refused(Refusal.OUTSIDE, "'" + written + "' leaves the design's folder; libraries stay in it or on the library path");
 		}
-		return Located.refused("no library file '" + written + "' in " + roots);
+		return Located.refused(Refusal.NOT_FOUND, "no library file '" + written + "' in " + roots);
 	}
 
 	private static boolean tooLarge(Path file) {

@@ -46,9 +46,11 @@ public class LibraryValidator extends AbstractDeclarativeValidator {
 		}
 		LibraryPath.Located l = LibraryPath.locate(use.eResource(), use.getImportURI());
 		if (l.file().isEmpty()) {
-			String code = l.problem().startsWith("no library") ? IssueCodes.LIBRARY_NOT_FOUND
-					: l.problem().contains(" not a ") || l.problem().contains("larger than") ? IssueCodes.LIBRARY_INVALID
-							: IssueCodes.LIBRARY_OUTSIDE;
+			String code = switch (l.refusal()) {
+			case NOT_FOUND -> IssueCodes.LIBRARY_NOT_FOUND;
+			case NOT_A_LIBRARY -> IssueCodes.LIBRARY_INVALID;
+			case OUTSIDE -> IssueCodes.LIBRARY_OUTSIDE;
+			};
 			error(l.problem(), use, DesignPackage.Literals.USE__IMPORT_URI, code);
 			return;
 		}
