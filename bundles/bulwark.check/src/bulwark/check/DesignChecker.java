@@ -251,7 +251,9 @@ public final class DesignChecker {
 				.thenComparingInt(f -> f.location().column()));
 		Status status = solverFailed ? Status.ERROR
 				: all.stream().anyMatch(f -> f.severity() == Severity.ERROR && !f.waived()) ? Status.FAIL
-						: Status.PASS;
+						: all.stream().anyMatch(f -> f.rule().equals(bulwark.check.rules.RatingMissingRule.ID) && !f.waived())
+								? Status.PASS_UNCHECKED
+								: Status.PASS;
 		return new DesignResult(loaded.file(), title, status, all, caseResults, policy.title(),
 				WorstStresses.of(compiled, solved, policy), function, waveforms);
 	}

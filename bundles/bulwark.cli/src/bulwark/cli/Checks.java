@@ -58,14 +58,26 @@ final class Checks {
 		} else {
 			writeAtomically(options.out, report.toString());
 		}
-		long pass = results.stream().filter(r -> r.status() == Status.PASS).count();
-		long fail = results.stream().filter(r -> r.status() == Status.FAIL).count();
-		long error = results.stream().filter(r -> r.status() == Status.ERROR).count();
-		err.printf("bulwark: %d design(s) checked: %d pass, %d fail, %d not checked%n", results.size(), pass, fail,
-				error);
+		err.println("bulwark: " + summary(results));
 		err.println("bulwark: " + bulwark.check.report.Caution.TEXT);
 		err.flush();
 		return exitCode(results, options.failOn);
+	}
+
+	/**
+	 * "3 design(s) checked: 1 pass, 1 pass with unchecked parts, 1 fail, 0 not checked"; the unchecked count
+	 * only when there is one, so that a plain pass is never read into it.
+	 */
+	static String summary(List<DesignResult> results) {
+		StringBuilder s = new StringBuilder(results.size() + " design(s) checked: ");
+		java.util.StringJoiner counts = new java.util.StringJoiner(", ");
+		for (Status status : Status.values()) {
+			long n = results.stream().filter(r -> r.status() == status).count();
+			if (n > 0 || status != Status.PASS_UNCHECKED) {
+				counts.add(n + " " + status.label());
+			}
+		}
+		return s.append(counts).toString();
 	}
 
 	/** Not checked beats findings beats clean; which findings count is the '--fail-on' option's. */

@@ -40,7 +40,7 @@ final class ClassSummary {
 		StringBuilder s = new StringBuilder("<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\">"
 				+ "<title>Bulwark class summary</title><style>body{font-family:sans-serif;margin:2em}"
 				+ "table{border-collapse:collapse}td,th{border:1px solid #bbb;padding:.2em .5em}"
-				+ ".caution{border:2px solid #b23a48;padding:.6em}.pass{color:#4a7c59}.fail,.error{color:#b23a48}"
+				+ ".caution{border:2px solid #b23a48;padding:.6em}.pass{color:#4a7c59}.pass-unchecked{color:#8a6d1f}.fail,.error{color:#b23a48}"
 				+ "</style></head><body>\n<h1>Class summary</h1>\n");
 		s.append("<p class=\"caution\"><strong>").append(HtmlReport.escape(bulwark.check.report.Caution.TEXT)).append("</strong></p>\n");
 		s.append("<p>").append(files.size()).append(" design(s) under the review policy '")
@@ -54,7 +54,7 @@ final class ClassSummary {
 					.forEach(f -> concerns.add(f.concern().id()));
 			s.append("<tr><td><a href=\"").append(HtmlReport.escape(pages.get(i))).append("\">")
 					.append(HtmlReport.escape(dir.relativize(files.get(i)).toString())).append("</a></td><td class=\"")
-					.append(r.status().id()).append("\">").append(r.status().id()).append("</td><td>")
+					.append(r.status().id()).append("\">").append(r.status().label()).append("</td><td>")
 					.append(count(r, Severity.ERROR, null)).append("</td><td>").append(count(r, Severity.WARNING, null))
 					.append("</td><td>").append(ClassroomCommand.missedRequirements(r)).append("</td><td>")
 					.append(HtmlReport.escape(String.join(", ", concerns))).append("</td></tr>\n");

@@ -32,7 +32,19 @@ class RatingMissingRuleTest {
 		assertEquals(Severity.WARNING, Fixtures.only(r, ID).severity());
 		// the warning names the rule that cannot check, never a silent pass
 		assertTrue(Fixtures.only(r, ID).message().contains("power (resistor-power)"), Fixtures.only(r, ID).message());
-		assertEquals(Status.PASS, r.status()); // a warning does not fail the design
+		// a warning does not fail the design, but a part whose stress was not judged is never a plain pass
+		assertEquals(Status.PASS_UNCHECKED, r.status());
+		assertEquals("pass with unchecked parts", r.status().label());
+		assertTrue(r.status().passes());
+	}
+
+	@Test
+	void aWaivedMissingRatingIsAPlainPass() {
+		// the engineer's waiver, with its justification, is a decision: the part is then accounted for
+		String waived = MISSING + "waive \"rating-missing\" on R1 because \"a jumper, carries no power\" by \"kim\" on \"2026-12-04\"\n";
+		DesignResult r = Fixtures.check(waived);
+		assertTrue(Fixtures.only(r, ID).waived());
+		assertEquals(Status.PASS, r.status());
 	}
 
 	@Test
@@ -59,6 +71,7 @@ class RatingMissingRuleTest {
 		DesignResult r = Fixtures.check(rated);
 		assertEquals(Fixtures.expected(rated, ID), Fixtures.actual(r, ID));
 		Fixtures.assertSilent(r, ID);
+		assertEquals(Status.PASS, r.status());
 	}
 
 	@Test

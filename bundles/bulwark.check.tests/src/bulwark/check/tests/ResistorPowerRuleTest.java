@@ -25,9 +25,9 @@ class ResistorPowerRuleTest {
 			source V1 (plus: bench, minus: gnd) { voltage 12 V }
 			resistor R_DROP (a: bench, b: lamp) { #! resistor-power
 			  value 150 Ω
-			  rated power 125 mW
+			  rated power 125 mW rated voltage 200 V
 			}
-			resistor R_LAMP (a: lamp, b: gnd) { value 100 Ω rated power 2 W }
+			resistor R_LAMP (a: lamp, b: gnd) { value 100 Ω rated power 2 W rated voltage 200 V }
 			""";
 
 	/** Same circuit with a 0.5 W dropping resistor: 0.3456 W is within its rating. */

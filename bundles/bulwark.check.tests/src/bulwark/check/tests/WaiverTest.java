@@ -17,7 +17,7 @@ class WaiverTest {
 			reference net gnd
 			net v
 			source V1 (plus: v, minus: gnd) { voltage 12 V }
-			resistor R1 (a: v, b: gnd) { value 150 Ω rated power 125 mW }
+			resistor R1 (a: v, b: gnd) { value 150 Ω rated power 125 mW rated voltage 200 V }
 			""";
 
 	@Test

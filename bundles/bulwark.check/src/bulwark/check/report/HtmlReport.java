@@ -31,7 +31,7 @@ public final class HtmlReport {
 		w.write("<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\"><title>Bulwark report</title>\n<style>");
 		w.write("body{font-family:sans-serif;margin:2em;max-width:70em}table{border-collapse:collapse;margin:.5em 0}"
 				+ "td,th{border:1px solid #bbb;padding:.2em .5em;text-align:left;vertical-align:top}"
-				+ ".caution{border:2px solid #b23a48;padding:.6em}.pass{color:#4a7c59}.fail,.error{color:#b23a48}"
+				+ ".caution{border:2px solid #b23a48;padding:.6em}.pass{color:#4a7c59}.pass-unchecked{color:#8a6d1f}.fail,.error{color:#b23a48}"
 				+ ".waived{color:#777}");
 		w.write("</style></head><body>\n<h1>Bulwark report</h1>\n");
 		w.write("<p class=\"caution\"><strong>" + escape(caution) + "</strong></p>\n");
@@ -45,7 +45,7 @@ public final class HtmlReport {
 
 	private static void design(DesignResult r, Writer w) throws IOException {
 		w.write("<h2>" + escape(r.title() == null ? r.file() : r.title()) + " <span class=\"" + r.status().id() + "\">"
-				+ r.status().id() + "</span></h2>\n<p>" + escape(r.file())
+				+ r.status().label() + "</span></h2>\n<p>" + escape(r.file())
 				+ (r.policy() == null ? "" : " — review policy '" + escape(r.policy()) + "'") + "</p>\n");
 		if (r.findings().isEmpty()) {
 			w.write("<p>No findings.</p>\n");

@@ -54,7 +54,8 @@ public final class RatingMissingRule implements Rule {
 				List<String> named = missing.stream().map(m -> (m.rule().equals(SeriesStringRule.ID) ? "voltage or package"
 						: m.rating()) + " (" + m.rule() + ")").toList();
 				findings.accept(Finding.of(INFO, part.getName() + " has no rating for " + String.join(", ", named)
-						+ ", so that is not checked: add for example '" + example(missing.get(0).rating()) + "'")
+						+ (missing.size() == 1 ? ", so that stress is not checked" : ", so those stresses are not checked")
+						+ " and the design can at best pass with unchecked parts: add for example '" + example(missing.get(0).rating()) + "'")
 						.about(part.getName(), null, Locations.of(part, DesignPackage.Literals.MEMBER__NAME))
 						.with(new FindingDetail.MissingRatings(missing)));
 			}

@@ -48,6 +48,16 @@ class CheckCommandTest {
 		CliRun run = CliRun.of("check", unrated.toString());
 		assertEquals(0, run.exitCode(), run.err());
 		assertTrue(run.out().contains(":5:10: warning rating-missing R1 has no rating for power (resistor-power)"), run.out());
+		// never a plain pass: the summary, the JSON status and the JUnit case say a part went unchecked
+		assertTrue(run.err().contains("1 design(s) checked: 0 pass, 1 pass with unchecked parts, 0 fail, 0 not checked"),
+				run.err());
+		CliRun json = CliRun.of("check", "--format", "json", unrated.toString());
+		assertEquals("pass-unchecked", JsonParser.parseString(json.out()).getAsJsonObject().getAsJsonArray("designs")
+				.get(0).getAsJsonObject().get("status").getAsString());
+		CliRun junit = CliRun.of("check", "--format", "junit", unrated.toString());
+		assertTrue(junit.out().contains("name=\"rating-missing\"><skipped message=\"1 part(s) not checked: R1 has no rating"),
+				junit.out());
+		assertTrue(!CliRun.of("check", CliRun.example(GREENHOUSE)).err().contains("unchecked"), "a plain pass says nothing of it");
 	}
 
 	@Test

@@ -167,7 +167,7 @@ public class FindingsView extends ViewPart {
 		editor = from;
 		viewer.setInput(result.findings());
 		setContentDescription((result.title() == null ? result.file() : result.title()) + ": "
-				+ result.status().id() + ", " + result.findings().size() + " finding(s)");
+				+ result.status().label() + ", " + result.findings().size() + " finding(s)");
 	}
 
 	/** Asks for the justification and the name the review policy wants, then writes the waiver. */
