@@ -4,6 +4,8 @@ import java.util.List;
 
 import bulwark.check.function.FunctionFigures;
 import bulwark.check.finding.Finding;
+import bulwark.check.finding.FindingDetail;
+import bulwark.check.finding.FindingsCap;
 import bulwark.check.finding.Severity;
 import bulwark.check.cases.CaseResult;
 
@@ -15,7 +17,7 @@ import bulwark.check.cases.CaseResult;
 public record DesignResult(String file, String title, Status status, List<Finding> findings, List<CaseResult> cases,
 		String policy, List<WorstStress> stresses, FunctionFigures function, List<WaveformTrace> waveforms) {
 	public DesignResult {
-		findings = List.copyOf(findings);
+		findings = FindingsCap.of(List.copyOf(findings));
 		cases = List.copyOf(cases);
 		stresses = List.copyOf(stresses);
 		waveforms = List.copyOf(waveforms);
@@ -33,6 +35,19 @@ public record DesignResult(String file, String title, Status status, List<Findin
 	}
 
 	public long errorCount() {
-		return findings.stream().filter(f -> f.severity() == Severity.ERROR && !f.waived()).count();
+		return count(Severity.ERROR);
+	}
+
+	/** Unwaived findings of a severity, the ones a capped list leaves out included. */
+	public long count(Severity severity) {
+		long n = 0;
+		for (Finding f : findings) {
+			if (f.detail() instanceof FindingDetail.Omitted o) {
+				n += severity == Severity.ERROR ? o.errors() : severity == Severity.WARNING ? o.warnings() : o.infos();
+			} else if (f.severity() == severity && !f.waived()) {
+				n++;
+			}
+		}
+		return n;
 	}
 }

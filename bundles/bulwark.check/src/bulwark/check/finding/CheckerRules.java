@@ -24,8 +24,11 @@ public final class CheckerRules {
 			"the check took longer than its time budget");
 	public static final RuleInfo INTERNAL = new RuleInfo("internal", Concern.SOLVER, Severity.ERROR,
 			"the check met a fault of its own");
+	public static final RuleInfo OMITTED = new RuleInfo("omitted", Concern.STRUCTURE, Severity.INFO,
+			"a design has more findings than a report lists");
 	/** In report order. */
-	public static final List<RuleInfo> ALL = List.of(SYNTAX, STRUCTURE, FILE, POLICY, WAIVER, SOLVER, BUDGET, INTERNAL);
+	public static final List<RuleInfo> ALL = List.of(SYNTAX, STRUCTURE, FILE, POLICY, WAIVER, SOLVER, BUDGET, INTERNAL,
+			OMITTED);
 	/** Findings that mean the design was not (fully) checked: never part of a pass. */
 	public static final List<RuleId> NOT_CHECKED = List.of(SOLVER.id(), BUDGET.id(), INTERNAL.id());
 

@@ -27,6 +27,10 @@ public sealed interface FindingDetail {
 		}
 	}
 
+	/** How many findings of each severity a capped list leaves out (see FindingsCap); waived ones apart. */
+	record Omitted(long errors, long warnings, long infos, long waived) implements FindingDetail {
+	}
+
 	/** One missing rating (the name a part writes after 'rated') and the rule that needs it. */
 	record Missing(String rating, RuleId rule) {
 	}
