@@ -34,6 +34,37 @@ class AtomicSaveTest {
 		assertTrue(writer.waitFor(30, TimeUnit.SECONDS));
 		assertEquals("design \"as it was\"\n", Files.readString(design), "the design survives the killed save");
 		assertTrue(!Files.exists(dir.resolve("input.bulwark.bak")), "no backup of a save that never finished");
+		assertTrue(temporarySize(dir) >= 1_000_000, "the killed save left its temporary file");
+		// the next save of that file removes what the killed one left
+		AtomicFile.write(design, "design \"next\"\n", false);
+		assertEquals(0, temporarySize(dir), "a stale temporary file of our own is removed");
+		assertEquals("design \"next\"\n", Files.readString(design));
+	}
+
+	@Test
+	void aLinkStaysALinkAndItsTargetGetsTheText(@TempDir Path dir) throws Exception {
+		Path real = Files.createDirectories(dir.resolve("shared")).resolve("input.bulwark");
+		Files.writeString(real, "first\n");
+		Path link = Files.createSymbolicLink(dir.resolve("input.bulwark"), Path.of("shared", "input.bulwark"));
+		AtomicFile.write(link, "second\n", true);
+		assertTrue(Files.isSymbolicLink(link), "the link was replaced by a file");
+		assertEquals("second\n", Files.readString(real));
+		assertEquals("first\n", Files.readString(real.resolveSibling("input.bulwark.bak")), "the backup sits by the target");
+	}
+
+	@Test
+	void aFileKeepsItsPermissionsAndANewOneGetsTheUsualOnes(@TempDir Path dir) throws Exception {
+		Path design = dir.resolve("input.bulwark");
+		Files.writeString(design, "first\n");
+		var groupWritable = java.nio.file.attribute.PosixFilePermissions.fromString("rw-rw-r--");
+		Files.setPosixFilePermissions(design, groupWritable);
+		AtomicFile.write(design, "second\n", true);
+		assertEquals(groupWritable, Files.getPosixFilePermissions(design));
+		// a new file: what any program's new file gets under this umask, not a temporary file's owner-only mode
+		Path probe = Files.createFile(dir.resolve("probe"));
+		Path fresh = dir.resolve("fresh.bulwark");
+		AtomicFile.write(fresh, "new\n", false);
+		assertEquals(Files.getPosixFilePermissions(probe), Files.getPosixFilePermissions(fresh));
 	}
 
 	@Test
