@@ -24,7 +24,9 @@ public final class BulwarkCommand implements Runnable {
 	}
 
 	/** Runs the command line with the given streams and returns its exit code; never calls System.exit. */
-	public static int run(String[] args, PrintWriter out, PrintWriter err) {
+	public static int run(String[] args, PrintWriter rawOut, PrintWriter rawErr) {
+		PrintWriter out = new PrintWriter(new PrintableWriter(rawOut), true);
+		PrintWriter err = new PrintWriter(new PrintableWriter(rawErr), true);
 		CommandLine.tracer().setLevel(CommandLine.TraceLevel.OFF); // the library's own warnings are not ours to print
 		CommandLine cli = new CommandLine(new BulwarkCommand());
 		cli.setOut(out);
@@ -44,6 +46,8 @@ public final class BulwarkCommand implements Runnable {
 		int code = cli.execute(args);
 		out.flush();
 		err.flush();
+		rawOut.flush();
+		rawErr.flush();
 		return code;
 	}
 }

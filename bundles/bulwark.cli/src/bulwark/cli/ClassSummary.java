@@ -16,20 +16,22 @@ final class ClassSummary {
 	}
 
 	static String csv(Path dir, List<Path> files, List<DesignResult> results) {
-		StringBuilder s = new StringBuilder("design,title,status,errors,warnings");
+		List<String> header = new java.util.ArrayList<>(List.of("design", "title", "status", "errors", "warnings"));
 		for (Concern c : Concern.values()) {
-			s.append(",errors ").append(c.id());
+			header.add("errors " + c.id());
 		}
-		s.append(",requirements missed\n");
+		header.add("requirements missed");
+		StringBuilder s = new StringBuilder(String.join(",", header.stream().map(ClassSummary::field).toList())).append('\n');
 		for (int i = 0; i < files.size(); i++) {
 			DesignResult r = results.get(i);
-			s.append(field(dir.relativize(files.get(i)).toString())).append(',').append(field(r.title())).append(',')
-					.append(r.status().id()).append(',').append(count(r, Severity.ERROR, null)).append(',')
-					.append(count(r, Severity.WARNING, null));
+			List<Object> row = new java.util.ArrayList<>(List.of(dir.relativize(files.get(i)).toString(),
+					r.title() == null ? "" : r.title(), r.status().id(), count(r, Severity.ERROR, null),
+					count(r, Severity.WARNING, null)));
 			for (Concern c : Concern.values()) {
-				s.append(',').append(count(r, Severity.ERROR, c));
+				row.add(count(r, Severity.ERROR, c));
 			}
-			s.append(',').append(ClassroomCommand.missedRequirements(r)).append('\n');
+			row.add(ClassroomCommand.missedRequirements(r));
+			s.append(String.join(",", row.stream().map(v -> field(String.valueOf(v))).toList())).append('\n');
 		}
 		// the caution as the last row, in the first column, where a spreadsheet shows it
 		s.append(field(bulwark.check.report.Caution.TEXT)).append('\n');
@@ -63,17 +65,25 @@ final class ClassSummary {
 	}
 
 	private static long count(DesignResult r, Severity severity, Concern concern) {
+		if (concern == null) {
+			return r.count(severity);
+		}
 		return r.findings().stream().filter(
-				(Finding f) -> f.severity() == severity && !f.waived() && (concern == null || f.concern() == concern))
+				(Finding f) -> f.severity() == severity && !f.waived() && f.concern() == concern)
 				.count();
 	}
 
-	/** A CSV field (RFC 4180): quoted when it holds a comma, quote or line break; a leading = + - @ defused. */
+	/**
+	 * A CSV field (RFC 4180), always quoted, so that no comma, quote or line break of any kind in a title or
+	 * file name can split it. A field starting with = + - @, a tab or a carriage return gets a leading
+	 * apostrophe, whatever follows, so that a spreadsheet never reads it as a formula [common practice: the
+	 * spreadsheet formula-injection guidance of the web security community].
+	 */
 	static String field(String value) {
-		if (value == null) {
-			return "";
+		String v = value == null ? "" : value;
+		if (!v.isEmpty() && "=+-@\t\r".indexOf(v.charAt(0)) >= 0) {
+			v = "'" + v;
 		}
-		String v = value.matches("^[=+\\-@].*") ? "'" + value : value;
-		return v.matches(".*[,\"\\r\\n].*") ? "\"" + v.replace("\"", "\"\"") + "\"" : v;
+		return "\"" + v.replace("\"", "\"\"") + "\"";
 	}
 }

@@ -76,10 +76,9 @@ final class ClassroomCommand implements Callable<Integer> {
 		List<DesignResult> results = Checks.checkAll(Language.checker(r.policy().get()), files, jobs,
 				Checks.progress(files.size(), err));
 		Files.createDirectories(target);
-		List<String> pages = new ArrayList<>();
+		List<String> pages = pageNames(files.stream().map(dir::relativize).toList());
 		for (int i = 0; i < files.size(); i++) {
-			String page = pageName(dir.relativize(files.get(i)));
-			pages.add(page);
+			String page = pages.get(i);
 			StringWriter html = new StringWriter();
 			HtmlReport.write(List.of(results.get(i)), Version.get(), bulwark.check.report.Caution.TEXT, html);
 			Checks.writeAtomically(target.resolve(page), html.toString());
@@ -92,10 +91,29 @@ final class ClassroomCommand implements Callable<Integer> {
 		return ExitCodes.CLEAN;
 	}
 
-	/** "group-a/kim.bulwark" → "group-a__kim.html": one flat folder of pages, one per design. */
+	/** "group-a/kim.bulwark" → "group-a__kim": one flat folder of pages, one per design. */
 	static String pageName(Path relative) {
 		String name = relative.toString().replace('\\', '/').replaceAll("\\.bulwark$", "");
-		return name.replace("/", "__").replaceAll("[^A-Za-z0-9._-]", "_") + ".html";
+		return name.replace("/", "__").replaceAll("[^A-Za-z0-9._-]", "_");
+	}
+
+	/**
+	 * A page name per design, in order, no two alike — not even in letter case, for file systems that ignore
+	 * it — and none the summary's: "a b" and "a_b" become a_b.html and a_b-2.html, a design called
+	 * "summary" gets summary-2.html.
+	 */
+	static List<String> pageNames(List<Path> relatives) {
+		java.util.Set<String> taken = new java.util.HashSet<>(List.of("summary"));
+		List<String> pages = new ArrayList<>();
+		for (Path relative : relatives) {
+			String base = pageName(relative);
+			String name = base;
+			for (int n = 2; !taken.add(name.toLowerCase(java.util.Locale.ROOT)); n++) {
+				name = base + "-" + n;
+			}
+			pages.add(name + ".html");
+		}
+		return pages;
 	}
 
 	/** Unwaived findings by concern and severity, for the summary. */

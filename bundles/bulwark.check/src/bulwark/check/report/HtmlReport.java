@@ -147,7 +147,7 @@ public final class HtmlReport {
 	/** Escapes text for HTML element content and attribute values. */
 	public static String escape(String s) {
 		StringBuilder out = new StringBuilder(s.length());
-		for (char c : s.toCharArray()) {
+		for (char c : Printable.of(s).toCharArray()) {
 			switch (c) {
 			case '<' -> out.append("&lt;");
 			case '>' -> out.append("&gt;");

@@ -16,7 +16,7 @@ import bulwark.check.rules.Rule;
 import bulwark.check.rules.RuleRegistry;
 
 /**
- * JUnit XML, which every CI server shows: one test suite per design, one test case per rule (a failure
+ * JUnit XML, which every CI server shows (well-formed whatever a name holds: see Printable): one test suite per design, one test case per rule (a failure
  * for each unwaived error finding of it), plus the cases "language" and "solver", which end in an error
  * when the design could not be read or solved.
  */
@@ -37,7 +37,7 @@ public final class JUnitReport {
 			}
 			xml.writeCharacters("\n  ");
 			xml.writeStartElement("testsuite");
-			xml.writeAttribute("name", r.file());
+			xml.writeAttribute("name", Printable.of(r.file()));
 			xml.writeAttribute("tests", Integer.toString(names.size()));
 			// the caution, as a property of each suite: CI pages show properties beside the cases
 			xml.writeCharacters("\n    ");
@@ -54,12 +54,12 @@ public final class JUnitReport {
 						.collect(Collectors.toList());
 				xml.writeCharacters("\n    ");
 				xml.writeStartElement("testcase");
-				xml.writeAttribute("classname", r.file());
+				xml.writeAttribute("classname", Printable.of(r.file()));
 				xml.writeAttribute("name", name);
 				if (!errors.isEmpty()) {
 					boolean notChecked = name.equals("language") || name.equals("solver");
 					xml.writeStartElement(notChecked ? "error" : "failure");
-					xml.writeAttribute("message", errors.get(0).message());
+					xml.writeAttribute("message", Printable.of(errors.get(0).message()));
 					xml.writeCharacters(errors.stream().map(f -> TextReport.line(r.file(), f))
 							.collect(Collectors.joining("\n")));
 					xml.writeEndElement();
@@ -69,7 +69,7 @@ public final class JUnitReport {
 							.filter(f -> !f.waived() && group(f).equals(name)).collect(Collectors.toList());
 					if (!unchecked.isEmpty()) {
 						xml.writeStartElement("skipped");
-						xml.writeAttribute("message", unchecked.size() + " part(s) not checked: " + unchecked.get(0).message());
+						xml.writeAttribute("message", Printable.of(unchecked.size() + " part(s) not checked: " + unchecked.get(0).message()));
 						xml.writeCharacters(unchecked.stream().map(f -> TextReport.line(r.file(), f))
 								.collect(Collectors.joining("\n")));
 						xml.writeEndElement();

@@ -23,7 +23,8 @@ public final class TextReport {
 	}
 
 	public static String line(String file, Finding f) {
-		return file + ":" + f.location().line() + ":" + f.location().column() + ": " + f.severity().id()
-				+ (f.waived() ? " (waived)" : "") + " " + f.rule() + " " + f.message().replace('\n', ' ');
+		// control characters of a title or file name are shown, never written raw (see Printable)
+		return Printable.of(file) + ":" + f.location().line() + ":" + f.location().column() + ": " + f.severity().id()
+				+ (f.waived() ? " (waived)" : "") + " " + f.rule() + " " + Printable.of(f.message().replace('\n', ' '));
 	}
 }
