@@ -28,7 +28,7 @@ if not ok then say('no resistor-power diagnostic'); finish(1) return end
 say(string.format('first diagnostics %d ms after the server was started', (vim.loop.hrtime() - started) / 1e6))
 local target
 for _, d in ipairs(vim.diagnostic.get(buf)) do
-  say('diagnostic ' .. (d.lnum + 1) .. ': ' .. d.message)
+  say('diagnostic ' .. (d.lnum + 1) .. ' [' .. tostring(d.code) .. ']: ' .. d.message)
   if d.code == 'resistor-power' then target = d end
 end
 

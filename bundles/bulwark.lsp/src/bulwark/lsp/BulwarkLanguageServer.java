@@ -58,7 +58,10 @@ public final class BulwarkLanguageServer {
 	/** Serves one client over the given streams until it disconnects. */
 	public static Future<Void> start(InputStream in, OutputStream out) {
 		LanguageServerImpl server = injector().getInstance(ProtocolServer.class);
-		Launcher<LanguageClient> launcher = LSPLauncher.createServerLauncher(server, in, out);
+		// every message checked before the protocol layer reads it: a malformed one is dropped, never the connection
+		InputStream checked = new FramedInput(in,
+				problem -> System.err.println("bulwark lsp: " + problem + "; reading on from the next Content-Length header"));
+		Launcher<LanguageClient> launcher = LSPLauncher.createServerLauncher(server, checked, out);
 		server.connect(launcher.getRemoteProxy());
 		return launcher.startListening();
 	}

@@ -88,7 +88,8 @@ public class CheckingResourceValidator extends ResourceValidatorImpl {
 		case WARNING -> Severity.WARNING;
 		default -> Severity.INFO;
 		});
-		issue.setMessage(f.rule() + ": " + f.message());
+		// the rule is the diagnostic's code, which editors show beside the message: not twice
+		issue.setMessage(f.message());
 		issue.setCode(f.rule().text());
 		int offset = Math.max(0, Math.min(f.location().offset(), text.length()));
 		int length = Math.max(0, Math.min(f.location().length(), text.length() - offset));

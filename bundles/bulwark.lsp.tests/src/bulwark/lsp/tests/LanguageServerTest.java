@@ -111,6 +111,7 @@ class LanguageServerTest {
 		Diagnostic d = diagnostics.stream().filter(x -> "resistor-power".equals(x.getCode().getLeft())).findFirst().orElseThrow();
 		assertEquals(21, d.getRange().getStart().getLine()); // line 22, where R_DROP is declared
 		assertTrue(d.getMessage().contains("960 mW"), d.getMessage());
+		assertTrue(!d.getMessage().contains("resistor-power"), "the rule is the code, not repeated in the text: " + d.getMessage());
 	}
 
 	@Test
