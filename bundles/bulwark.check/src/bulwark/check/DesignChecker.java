@@ -338,6 +338,24 @@ public final class DesignChecker {
 				List.of(Finding.of(CheckerRules.FILE, reason).at(where)), List.of());
 	}
 
+	/**
+	 * Where a case that failed without a place of its own comes from, so that no solver finding sits at 0:0:
+	 * the designer's case of that name, else the terminal a generated case drives, else the design's title.
+	 */
+	private static SourceLocation caseOrigin(CompiledDesign compiled, FaultCase c) {
+		SourceLocation terminal = null;
+		for (Member m : compiled.design().getMembers()) {
+			if (m instanceof bulwark.lang.design.Case && c.name().equals(m.getName())) {
+				return Locations.of(m, DesignPackage.Literals.MEMBER__NAME);
+			}
+			if (terminal == null && m instanceof bulwark.lang.design.Terminal && m.getName() != null
+					&& (m.getName().equals(c.from()) || m.getName().equals(c.to()))) {
+				terminal = Locations.of(m, DesignPackage.Literals.MEMBER__NAME);
+			}
+		}
+		return terminal != null ? terminal : Locations.of(compiled.design(), DesignPackage.Literals.DOCUMENT__TITLE);
+	}
+
 	private static Finding solverFinding(CompiledDesign compiled, FaultCase c, SolveFailure failure) {
 		SourceLocation where = SourceLocation.NONE;
 		String part = null;
@@ -354,6 +372,9 @@ public final class DesignChecker {
 					}
 				}
 			}
+		}
+		if (where.equals(SourceLocation.NONE)) {
+			where = caseOrigin(compiled, c);
 		}
 		String reason = failure.reason().name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ');
 		return Finding.of(CheckerRules.SOLVER, "case '" + c.name() + "' could not be solved (" + reason + "): "

@@ -39,7 +39,7 @@ class PathologicalCircuitsTest {
 
 	private static boolean has(DesignResult r, Concern concern, String text) {
 		return r.findings().stream().anyMatch(f -> f.concern() == concern && f.message().contains(text)
-				&& (f.location().line() > 0 || concern == Concern.SOLVER));
+				&& f.location().line() > 0);
 	}
 
 	@Test
@@ -74,6 +74,36 @@ class PathologicalCircuitsTest {
 				f.message());
 		assertEquals("V2", f.part());
 		assertEquals(6, f.location().line());
+	}
+
+	@Test
+	void anIdealSourceShortedByACaseIsLocatedAtTheTerminal() {
+		// the normal condition shorts TIN to TRET, across an ideal source: the short has no line of its own
+		DesignResult r = check("""
+				terminal TIN "in" at a
+				terminal TRET "return" at gnd common
+				source V1 (plus: a, minus: gnd) { voltage 5 V }
+				resistor R1 (a: a, b: gnd) { value 1 kΩ package 0805 rated power 125 mW }
+				""");
+		assertEquals(Status.ERROR, r.status());
+		for (Finding f : r.findings()) {
+			assertTrue(f.location().line() > 0, "unlocated: " + f);
+		}
+		assertTrue(r.findings().stream().anyMatch(f -> f.rule().text().equals("solver") && f.location().line() == 5),
+				r.findings().toString());
+	}
+
+	@Test
+	void aLoopOfPicoOhmPartsIsLocated() {
+		DesignResult r = check("""
+				source V1 (plus: a, minus: gnd) { voltage 5 V }
+				resistor R1 (a: a, b: b) { value 1 pΩ package 0805 rated power 125 mW }
+				resistor R2 (a: b, b: a) { value 1 pΩ package 0805 rated power 125 mW }
+				resistor R3 (a: b, b: gnd) { value 1 kΩ package 0805 rated power 125 mW }
+				""");
+		for (Finding f : r.findings()) {
+			assertTrue(f.location().line() > 0, "unlocated: " + f);
+		}
 	}
 
 	@Test
