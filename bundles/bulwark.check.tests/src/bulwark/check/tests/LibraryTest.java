@@ -83,6 +83,17 @@ class LibraryTest {
 	}
 
 	@Test
+	void aRefusedUseIsReportedOnce(@TempDir Path dir) throws IOException {
+		write(dir, "x.xmi", "<?xml version=\"1.0\"?><xmi:XMI xmlns:xmi=\"http://www.omg.org/XMI\"/>\n");
+		for (String use : new String[] { "x.xmi", "lib/parts.bulwark" }) {
+			DesignResult r = Fixtures.checker().check(write(dir, "d.bulwark", Fixtures.replaced(DESIGN, "lib/parts.bulwark", use)));
+			assertEquals(Status.ERROR, r.status());
+			// one finding at the use, whatever else the missing definitions cost the parts that name them
+			assertEquals(1, r.findings().stream().filter(x -> x.location().line() == 2).count(), use + ": " + r.findings());
+		}
+	}
+
+	@Test
 	void aLibraryOutsideTheFolderIsRefused(@TempDir Path dir) throws IOException {
 		write(dir, "parts.bulwark", LIBRARY);
 		Path design = write(dir, "designs/d.bulwark", Fixtures.replaced(DESIGN, "lib/parts.bulwark", "../parts.bulwark"));

@@ -76,6 +76,12 @@ class PathologicalCircuitsTest {
 		assertEquals(6, f.location().line());
 	}
 
+	private static void assertAllLocated(DesignResult r) {
+		for (Finding f : r.findings()) {
+			assertTrue(f.location().line() > 0, "unlocated: " + f);
+		}
+	}
+
 	@Test
 	void anIdealSourceShortedByACaseIsLocatedAtTheTerminal() {
 		// the normal condition shorts TIN to TRET, across an ideal source: the short has no line of its own
@@ -86,9 +92,7 @@ class PathologicalCircuitsTest {
 				resistor R1 (a: a, b: gnd) { value 1 kΩ package 0805 rated power 125 mW }
 				""");
 		assertEquals(Status.ERROR, r.status());
-		for (Finding f : r.findings()) {
-			assertTrue(f.location().line() > 0, "unlocated: " + f);
-		}
+		assertAllLocated(r);
 		assertTrue(r.findings().stream().anyMatch(f -> f.rule().text().equals("solver") && f.location().line() == 5),
 				r.findings().toString());
 	}
@@ -101,9 +105,7 @@ class PathologicalCircuitsTest {
 				resistor R2 (a: b, b: a) { value 1 pΩ package 0805 rated power 125 mW }
 				resistor R3 (a: b, b: gnd) { value 1 kΩ package 0805 rated power 125 mW }
 				""");
-		for (Finding f : r.findings()) {
-			assertTrue(f.location().line() > 0, "unlocated: " + f);
-		}
+		assertAllLocated(r);
 	}
 
 	@Test
