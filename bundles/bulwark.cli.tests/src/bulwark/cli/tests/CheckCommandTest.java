@@ -61,6 +61,28 @@ class CheckCommandTest {
 	}
 
 	@Test
+	void aDesignOverItsBudgetLeavesTheOthersReported(@TempDir Path dir) throws Exception {
+		// 60 terminals, each abused against every other: far more than a second of solving
+		StringBuilder heavy = new StringBuilder("design \"heavy\"\nreference net gnd\nterminal T0 \"ret\" at gnd common\n");
+		for (int i = 1; i < 60; i++) {
+			heavy.append("net n").append(i).append("\nterminal T").append(i).append(" \"t").append(i).append("\" at n").append(i)
+					.append("\nresistor R").append(i).append(" (a: n").append(i).append(", b: gnd) { value 100 kΩ package 2512 }\n");
+		}
+		Files.writeString(dir.resolve("b-heavy.bulwark"), heavy);
+		Files.writeString(dir.resolve("a-unrated.bulwark"), "design \"unrated\"\nreference net gnd\nnet a\n"
+				+ "source V1 (plus: a, minus: gnd) { voltage 5 V }\nresistor R1 (a: a, b: gnd) { value 1 kΩ rated voltage 150 V }\n");
+		Files.copy(Path.of(CliRun.example(LAB)), dir.resolve("c-lab.bulwark"));
+		Files.copy(Path.of(CliRun.example("teaching-lab.bulwark-policy")), dir.resolve("teaching-lab.bulwark-policy"));
+		CliRun run = CliRun.of("check", "--budget", "1", "--jobs", "1", dir.toString());
+		assertEquals(2, run.exitCode(), run.err());
+		assertTrue(run.out().contains("a-unrated.bulwark:5:10: warning rating-missing"), run.out());
+		assertTrue(run.out().contains("c-lab.bulwark:22:10: error resistor-power"), run.out());
+		assertTrue(run.out().lines().anyMatch(l -> l.contains("b-heavy.bulwark:") && (l.contains(" budget ") || l.contains("too large"))),
+				run.out());
+		assertTrue(run.err().contains("3 design(s) checked: 0 pass, 1 pass with unchecked parts, 1 fail, 1 not checked"), run.err());
+	}
+
+	@Test
 	void mainsOnTheLoomCheckerIsFoundWithItsPath() {
 		CliRun run = CliRun.of("check", "--format", "json", CliRun.example(LOOM));
 		assertEquals(1, run.exitCode(), run.err());
