@@ -5,6 +5,7 @@ import java.time.Duration;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 import org.eclipse.xtext.util.CancelIndicator;
@@ -216,7 +217,23 @@ public final class DesignChecker {
 		List<CaseResult> caseResults = new ArrayList<>();
 		boolean solverFailed = false;
 		List<WaveformTrace> waveforms = new ArrayList<>();
-		for (CaseOutcome outcome : CaseRunner.run(compiled, policy)) {
+		// a waveform case's trace is taken as soon as it is solved, and its cycle let go (see CaseRunner)
+		Map<CaseOutcome, WaveformTrace> traces = new java.util.IdentityHashMap<>();
+		java.util.function.UnaryOperator<CaseOutcome> keepTrace = outcome -> {
+			if (outcome.cycle() == null || !(outcome.result() instanceof DcSolution solution)) {
+				return outcome;
+			}
+			CaseOutcome kept = outcome.withoutCycle();
+			// the part this waveform case stresses most, for plots; one case at a time, for the cases are solved
+			// in parallel and reading a part's ratings caches them on the (not thread-safe) model
+			synchronized (traces) {
+				Stresses.of(compiled, outcome.faultCase(), solution, outcome.averagePower(), policy).stream()
+						.filter(p -> p.utilisation() != null).max(Comparator.comparingDouble(PartStress::utilisation))
+						.ifPresent(p -> traces.put(kept, WaveformTrace.of(outcome.faultCase().name(), p.part(), outcome.cycle())));
+			}
+			return kept;
+		};
+		for (CaseOutcome outcome : CaseRunner.run(compiled, policy, keepTrace)) {
 			FaultCase c = outcome.faultCase();
 			DcResult result = outcome.result();
 			if (result instanceof DcSolution solution) {
@@ -224,11 +241,9 @@ public final class DesignChecker {
 				CaseResult cr = new CaseResult(c.name(), c.kind().id(), true,
 						Stresses.of(compiled, c, solution, outcome.averagePower(), policy));
 				caseResults.add(cr);
-				if (outcome.cycle() != null) {
-					// the part this waveform case stresses most, for plots
-					cr.parts().stream().filter(p -> p.utilisation() != null)
-							.max(Comparator.comparingDouble(PartStress::utilisation))
-							.ifPresent(p -> waveforms.add(WaveformTrace.of(c.name(), p.part(), outcome.cycle())));
+				WaveformTrace trace = traces.get(outcome);
+				if (trace != null) {
+					waveforms.add(trace);
 				}
 			} else {
 				solverFailed = true;

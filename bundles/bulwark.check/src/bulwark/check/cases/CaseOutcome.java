@@ -24,4 +24,9 @@ public record CaseOutcome(FaultCase faultCase, DcResult result, Map<String, Doub
 	public CaseOutcome(FaultCase faultCase, DcResult result) {
 		this(faultCase, result, Map.of(), Map.of(), null);
 	}
+
+	/** The same outcome without its cycle's solutions, once what was wanted of them was taken. */
+	public CaseOutcome withoutCycle() {
+		return cycle == null ? this : new CaseOutcome(faultCase, result, pulseEnergy, averagePower, null);
+	}
 }

@@ -40,6 +40,16 @@ public final class CaseRunner {
 	}
 
 	public static List<CaseOutcome> run(CompiledDesign design, ReviewPolicy policy) {
+		return run(design, policy, java.util.function.UnaryOperator.identity());
+	}
+
+	/**
+	 * The outcomes of every case, each passed through {@code keep} as soon as it is solved, so that a caller
+	 * can take what it needs from a mains case's whole cycle (36 solutions) and let the rest go: a design
+	 * with many terminals has thousands of mains cases, and keeping every cycle ran out of memory.
+	 */
+	public static List<CaseOutcome> run(CompiledDesign design, ReviewPolicy policy,
+			java.util.function.UnaryOperator<CaseOutcome> keep) {
 		DcSolver solver = new DcSolver();
 		Map<String, PreparedCircuit> prepared = new HashMap<>();
 		List<FaultCase> cases = CaseGenerator.cases(design, policy);
@@ -70,7 +80,7 @@ public final class CaseRunner {
 			if (before == null && settled.result() instanceof DcSolution s) {
 				before = s; // the first case, the design as it rests: the state the others start from
 			}
-			byCase.set(i, openFuses(design, solver, named, circuit, settled.result()));
+			byCase.set(i, openFuses(design, solver, named, circuit, settled.result()).stream().map(keep).toList());
 		}
 		Budget budget = Budget.current();
 		List<List<CaseOutcome>> solved = waveforms.parallelStream().map(i -> {
@@ -78,8 +88,10 @@ public final class CaseRunner {
 			Budget.within(budget, () -> {
 				FaultCase c = cases.get(i);
 				Budget.checkpoint("case '" + c.name() + "'");
-				one.add(c.isSurge() ? SurgeRunner.run(design, c, circuits[i], solver)
-						: MainsRunner.run(design, c, circuits[i], solver));
+				List<CaseOutcome> outcomes = c.isSurge() ? SurgeRunner.run(design, c, circuits[i], solver)
+						: MainsRunner.run(design, c, circuits[i], solver);
+				circuits[i] = null; // its factorisation is garbage now: thousands of cases must not keep theirs
+				one.add(outcomes.stream().map(keep).toList());
 			});
 			return one.get(0);
 		}).toList();

@@ -234,10 +234,17 @@ public final class DcSolver {
 				pinV[p] = v[pins[p]];
 			}
 			double[] currents = d.pinCurrents(assembly.view(x, i));
-			points[i] = new OperatingPoint(d.name(), d.pinNames(), pinV, currents, d.junctionNames(),
+			points[i] = new OperatingPoint(d.name(), shared(d.pinNames()), pinV, currents, shared(d.junctionNames()),
 					d.reverseVoltages(assembly.view(x, i)));
 		}
 		return new DcSolution(circuit, v, points, iterations, strategy, x);
+	}
+
+	/** The few distinct arrays of pin and junction names, shared: every operating point of every case holds them. */
+	private static final java.util.concurrent.ConcurrentHashMap<java.util.List<String>, String[]> NAMES = new java.util.concurrent.ConcurrentHashMap<>();
+
+	private static String[] shared(String[] names) {
+		return NAMES.computeIfAbsent(java.util.List.of(names), k -> names);
 	}
 
 	/** Outcome of one Newton run: x when converged, else where it broke down. */
