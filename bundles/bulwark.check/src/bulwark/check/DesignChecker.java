@@ -187,13 +187,13 @@ public final class DesignChecker {
 		try {
 			return checkWithinBudget(loaded);
 		} catch (Budget.OverBudget e) {
-			return notChecked(loaded.file(), CheckerRules.BUDGET, "not checked: " + e.getMessage());
+			return notChecked(loaded, CheckerRules.BUDGET, "not checked: " + e.getMessage());
 		} catch (RuntimeException e) {
-			return notChecked(loaded.file(), CheckerRules.INTERNAL, "not checked: Bulwark met a fault of its own (" + e
+			return notChecked(loaded, CheckerRules.INTERNAL, "not checked: Bulwark met a fault of its own (" + e
 					+ "); please report it with the design");
 		} catch (OutOfMemoryError e) {
 			// what this design's check allocated is garbage once we return: the other designs of a batch go on
-			return notChecked(loaded.file(), CheckerRules.BUDGET, "not checked: too large — the check of this design needed "
+			return notChecked(loaded, CheckerRules.BUDGET, "not checked: too large — the check of this design needed "
 					+ "more than the " + Runtime.getRuntime().maxMemory() / (1024 * 1024) + " MB of memory it runs in");
 		} finally {
 			Budget.stop();
@@ -342,12 +342,14 @@ public final class DesignChecker {
 		return new DesignResult(file, title, errors ? Status.ERROR : Status.PASS, findings, List.of());
 	}
 
-	/** A design refused before it was read: one finding saying why, status error. */
-	/** A design whose check stopped: one solver finding saying why, status error. */
-	private static DesignResult notChecked(String file, RuleInfo rule, String reason) {
-		return new DesignResult(file, null, Status.ERROR, List.of(Finding.of(rule, reason)), List.of());
+	/** A design read but whose check stopped (time, memory, a fault of ours): the finding sits on its title. */
+	private static DesignResult notChecked(LoadedDesign loaded, RuleInfo rule, String reason) {
+		SourceLocation title = loaded.design() == null ? SourceLocation.NONE
+				: Locations.of(loaded.design(), DesignPackage.Literals.DOCUMENT__TITLE);
+		return new DesignResult(loaded.file(), null, Status.ERROR, List.of(Finding.of(rule, reason).at(title)), List.of());
 	}
 
+	/** A design refused before it was read or checked: one finding saying why, status error. */
 	static DesignResult notChecked(String file, String reason, SourceLocation where) {
 		return new DesignResult(file, null, Status.ERROR,
 				List.of(Finding.of(CheckerRules.FILE, reason).at(where)), List.of());

@@ -168,5 +168,6 @@ class PathologicalCircuitsTest {
 		assertEquals("budget", f.rule().text());
 		assertEquals(Concern.SOLVER, f.concern());
 		assertTrue(f.message().startsWith("not checked: the check took longer than its budget"), f.message());
+		assertEquals(1, f.location().line(), "on the design's title, not at 0:0");
 	}
 }
