@@ -129,6 +129,29 @@ class CheckFuzz {
 				});
 	}
 
+	/**
+	 * A corpus seed with one of the mutations that once broke the check: every rating deleted, power and
+	 * current units swapped for voltage ones (in a library too: the corpus holds one), a flood of brackets,
+	 * a number with hundreds of digits.
+	 */
+	@Provide
+	Arbitrary<String> hostileSeeds() {
+		return Combinators.combine(Arbitraries.of(CORPUS), Arbitraries.integers().between(0, 3),
+				Arbitraries.integers().between(0, 5_000), Arbitraries.integers().between(1, 5_000))
+				.as((text, kind, at, n) -> switch (kind) {
+				case 0 -> text.replaceAll("rated [a-z_]+ -?[0-9.]+ ?[a-zA-Zµ°Ω%]*", "");
+				case 1 -> text.replace("mW", "kV").replace(" W", " V").replace("mA", "mV");
+				case 2 -> text.substring(0, Math.min(at, text.length())) + "[\n".repeat(n)
+						+ text.substring(Math.min(at, text.length()));
+				default -> text.replaceFirst("(?<=\\s)[0-9]+(?=[. ])", "1" + "0".repeat(300 + n % 200));
+				});
+	}
+
+	@Property(seed = SEED)
+	void hostileSeedsEndInAResult(@ForAll("hostileSeeds") String text) {
+		checkSurvives(CHECKER, text);
+	}
+
 	@BeforeContainer
 	static void printSeed() {
 		System.out.println("CheckFuzz: seed " + SEED);
