@@ -217,7 +217,9 @@ public final class DesignChecker {
 		List<CaseResult> caseResults = new ArrayList<>();
 		boolean solverFailed = false;
 		List<WaveformTrace> waveforms = new ArrayList<>();
-		// a waveform case's trace is taken as soon as it is solved, and its cycle let go (see CaseRunner)
+		// a waveform case's stresses and trace are taken as soon as it is solved, and its cycle let go (see
+		// CaseRunner); the loop below reuses those stresses rather than working them out again
+		Map<CaseOutcome, List<PartStress>> stressesOf = new java.util.IdentityHashMap<>();
 		Map<CaseOutcome, WaveformTrace> traces = new java.util.IdentityHashMap<>();
 		java.util.function.UnaryOperator<CaseOutcome> keepTrace = outcome -> {
 			if (outcome.cycle() == null || !(outcome.result() instanceof DcSolution solution)) {
@@ -227,8 +229,9 @@ public final class DesignChecker {
 			// the part this waveform case stresses most, for plots; one case at a time, for the cases are solved
 			// in parallel and reading a part's ratings caches them on the (not thread-safe) model
 			synchronized (traces) {
-				Stresses.of(compiled, outcome.faultCase(), solution, outcome.averagePower(), policy).stream()
-						.filter(p -> p.utilisation() != null).max(Comparator.comparingDouble(PartStress::utilisation))
+				List<PartStress> stresses = Stresses.of(compiled, outcome.faultCase(), solution, outcome.averagePower(), policy);
+				stressesOf.put(kept, stresses);
+				stresses.stream().filter(p -> p.utilisation() != null).max(Comparator.comparingDouble(PartStress::utilisation))
 						.ifPresent(p -> traces.put(kept, WaveformTrace.of(outcome.faultCase().name(), p.part(), outcome.cycle())));
 			}
 			return kept;
@@ -238,8 +241,9 @@ public final class DesignChecker {
 			DcResult result = outcome.result();
 			if (result instanceof DcSolution solution) {
 				solved.add(new SolvedCase(c, solution, outcome.pulseEnergy(), outcome.averagePower()));
-				CaseResult cr = new CaseResult(c.name(), c.kind().id(), true,
-						Stresses.of(compiled, c, solution, outcome.averagePower(), policy));
+				List<PartStress> stresses = stressesOf.get(outcome);
+				CaseResult cr = new CaseResult(c.name(), c.kind().id(), true, stresses != null ? stresses
+						: Stresses.of(compiled, c, solution, outcome.averagePower(), policy));
 				caseResults.add(cr);
 				WaveformTrace trace = traces.get(outcome);
 				if (trace != null) {

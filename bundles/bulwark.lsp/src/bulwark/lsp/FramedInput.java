@@ -23,7 +23,7 @@ final class FramedInput extends InputStream {
 	static final int MAX_BODY = 64 << 20;
 	/** A header line longer than this is garbage; its tail is kept in case a header starts there. */
 	private static final int MAX_LINE = 8 << 10;
-	private static final byte[] LENGTH = "content-length:".getBytes(StandardCharsets.US_ASCII);
+	private static final String LENGTH = "content-length:";
 
 	private final InputStream raw;
 	private final Consumer<String> problems;
@@ -144,11 +144,11 @@ final class FramedInput extends InputStream {
 
 	/** The length a line gives (-1 when it is not a number), or -2 when the line is no Content-Length header. */
 	private static long contentLength(String line) {
-		int at = line.toLowerCase(Locale.ROOT).lastIndexOf("content-length:");
+		int at = line.toLowerCase(Locale.ROOT).lastIndexOf(LENGTH);
 		if (at < 0) {
 			return -2;
 		}
-		String value = line.substring(at + LENGTH.length).trim();
+		String value = line.substring(at + LENGTH.length()).trim();
 		if (!value.matches("[0-9]{1,12}")) {
 			return -1;
 		}
@@ -167,7 +167,7 @@ final class FramedInput extends InputStream {
 	/** A body whose length was too long swallowed the next message's header: read on from that header. */
 	private void giveBackFromHeader(byte[] body) {
 		String text = new String(body, StandardCharsets.ISO_8859_1).toLowerCase(Locale.ROOT);
-		int at = text.indexOf("content-length:");
+		int at = text.indexOf(LENGTH);
 		if (at < 0) {
 			return;
 		}
