@@ -5,35 +5,26 @@ import java.time.Duration;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 
 import org.eclipse.xtext.util.CancelIndicator;
 import org.eclipse.xtext.validation.Issue;
 
-import bulwark.check.cases.CaseOutcome;
 import bulwark.check.compile.CaseRunner;
 import bulwark.check.compile.CompiledDesign;
 import bulwark.check.compile.DesignCompiler;
-import bulwark.check.cases.FaultCase;
-import bulwark.check.function.FunctionAnalysis;
-import bulwark.check.function.FunctionFigures;
 import bulwark.check.load.DesignLoader;
 import bulwark.check.load.LoadedDesign;
 import bulwark.check.policy.DefaultPolicy;
 import bulwark.check.policy.PolicyFiles;
 import bulwark.check.policy.ReviewPolicy;
-import bulwark.check.rules.CheckContext;
 import bulwark.check.rules.Rule;
+import bulwark.check.rules.RuleReading;
 import bulwark.check.rules.RuleRegistry;
+import bulwark.check.finding.RuleId;
 import bulwark.check.rules.SingleFaultRule;
-import bulwark.check.cases.SolvedCase;
-import bulwark.engine.solve.DcResult;
-import bulwark.engine.solve.DcSolution;
-import bulwark.engine.solve.SolveFailure;
 import bulwark.lang.design.Design;
 import bulwark.lang.design.DesignPackage;
-import bulwark.lang.design.Member;
 import bulwark.lang.library.Confinement;
 import bulwark.check.finding.Finding;
 import bulwark.check.finding.Severity;
@@ -43,7 +34,6 @@ import bulwark.check.finding.LanguageFindings;
 import bulwark.check.load.InputLimits;
 import bulwark.check.load.TextFiles;
 import bulwark.check.cases.CaseResult;
-import bulwark.check.cases.PartStress;
 import bulwark.check.finding.CheckerRules;
 import bulwark.check.finding.RuleInfo;
 import bulwark.check.budget.Budget;
@@ -213,68 +203,30 @@ public final class DesignChecker {
 				? ready.policy().withSeverity(SingleFaultRule.ID, Severity.WARNING)
 				: ready.policy();
 		CompiledDesign compiled = ready.compiled();
-		List<SolvedCase> solved = new ArrayList<>();
-		List<CaseResult> caseResults = new ArrayList<>();
-		boolean solverFailed = false;
-		List<WaveformTrace> waveforms = new ArrayList<>();
-		// a waveform case's stresses and trace are taken as soon as it is solved, and its cycle let go (see
-		// CaseRunner); the loop below reuses those stresses rather than working them out again
-		Map<CaseOutcome, List<PartStress>> stressesOf = new java.util.IdentityHashMap<>();
-		Map<CaseOutcome, WaveformTrace> traces = new java.util.IdentityHashMap<>();
-		java.util.function.UnaryOperator<CaseOutcome> keepTrace = outcome -> {
-			if (outcome.cycle() == null || !(outcome.result() instanceof DcSolution solution)) {
-				return outcome;
-			}
-			CaseOutcome kept = outcome.withoutCycle();
-			// the part this waveform case stresses most, for plots; one case at a time, for the cases are solved
-			// in parallel and reading a part's ratings caches them on the (not thread-safe) model
-			synchronized (traces) {
-				List<PartStress> stresses = Stresses.of(compiled, outcome.faultCase(), solution, outcome.averagePower(), policy);
-				stressesOf.put(kept, stresses);
-				stresses.stream().filter(p -> p.utilisation() != null).max(Comparator.comparingDouble(PartStress::utilisation))
-						.ifPresent(p -> traces.put(kept, WaveformTrace.of(outcome.faultCase().name(), p.part(), outcome.cycle())));
-			}
-			return kept;
-		};
-		for (CaseOutcome outcome : CaseRunner.run(compiled, policy, keepTrace)) {
-			FaultCase c = outcome.faultCase();
-			DcResult result = outcome.result();
-			if (result instanceof DcSolution solution) {
-				solved.add(new SolvedCase(c, solution, outcome.pulseEnergy(), outcome.averagePower()));
-				List<PartStress> stresses = stressesOf.get(outcome);
-				CaseResult cr = new CaseResult(c.name(), c.kind().id(), true, stresses != null ? stresses
-						: Stresses.of(compiled, c, solution, outcome.averagePower(), policy));
-				caseResults.add(cr);
-				WaveformTrace trace = traces.get(outcome);
-				if (trace != null) {
-					waveforms.add(trace);
-				}
-			} else {
-				solverFailed = true;
-				caseResults.add(new CaseResult(c.name(), c.kind().id(), false, List.of()));
-				findings.add(solverFinding(compiled, c, (SolveFailure) result));
-			}
-		}
-		FunctionFigures function = solved.isEmpty() || solved.get(0).faultCase().kind() != bulwark.check.cases.CaseKind.NORMAL
-				? FunctionFigures.NONE
-				: FunctionAnalysis.of(compiled, solved.get(0).solution());
-		CheckContext context = CheckContext.of(compiled, solved, policy, function);
-		for (Rule rule : rules) {
-			Budget.checkpoint("rule " + rule.info().id());
+		// each case's figures are taken as it is solved, and the case let go (see CaseReading)
+		CaseReading reading = new CaseReading(compiled, policy, rules);
+		CaseRunner.each(compiled, policy, reading);
+		List<CaseResult> caseResults = reading.results();
+		List<Finding> failures = reading.failures();
+		findings.addAll(failures);
+		List<RuleReading> readings = reading.readings();
+		for (int i = 0; i < rules.size(); i++) {
+			RuleId id = rules.get(i).info().id();
+			Budget.checkpoint("rule " + id);
 			// a policy's severity replaces the rule's own; otherwise each finding keeps the one its rule gave it
-			Severity set = policy.severities().get(rule.info().id());
-			rule.check(context, f -> findings.add(set == null || f.severity() == set ? f : f.withSeverity(set)));
+			Severity set = policy.severities().get(id);
+			readings.get(i).findings(f -> findings.add(set == null || f.severity() == set ? f : f.withSeverity(set)));
 		}
 		List<Finding> all = new ArrayList<>(Waivers.apply(design, findings, policy));
 		all.sort(Comparator.comparingInt((Finding f) -> f.location().line())
 				.thenComparingInt(f -> f.location().column()));
-		Status status = solverFailed ? Status.ERROR
+		Status status = !failures.isEmpty() ? Status.ERROR
 				: all.stream().anyMatch(f -> f.severity() == Severity.ERROR && !f.waived()) ? Status.FAIL
 						: all.stream().anyMatch(f -> f.rule().equals(bulwark.check.rules.RatingMissingRule.ID) && !f.waived())
 								? Status.PASS_UNCHECKED
 								: Status.PASS;
 		return new DesignResult(loaded.file(), title, status, all, caseResults, policy.title(),
-				WorstStresses.of(compiled, solved, policy), function, waveforms);
+				WorstStresses.of(compiled, reading.worst(), policy), reading.context().function(), reading.traces());
 	}
 
 	/** The review policy a design is checked under, or (policy null) the problems that stop its use. */
@@ -357,48 +309,5 @@ public final class DesignChecker {
 	static DesignResult notChecked(String file, String reason, SourceLocation where) {
 		return new DesignResult(file, null, Status.ERROR,
 				List.of(Finding.of(CheckerRules.FILE, reason).at(where)), List.of());
-	}
-
-	/**
-	 * Where a case that failed without a place of its own comes from, so that no solver finding sits at 0:0:
-	 * the designer's case of that name, else the terminal a generated case drives, else the design's title.
-	 */
-	private static SourceLocation caseOrigin(CompiledDesign compiled, FaultCase c) {
-		SourceLocation terminal = null;
-		for (Member m : compiled.design().getMembers()) {
-			if (m instanceof bulwark.lang.design.Case && c.name().equals(m.getName())) {
-				return Locations.of(m, DesignPackage.Literals.MEMBER__NAME);
-			}
-			if (terminal == null && m instanceof bulwark.lang.design.Terminal && m.getName() != null
-					&& (m.getName().equals(c.from()) || m.getName().equals(c.to()))) {
-				terminal = Locations.of(m, DesignPackage.Literals.MEMBER__NAME);
-			}
-		}
-		return terminal != null ? terminal : Locations.of(compiled.design(), DesignPackage.Literals.DOCUMENT__TITLE);
-	}
-
-	private static Finding solverFinding(CompiledDesign compiled, FaultCase c, SolveFailure failure) {
-		SourceLocation where = SourceLocation.NONE;
-		String part = null;
-		if (failure.place() != null) {
-			if (compiled.parts().containsKey(failure.place())) {
-				part = failure.place();
-				where = Locations.of(compiled.parts().get(part), DesignPackage.Literals.MEMBER__NAME);
-			} else {
-				for (Member m : compiled.design().getMembers()) {
-					// a net by its name, or a case by the devices it adds ("case NAME #k")
-					if (failure.place().equals(m.getName())
-							|| m instanceof bulwark.lang.design.Case && failure.place().startsWith("case " + m.getName() + " #")) {
-						where = Locations.of(m, DesignPackage.Literals.MEMBER__NAME);
-					}
-				}
-			}
-		}
-		if (where.equals(SourceLocation.NONE)) {
-			where = caseOrigin(compiled, c);
-		}
-		String reason = failure.reason().name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ');
-		return Finding.of(CheckerRules.SOLVER, "case '" + c.name() + "' could not be solved (" + reason + "): "
-				+ failure.message()).about(part, c.name(), where);
 	}
 }

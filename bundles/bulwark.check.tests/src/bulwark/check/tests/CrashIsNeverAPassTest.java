@@ -15,6 +15,7 @@ import bulwark.check.DesignResult;
 import bulwark.check.finding.Finding;
 import bulwark.check.Status;
 import bulwark.check.rules.CheckContext;
+import bulwark.check.rules.FigureRule;
 import bulwark.check.rules.ResistorPowerRule;
 import bulwark.check.rules.Rule;
 import bulwark.check.finding.RuleInfo;
@@ -27,7 +28,7 @@ import bulwark.check.rules.RuleRegistry;
  */
 class CrashIsNeverAPassTest {
 	/** A rule that crashes on every design, listed after the registered ones. */
-	private static final Rule CRASHING = new Rule() {
+	private static final Rule CRASHING = new FigureRule() {
 		@Override
 		public RuleInfo info() {
 			return RuleRegistry.all().get(0).info();

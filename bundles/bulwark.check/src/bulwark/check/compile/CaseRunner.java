@@ -1,7 +1,6 @@
 package bulwark.check.compile;
 
 import java.util.ArrayList;
-import java.util.Collections;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -39,21 +38,38 @@ public final class CaseRunner {
 	private CaseRunner() {
 	}
 
+	/** Every case's outcomes, in the check's order, all kept: for one design solved for inspection. */
 	public static List<CaseOutcome> run(CompiledDesign design, ReviewPolicy policy) {
-		return run(design, policy, java.util.function.UnaryOperator.identity());
+		java.util.SortedMap<Long, CaseOutcome> outcomes = new java.util.TreeMap<>();
+		each(design, policy, (order, outcome) -> {
+			synchronized (outcomes) {
+				outcomes.put(order, outcome);
+			}
+		});
+		return new ArrayList<>(outcomes.values());
 	}
 
 	/**
-	 * The outcomes of every case, each passed through {@code keep} as soon as it is solved, so that a caller
-	 * can take what it needs from a mains case's whole cycle (36 solutions) and let the rest go: a design
-	 * with many terminals has thousands of mains cases, and keeping every cycle ran out of memory.
+	 * Where each outcome goes as soon as it is solved. The mains and surge cases are solved in parallel, so
+	 * outcomes come from several threads at once and in no set order; {@code order} is an outcome's place in
+	 * the check's order (see {@link CaseRunner#order}). Nothing is kept once the sink returns: a mains case's
+	 * whole cycle (36 solutions) is garbage unless the sink keeps it, and a design with many terminals has
+	 * thousands of mains cases.
 	 */
-	public static List<CaseOutcome> run(CompiledDesign design, ReviewPolicy policy,
-			java.util.function.UnaryOperator<CaseOutcome> keep) {
+	public interface Sink {
+		void take(long order, CaseOutcome outcome);
+	}
+
+	/** The place of a case's k-th outcome in the check's order: the cases in turn, each case's outcomes in turn. */
+	public static long order(int caseIndex, int outcome) {
+		return ((long) caseIndex << 32) | outcome;
+	}
+
+	/** Solves every case, giving each outcome to {@code sink} as soon as it is solved. */
+	public static void each(CompiledDesign design, ReviewPolicy policy, Sink sink) {
 		DcSolver solver = new DcSolver();
 		Map<String, PreparedCircuit> prepared = new HashMap<>();
 		List<FaultCase> cases = CaseGenerator.cases(design, policy);
-		List<List<CaseOutcome>> byCase = new ArrayList<>(Collections.nCopies(cases.size(), List.of()));
 		PreparedCircuit[] circuits = new PreparedCircuit[cases.size()];
 		List<Integer> waveforms = new ArrayList<>();
 		DcSolution before = null;
@@ -69,8 +85,8 @@ public final class CaseRunner {
 			for (Map.Entry<String, Device> r : c.replaced().entrySet()) {
 				circuit = circuit.with(r.getKey(), r.getValue());
 			}
-			circuits[i] = circuit;
 			if (c.isSurge() || c.isMains()) {
+				circuits[i] = circuit;
 				waveforms.add(i);
 				continue;
 			}
@@ -80,27 +96,24 @@ public final class CaseRunner {
 			if (before == null && settled.result() instanceof DcSolution s) {
 				before = s; // the first case, the design as it rests: the state the others start from
 			}
-			byCase.set(i, openFuses(design, solver, named, circuit, settled.result()).stream().map(keep).toList());
+			List<CaseOutcome> outcomes = openFuses(design, solver, named, circuit, settled.result());
+			for (int k = 0; k < outcomes.size(); k++) {
+				sink.take(order(i, k), outcomes.get(k));
+			}
 		}
+		prepared.clear();
 		Budget budget = Budget.current();
-		List<List<CaseOutcome>> solved = waveforms.parallelStream().map(i -> {
-			List<List<CaseOutcome>> one = new ArrayList<>(1);
-			Budget.within(budget, () -> {
-				FaultCase c = cases.get(i);
-				Budget.checkpoint("case '" + c.name() + "'");
-				List<CaseOutcome> outcomes = c.isSurge() ? SurgeRunner.run(design, c, circuits[i], solver)
-						: MainsRunner.run(design, c, circuits[i], solver);
-				circuits[i] = null; // its factorisation is garbage now: thousands of cases must not keep theirs
-				one.add(outcomes.stream().map(keep).toList());
-			});
-			return one.get(0);
-		}).toList();
-		for (int k = 0; k < waveforms.size(); k++) {
-			byCase.set(waveforms.get(k), solved.get(k));
-		}
-		List<CaseOutcome> outcomes = new ArrayList<>();
-		byCase.forEach(outcomes::addAll);
-		return outcomes;
+		waveforms.parallelStream().forEach(i -> Budget.within(budget, () -> {
+			FaultCase c = cases.get(i);
+			Budget.checkpoint("case '" + c.name() + "'");
+			PreparedCircuit circuit = circuits[i];
+			circuits[i] = null; // its factorisation is garbage once solved: thousands of cases must not keep theirs
+			List<CaseOutcome> outcomes = c.isSurge() ? SurgeRunner.run(design, c, circuit, solver)
+					: MainsRunner.run(design, c, circuit, solver);
+			for (int k = 0; k < outcomes.size(); k++) {
+				sink.take(order(i, k), outcomes.get(k));
+			}
+		}));
 	}
 
 	/** What decides the matrix pattern: the added devices' kinds, names and nets, and what is replaced. */

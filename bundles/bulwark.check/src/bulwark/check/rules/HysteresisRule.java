@@ -31,7 +31,7 @@ import bulwark.check.finding.RuleInfo;
  * up and down (SwitchingSweep) and compared with the review policy's minimum: at the input in volts, or
  * at the terminals in ohms, as the policy states it.
  */
-public final class HysteresisRule implements Rule {
+public final class HysteresisRule implements FigureRule {
 	public static final RuleId ID = RuleId.of("hysteresis");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.HYSTERESIS, Severity.WARNING,
 			"a comparator has no hysteresis, or less than the review policy asks for");

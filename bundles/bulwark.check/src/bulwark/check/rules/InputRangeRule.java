@@ -1,7 +1,6 @@
 package bulwark.check.rules;
 
 import java.util.Locale;
-import java.util.Optional;
 import java.util.function.Consumer;
 
 import bulwark.check.finding.Concern;
@@ -34,43 +33,60 @@ public final class InputRangeRule implements Rule {
 		return INFO;
 	}
 
+	/** A comparator input's furthest excursion so far: by how much, where, in which case. */
+	private static final class Outside {
+		double worst, volts, top;
+		String at, pin;
+		long order;
+	}
+
 	@Override
-	public void check(CheckContext context, Consumer<Finding> findings) {
+	public RuleReading start(CheckContext context) {
+		java.util.Map<Part, Outside> comparators = new java.util.LinkedHashMap<>();
 		for (Part part : context.design().parts().values()) {
-			Optional<Double> headroom = Settings.rating(part, "headroom");
-			if (part.getKind() != PartKind.COMPARATOR || headroom.isEmpty()) {
-				continue;
-			}
-			double worst = 0;
-			String at = null, pinAt = null;
-			double volts = 0, top = 0;
-			for (SolvedCase c : context.cases()) {
-				if (c.faultCase().kind() != bulwark.check.cases.CaseKind.NORMAL) {
-					continue;
-				}
-				OperatingPoint p = c.solution().device(part.getName());
-				double high = p.pinVoltage("supply_plus") - headroom.get(), low = p.pinVoltage("supply_minus");
-				for (String pin : new String[] { "in_plus", "in_minus" }) {
-					double v = p.pinVoltage(pin);
-					double outside = Math.max(v - high, low - v);
-					if (outside > worst) {
-						worst = outside;
-						at = c.faultCase().name();
-						pinAt = pin;
-						volts = v;
-						top = high;
-					}
-				}
-			}
-			if (at != null) {
-				findings.accept(Finding.of(INFO, String.format(Locale.ROOT,
-						"%s's %s is at %s in case '%s', outside the range its inputs work in (up to %s: the supply less its "
-								+ "rated headroom of %s); it no longer compares there",
-						part.getName(), pinAt, Figures.engineering(volts, "V"), at, Figures.engineering(top, "V"),
-						Figures.engineering(headroom.get(), "V")))
-						.about(part.getName(), at, Locations.of(part, DesignPackage.Literals.MEMBER__NAME))
-						.judged(worst, 0.0, "V"));
+			if (part.getKind() == PartKind.COMPARATOR && Settings.rating(part, "headroom").isPresent()) {
+				comparators.put(part, new Outside());
 			}
 		}
+		return new RuleReading() {
+			@Override
+			public void read(long order, SolvedCase c) {
+				if (c.faultCase().kind() != bulwark.check.cases.CaseKind.NORMAL) {
+					return;
+				}
+				comparators.forEach((part, o) -> {
+					OperatingPoint p = c.solution().device(part.getName());
+					double high = p.pinVoltage("supply_plus") - Settings.rating(part, "headroom").get();
+					double low = p.pinVoltage("supply_minus");
+					for (String pin : new String[] { "in_plus", "in_minus" }) {
+						double v = p.pinVoltage(pin);
+						double outside = Math.max(v - high, low - v);
+						if (outside > o.worst || outside == o.worst && o.at != null && order < o.order) {
+							o.worst = outside;
+							o.at = c.faultCase().name();
+							o.pin = pin;
+							o.volts = v;
+							o.top = high;
+							o.order = order;
+						}
+					}
+				});
+			}
+
+			@Override
+			public void findings(Consumer<Finding> findings) {
+				comparators.forEach((part, o) -> {
+					if (o.at != null) {
+						findings.accept(Finding.of(INFO, String.format(Locale.ROOT,
+								"%s's %s is at %s in case '%s', outside the range its inputs work in (up to %s: the supply "
+										+ "less its rated headroom of %s); it no longer compares there",
+								part.getName(), o.pin, Figures.engineering(o.volts, "V"), o.at, Figures.engineering(o.top, "V"),
+								Figures.engineering(Settings.rating(part, "headroom").get(), "V")))
+								.about(part.getName(), o.at, Locations.of(part, DesignPackage.Literals.MEMBER__NAME))
+								.judged(o.worst, 0.0, "V"));
+					}
+				});
+			}
+		};
 	}
 }

@@ -22,7 +22,7 @@ import bulwark.check.finding.RuleInfo;
  * the rating, written or assumed, times the policy's derating — report it on the designator with the
  * figures. A rule says only which parts and which rating.
  */
-public abstract class PartLimitRule implements Rule {
+public abstract class PartLimitRule implements FigureRule {
 
 	public abstract Set<PartKind> kinds();
 

@@ -24,7 +24,7 @@ import bulwark.check.finding.RuleInfo;
  * value was probably computed and never rounded. Information,
  * with the nearest value; the quick fix snaps to it when the design still passes.
  */
-public final class PreferredValueRule implements Rule {
+public final class PreferredValueRule implements FigureRule {
 	public static final RuleId ID = RuleId.of("preferred-value");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.STRUCTURE, Severity.INFO,
 			"a value is not in the preferred series of its tolerance");

@@ -21,7 +21,7 @@ import bulwark.check.stress.Measure;
  * A part lacks a rating that a rating rule needs: that stress cannot be checked, and silence would read as
  * a pass. One warning per part names each missing rating and the rule that therefore does not check it.
  */
-public final class RatingMissingRule implements Rule {
+public final class RatingMissingRule implements FigureRule {
 	public static final RuleId ID = RuleId.of("rating-missing");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.RATING_MISSING, Severity.WARNING,
 			"a part has no rating to check its stress against");

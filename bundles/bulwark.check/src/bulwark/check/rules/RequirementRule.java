@@ -33,7 +33,7 @@ import bulwark.check.finding.RuleInfo;
  * threshold below about 5 Ω, at most about 20 mA into a short, a year on its battery [common practice,
  * docs/sources.md#tester-inputs] — as warnings. A figure that cannot be computed is said so, never passed silently.
  */
-public final class RequirementRule implements Rule {
+public final class RequirementRule implements FigureRule {
 	public static final RuleId ID = RuleId.of("requirement");
 	/** Common-practice defaults for battery-powered testers [common practice, docs/sources.md#tester-inputs]. */
 	static final double DEFAULT_THRESHOLD_OHMS = 5, DEFAULT_TEST_AMPS = 20e-3,

@@ -5,7 +5,6 @@ import java.util.ArrayList;
 import java.util.Collections;
 import java.util.Deque;
 import java.util.HashMap;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -59,42 +58,57 @@ public final class ReversePathRule implements Rule {
 		return INFO;
 	}
 
-	private record Reach(Overstress over, SolvedCase c, List<String> path) {
+	/** A part's worst reachable overstress so far: the case (its place in the order too) and the path. */
+	private record Reach(Overstress over, FaultCase c, List<String> path, long order) {
 	}
 
 	@Override
-	public void check(CheckContext context, Consumer<Finding> findings) {
-		Map<String, Reach> worst = new LinkedHashMap<>();
-		for (SolvedCase c : context.cases()) {
-			FaultCase fc = c.faultCase();
-			if (!fc.isAbuse() || fc.from() == null) {
-				continue;
-			}
-			List<Overstress> over = Overstress.in(context.design().parts().values(), fc, c.solution(), c.averagePower(),
-					context.policy());
-			for (Overstress o : over) {
-				Reach previous = worst.get(o.part().getName());
-				if (previous != null && previous.over().utilisation() >= o.utilisation()) {
-					continue;
+	public RuleReading start(CheckContext context) {
+		Map<String, Reach> worst = new HashMap<>();
+		return new RuleReading() {
+			@Override
+			public void read(long order, SolvedCase c) {
+				FaultCase fc = c.faultCase();
+				if (!fc.isAbuse() || fc.from() == null) {
+					return;
 				}
-				List<String> path = path(context, c, o.part());
-				if (path != null) {
-					worst.put(o.part().getName(), new Reach(o, c, path));
+				for (Overstress o : Overstress.in(context.design().parts().values(), fc, c.solution(), c.averagePower(),
+						context.policy())) {
+					Reach previous = worst.get(o.part().getName());
+					if (previous != null && (previous.over().utilisation() > o.utilisation()
+							|| previous.over().utilisation() == o.utilisation() && previous.order() < order)) {
+						continue;
+					}
+					List<String> path = path(context, c, o.part());
+					if (path != null) {
+						worst.put(o.part().getName(), new Reach(o, fc, path, order));
+					}
 				}
 			}
-		}
-		for (Reach r : worst.values()) {
-			Overstress o = r.over();
-			String message = String.format(Locale.ROOT,
-					"case '%s' reaches %s with nothing blocking it: %s; its %s is %s, over %s, %s %% of the limit",
-					r.c().faultCase().name(), o.part().getName(), String.join(" → ", r.path()),
-					o.measure().what(r.c().faultCase()),
-					Figures.over(o.value(), o.limit().value(), o.measure().unit()), o.limit().describe(),
-					Figures.percentOf(o.value(), o.limit().value()));
-			findings.accept(Finding.of(INFO, message)
-					.about(o.part().getName(), r.c().faultCase().name(), Locations.of(o.part(), DesignPackage.Literals.MEMBER__NAME))
-					.judged(o.measure().rating(), o.value(), o.limit().value(), o.measure().unit()).with(new FindingDetail.ReversePath(r.path())));
-		}
+
+			@Override
+			public void findings(Consumer<Finding> findings) {
+				for (String part : context.design().parts().keySet()) {
+					Reach r = worst.get(part);
+					if (r != null) {
+						findings.accept(finding(r));
+					}
+				}
+			}
+		};
+	}
+
+	private static Finding finding(Reach r) {
+		Overstress o = r.over();
+		String message = String.format(Locale.ROOT,
+				"case '%s' reaches %s with nothing blocking it: %s; its %s is %s, over %s, %s %% of the limit",
+				r.c().name(), o.part().getName(), String.join(" → ", r.path()), o.measure().what(r.c()),
+				Figures.over(o.value(), o.limit().value(), o.measure().unit()), o.limit().describe(),
+				Figures.percentOf(o.value(), o.limit().value()));
+		return Finding.of(INFO, message)
+				.about(o.part().getName(), r.c().name(), Locations.of(o.part(), DesignPackage.Literals.MEMBER__NAME))
+				.judged(o.measure().rating(), o.value(), o.limit().value(), o.measure().unit())
+				.with(new FindingDetail.ReversePath(r.path()));
 	}
 
 	/**

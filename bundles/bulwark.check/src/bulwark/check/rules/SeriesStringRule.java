@@ -41,45 +41,75 @@ public final class SeriesStringRule implements Rule {
 		return INFO;
 	}
 
-	@Override
-	public void check(CheckContext context, Consumer<Finding> findings) {
-		Measure voltage = StressCatalog.VOLTAGE;
-		for (SeriesString string : context.seriesStrings()) {
-			List<Optional<Limit>> limits = new ArrayList<>();
-			for (Part r : string.resistors()) {
-				limits.add(Limits.of(r, voltage, context.policy()));
-			}
-			double worstUse = 0;
-			int worstMember = -1;
-			SolvedCase worstCase = null;
-			for (SolvedCase c : context.cases()) {
-				for (int i = 0; i < string.resistors().size(); i++) {
-					if (limits.get(i).isEmpty()) {
-						continue;
-					}
-					double use = voltage.of(c.solution().device(string.resistors().get(i).getName()))
-							/ limits.get(i).get().value();
-					if (use > worstUse) {
-						worstUse = use;
-						worstMember = i;
-						worstCase = c;
-					}
-				}
-			}
-			if (worstUse > 1) {
-				findings.accept(finding(string, worstMember, worstCase, limits.get(worstMember).get(), voltage));
-			}
-		}
+	/** A string's most used member so far: how much of its limit, in which case, and every member's share then. */
+	private static final class Use {
+		final List<Optional<Limit>> limits = new ArrayList<>();
+		double worst;
+		int member = -1;
+		String caseName;
+		double[] shares;
+		long order;
 	}
 
-	private Finding finding(SeriesString string, int member, SolvedCase c, Limit limit, Measure voltage) {
+	@Override
+	public RuleReading start(CheckContext context) {
+		Measure voltage = StressCatalog.VOLTAGE;
+		java.util.Map<SeriesString, Use> uses = new java.util.LinkedHashMap<>();
+		for (SeriesString string : context.seriesStrings()) {
+			Use u = new Use();
+			for (Part r : string.resistors()) {
+				u.limits.add(Limits.of(r, voltage, context.policy()));
+			}
+			uses.put(string, u);
+		}
+		return new RuleReading() {
+			@Override
+			public void read(long order, SolvedCase c) {
+				uses.forEach((string, u) -> {
+					double[] shares = null;
+					for (int i = 0; i < string.resistors().size(); i++) {
+						if (u.limits.get(i).isEmpty()) {
+							continue;
+						}
+						double use = voltage.of(c.solution().device(string.resistors().get(i).getName()))
+								/ u.limits.get(i).get().value();
+						if (use > u.worst || use == u.worst && u.member >= 0 && order < u.order) {
+							if (shares == null) {
+								shares = new double[string.resistors().size()];
+								for (int k = 0; k < shares.length; k++) {
+									shares[k] = voltage.of(c.solution().device(string.resistors().get(k).getName()));
+								}
+							}
+							u.worst = use;
+							u.member = i;
+							u.caseName = c.faultCase().name();
+							u.shares = shares;
+							u.order = order;
+						}
+					}
+				});
+			}
+
+			@Override
+			public void findings(Consumer<Finding> findings) {
+				uses.forEach((string, u) -> {
+					if (u.worst > 1) {
+						findings.accept(finding(string, u));
+					}
+				});
+			}
+		};
+	}
+
+	private Finding finding(SeriesString string, Use u) {
+		int member = u.member;
+		double[] shares = u.shares;
+		Limit limit = u.limits.get(member).get();
 		double total = 0, largest = 0, smallest = Double.POSITIVE_INFINITY;
-		double[] shares = new double[string.resistors().size()];
-		for (int i = 0; i < shares.length; i++) {
-			shares[i] = voltage.of(c.solution().device(string.resistors().get(i).getName()));
-			total += shares[i];
-			largest = Math.max(largest, shares[i]);
-			smallest = Math.min(smallest, shares[i]);
+		for (double share : shares) {
+			total += share;
+			largest = Math.max(largest, share);
+			smallest = Math.min(smallest, share);
 		}
 		Part part = string.resistors().get(member);
 		StringBuilder sharing = new StringBuilder();
@@ -93,11 +123,11 @@ public final class SeriesStringRule implements Rule {
 		}
 		String message = String.format(Locale.ROOT,
 				"series string %s carries %s in case '%s'; %s takes %s (%.0f %% of it), over %s, %.0f %% of the limit%s",
-				string.label(), Figures.engineering(total, "V"), c.faultCase().name(), part.getName(),
+				string.label(), Figures.engineering(total, "V"), u.caseName, part.getName(),
 				Figures.engineering(shares[member], "V"), 100 * shares[member] / total, limit.describe(),
 				100 * shares[member] / limit.value(), sharing);
 		return Finding.of(INFO, message)
-				.about(part.getName(), c.faultCase().name(), Locations.of(part, DesignPackage.Literals.MEMBER__NAME))
+				.about(part.getName(), u.caseName, Locations.of(part, DesignPackage.Literals.MEMBER__NAME))
 				.judged(shares[member], limit.value(), "V");
 	}
 }

@@ -28,7 +28,7 @@ import bulwark.lang.design.Part;
  * ({@code severity "single-fault" warning}) or {@code bulwark check --single-faults} — since it solves every
  * case again for every fault.
  */
-public final class SingleFaultRule implements Rule {
+public final class SingleFaultRule implements FigureRule {
 	public static final RuleId ID = RuleId.of("single-fault");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.SINGLE_FAULT, Severity.WARNING,
 			"with one part failed, another part exceeds its absolute rating in some case (or the case cannot be solved)");

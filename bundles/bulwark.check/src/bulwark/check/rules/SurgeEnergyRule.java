@@ -15,7 +15,6 @@ import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
 import bulwark.check.figures.Figures;
-import bulwark.check.cases.SolvedCase;
 import bulwark.check.finding.RuleId;
 import bulwark.check.finding.RuleInfo;
 
@@ -29,7 +28,7 @@ import bulwark.check.finding.RuleInfo;
  * practice]. A resistor that absorbs energy in a pulse but has no pulse rating gets a note (info), since its
  * continuous power rating says nothing about a pulse.
  */
-public final class SurgeEnergyRule implements Rule {
+public final class SurgeEnergyRule implements FigureRule {
 	public static final RuleId ID = RuleId.of("surge-energy");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.POWER, Severity.ERROR,
 			"a resistor absorbs more energy in a surge, or before a fuse opens, than its derated single-pulse rating");
@@ -50,13 +49,8 @@ public final class SurgeEnergyRule implements Rule {
 			if (part.getKind() != PartKind.RESISTOR) {
 				continue;
 			}
-			Worst worst = null;
-			for (SolvedCase c : context.cases()) {
-				Double e = c.pulseEnergy().get(part.getName());
-				if (e != null && (worst == null || e > worst.joules())) {
-					worst = new Worst(e, surgeName(c.faultCase().name()));
-				}
-			}
+			Worst worst = context.worst().pulse(part.getName()).map(w -> new Worst(w.value(), surgeName(w.caseName())))
+					.orElse(null);
 			if (worst == null) {
 				continue;
 			}

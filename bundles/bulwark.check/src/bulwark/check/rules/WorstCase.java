@@ -2,7 +2,6 @@ package bulwark.check.rules;
 
 import java.util.Optional;
 import bulwark.check.stress.Measure;
-import bulwark.check.cases.SolvedCase;
 
 /**
  * The largest figure of one stress of one part over all solved cases, the case it happened in, and what the
@@ -11,13 +10,6 @@ import bulwark.check.cases.SolvedCase;
 public record WorstCase(double value, String caseName, String what) {
 
 	public static Optional<WorstCase> of(CheckContext context, String part, Measure stress) {
-		WorstCase worst = null;
-		for (SolvedCase c : context.cases()) {
-			double v = stress.judged(c, part);
-			if (!Double.isNaN(v) && (worst == null || v > worst.value)) {
-				worst = new WorstCase(v, c.faultCase().name(), stress.what(c.faultCase()));
-			}
-		}
-		return Optional.ofNullable(worst);
+		return context.worst().of(part, stress).map(w -> new WorstCase(w.value(), w.caseName(), w.what()));
 	}
 }

@@ -15,6 +15,7 @@ import bulwark.check.DesignResult;
 import bulwark.check.finding.Finding;
 import bulwark.check.load.DesignLoader;
 import bulwark.check.rules.CheckContext;
+import bulwark.check.rules.FigureRule;
 import bulwark.check.rules.Rule;
 import bulwark.check.finding.RuleInfo;
 import bulwark.check.rules.RuleRegistry;
@@ -175,7 +176,7 @@ class CheckFuzz {
 	/** The properties above can fail: with a rule that crashes, a design the check reaches fails them. */
 	@Example
 	void aRuleThatCrashesFailsTheFuzzRun() {
-		Rule crashing = new Rule() {
+		Rule crashing = new FigureRule() {
 			@Override
 			public RuleInfo info() {
 				return RuleRegistry.all().get(0).info();
