@@ -17,7 +17,7 @@ class InputRangeRuleTest {
 	 * A 5 V comparator whose inputs work up to 1.5 V below its supply (3.5 V); in_minus sits on a divider of
 	 * 10 kΩ over 40 kΩ from 5 V: 4 V [closed form, divider], 0.5 V too high.
 	 */
-	private static final String HIGH = """
+	static final String HIGH = """
 			design "reference too near the rail"
 			reference net gnd
 			net v5

@@ -79,7 +79,7 @@ class MainsWaveformTest {
 	}
 
 	/** A capacitive dropper: 1 kΩ in series with 220 nF across the terminals. */
-	private static final String DROPPER = HEAD + """
+	static final String DROPPER = HEAD + """
 			resistor R1 (a: tip, b: mid) { value 1 kΩ rated power 2 W rated voltage 500 V }
 			capacitor C1 (a: mid, b: gnd) { value 220 nF rated voltage 630 V }
 			""";

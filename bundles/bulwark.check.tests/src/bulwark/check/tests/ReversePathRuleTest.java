@@ -26,7 +26,7 @@ class ReversePathRuleTest {
 	 * tip through R1, which blocks nothing: 24 V of reverse voltage against its rated 5 V derated to 70 %
 	 * (NASA EEE-INST-002 level, unconfirmed) — 3.5 V.
 	 */
-	private static final String EXPOSED = """
+	static final String EXPOSED = """
 			design "LED on the tip"
 			reference net gnd
 			net tip

@@ -21,7 +21,7 @@ class SeriesStringRuleTest {
 	 * and R1 155.6 V, both over the 150 V limiting element voltage of 0805 [common practice, docs/sources.md#resistor-voltage];
 	 * the finding is on R2, the worst, and says the sharing is unequal.
 	 */
-	private static final String STRING = """
+	static final String STRING = """
 			design "series string"
 			reference net gnd
 			net tip

@@ -22,7 +22,7 @@ class SurgeEnergyRuleTest {
 			""");
 
 	/** 100 Ω straight across the terminals, rated for 0.2 J in one pulse. */
-	private static final String ACROSS = """
+	static final String ACROSS = """
 			design "a surge into a resistor"
 			reference net gnd
 			net tip
