@@ -37,7 +37,17 @@ final class CaseReading implements CaseRunner.Sink {
 	private final List<Rule> rules;
 	private final WorstFigures worst;
 	private final SortedMap<Long, CaseResult> results = new TreeMap<>();
-	private final SortedMap<Long, WaveformTrace> traces = new TreeMap<>();
+	/**
+	 * The waveform cases plotted: every one in a design with a few terminals; with many, the
+	 * {@value #MOST_TRACES} that stress their most stressed part most, for a page of thousands of plots is read
+	 * by no one.
+	 */
+	static final int MOST_TRACES = 24;
+
+	private record Plotted(long order, double utilisation, WaveformTrace trace) {
+	}
+
+	private final List<Plotted> traces = new ArrayList<>();
 	private final SortedMap<Long, Finding> failures = new TreeMap<>();
 	private CheckContext context;
 	private List<RuleReading> readings;
@@ -66,11 +76,20 @@ final class CaseReading implements CaseRunner.Sink {
 		if (outcome.cycle() != null) {
 			// the part this waveform case stresses most, for plots
 			stresses.stream().filter(p -> p.utilisation() != null).max(Comparator.comparingDouble(PartStress::utilisation))
-					.ifPresent(p -> traces.put(order, WaveformTrace.of(c.name(), p.part(), outcome.cycle())));
+					.ifPresent(p -> plot(order, p.utilisation(), WaveformTrace.of(c.name(), p.part(), outcome.cycle())));
 		}
 		worst.read(order, solved);
 		for (RuleReading r : readings) {
 			r.read(order, solved);
+		}
+	}
+
+	/** Keeps the trace if it is among the most stressing so far; the least stressing (the later on a tie) goes. */
+	private void plot(long order, double utilisation, WaveformTrace trace) {
+		traces.add(new Plotted(order, utilisation, trace));
+		if (traces.size() > MOST_TRACES) {
+			traces.remove(traces.stream().min(Comparator.comparingDouble(Plotted::utilisation)
+					.thenComparing(Plotted::order, Comparator.reverseOrder())).orElseThrow());
 		}
 	}
 
@@ -106,8 +125,9 @@ final class CaseReading implements CaseRunner.Sink {
 		return List.copyOf(results.values());
 	}
 
+	/** The traces kept, in the check's order. */
 	synchronized List<WaveformTrace> traces() {
-		return List.copyOf(traces.values());
+		return traces.stream().sorted(Comparator.comparingLong(Plotted::order)).map(Plotted::trace).toList();
 	}
 
 	/** A finding for each case that did not solve, in the check's order. */

@@ -124,8 +124,9 @@ class ReviewPolicyTest {
 		// peaks — 5 ms into a 50 Hz cycle, 4.17 ms into a 60 Hz one (IEC 60038 frequencies); then the cycle as a
 		// whole, which carries the average powers
 		assertEquals(List.of("normal, terminals open", "normal, TIP shorted to COM",
-				"230 V 50 Hz mains (358 V peak), COM + to TIP −, at 5 ms", "230 V 50 Hz mains (358 V peak)",
-				"120 V 60 Hz mains (187 V peak), COM + to TIP −, at 4.17 ms", "120 V 60 Hz mains (187 V peak)"), names);
+				"230 V 50 Hz mains (358 V peak), COM + to TIP −, at 5 ms", "230 V 50 Hz mains (358 V peak), between COM and TIP",
+				"120 V 60 Hz mains (187 V peak), COM + to TIP −, at 4.17 ms",
+				"120 V 60 Hz mains (187 V peak), between COM and TIP"), names);
 		// the resistor is straight across the terminals: it sees 357.8 V and 186.7 V [closed form]
 		assertEquals(-253 * Math.sqrt(2), voltage(r, 2), 1e-6);
 		assertEquals(-132 * Math.sqrt(2), voltage(r, 4), 1e-6);
@@ -134,7 +135,7 @@ class ReviewPolicyTest {
 		Finding power = Fixtures.only(r, ResistorPowerRule.ID);
 		assertEquals(253 * 253 / 100e3, power.value(), 1e-9);
 		assertEquals(0.6, power.limit(), 1e-12);
-		assertTrue(power.message().contains("average power over the cycle 640 mW in case '230 V 50 Hz mains (358 V peak)'"),
+		assertTrue(power.message().contains("average power over the cycle 640 mW in case '230 V 50 Hz mains (358 V peak), between COM and TIP'"),
 				power.message());
 		assertTrue(power.message().contains("its rated 1 W derated to 60 % (600 mW)"), power.message());
 	}

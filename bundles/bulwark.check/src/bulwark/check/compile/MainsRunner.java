@@ -29,6 +29,7 @@ import bulwark.engine.source.Sine;
 import bulwark.engine.source.SwitchedSine;
 import bulwark.lang.design.Part;
 import bulwark.check.cases.FaultCase;
+import bulwark.check.cases.CaseKind;
 import bulwark.check.cases.CaseOutcome;
 import bulwark.check.cases.SolvedCycle;
 
@@ -404,8 +405,12 @@ final class MainsRunner {
 		}
 		if (!averages.isEmpty()) {
 			boolean firstPositive = sourceVolts(cycle, source, crest) >= 0;
-			FaultCase whole = new FaultCase(staged.name(), c.kind(), c.added(), c.replaced(),
-					firstPositive ? c.from() : c.to(), firstPositive ? c.to() : c.from());
+			// a generated one named for its pair of terminals (a design with many has one per pair); a designer's
+			// case keeps the designer's name
+			String plus = firstPositive ? c.from() : c.to(), minus = firstPositive ? c.to() : c.from();
+			String name = c.kind() != CaseKind.MAINS || plus == null ? staged.name()
+					: staged.name() + ", between " + plus + " and " + minus;
+			FaultCase whole = new FaultCase(name, c.kind(), c.added(), c.replaced(), plus, minus);
 			List<Double> fromStart = cycle.times.stream().map(t -> t - cycle.start).toList();
 			outcomes.add(new CaseOutcome(whole, cycle.points.get(crest), Map.of(), averages,
 					new SolvedCycle(fromStart, cycle.points, method)));
