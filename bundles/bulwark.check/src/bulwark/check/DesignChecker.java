@@ -112,12 +112,47 @@ public final class DesignChecker {
 		return read instanceof DesignResult refused ? refused : check((String) read, file.toString(), CancelIndicator.NullImpl);
 	}
 
+	/**
+	 * The check of a design's text, reading it included in the time budget: a text that takes the whole
+	 * budget to parse and validate is not checked, and a fault while reading it stops this design only.
+	 */
 	public DesignResult check(String text, String file, CancelIndicator cancel) {
 		Optional<Finding> refused = InputLimits.check(text);
 		if (refused.isPresent()) {
 			return notChecked(file, refused.get().message(), refused.get().location());
 		}
-		return check(loader.load(text, file, cancel));
+		Budget.start(budget);
+		try {
+			LoadedDesign loaded;
+			try {
+				// validation asks the indicator between its checks: past the budget, it stops there
+				loaded = loader.load(text, file, () -> cancel.isCanceled() || Budget.overdue());
+			} catch (RuntimeException | Error e) {
+				if (cancel.isCanceled() && !(e instanceof OutOfMemoryError)) {
+					throw e; // the editor has a newer text: this check is dropped, not reported
+				}
+				return notRead(file, e);
+			}
+			return guarded(loaded);
+		} finally {
+			Budget.stop();
+		}
+	}
+
+	/** Why reading a design stopped: its budget, its size, or a fault of ours. */
+	private DesignResult notRead(String file, Throwable e) {
+		if (Budget.overdue()) {
+			return notChecked(file, CheckerRules.BUDGET, String.format(java.util.Locale.ROOT,
+					"not checked: the check took longer than its budget of %.3g s (stopped while reading the design)",
+					budget.toMillis() / 1000.0));
+		}
+		if (e instanceof OutOfMemoryError) {
+			return notChecked(file, CheckerRules.BUDGET, tooLarge());
+		}
+		if (e instanceof Error error && !(e instanceof StackOverflowError)) {
+			throw error;
+		}
+		return notChecked(file, CheckerRules.INTERNAL, internal(e));
 	}
 
 	/**
@@ -175,19 +210,34 @@ public final class DesignChecker {
 	public DesignResult check(LoadedDesign loaded) {
 		Budget.start(budget);
 		try {
+			return guarded(loaded);
+		} finally {
+			Budget.stop();
+		}
+	}
+
+	/** The check of a loaded design under the running budget, its faults turned into "not checked". */
+	private DesignResult guarded(LoadedDesign loaded) {
+		try {
+			Budget.checkpoint("reading the design");
 			return checkWithinBudget(loaded);
 		} catch (Budget.OverBudget e) {
 			return notChecked(loaded, CheckerRules.BUDGET, "not checked: " + e.getMessage());
 		} catch (RuntimeException e) {
-			return notChecked(loaded, CheckerRules.INTERNAL, "not checked: Bulwark met a fault of its own (" + e
-					+ "); please report it with the design");
+			return notChecked(loaded, CheckerRules.INTERNAL, internal(e));
 		} catch (OutOfMemoryError e) {
 			// what this design's check allocated is garbage once we return: the other designs of a batch go on
-			return notChecked(loaded, CheckerRules.BUDGET, "not checked: too large — the check of this design needed "
-					+ "more than the " + Runtime.getRuntime().maxMemory() / (1024 * 1024) + " MB of memory it runs in");
-		} finally {
-			Budget.stop();
+			return notChecked(loaded, CheckerRules.BUDGET, tooLarge());
 		}
+	}
+
+	private static String internal(Throwable e) {
+		return "not checked: Bulwark met a fault of its own (" + e + "); please report it with the design";
+	}
+
+	private static String tooLarge() {
+		return "not checked: too large — the check of this design needed more than the "
+				+ Runtime.getRuntime().maxMemory() / (1024 * 1024) + " MB of memory it runs in";
 	}
 
 	private DesignResult checkWithinBudget(LoadedDesign loaded) {
@@ -309,5 +359,11 @@ public final class DesignChecker {
 	static DesignResult notChecked(String file, String reason, SourceLocation where) {
 		return new DesignResult(file, null, Status.ERROR,
 				List.of(Finding.of(CheckerRules.FILE, reason).at(where)), List.of());
+	}
+
+	/** A design whose reading stopped before there was a design to place it on: the finding is at the file's start. */
+	private static DesignResult notChecked(String file, RuleInfo rule, String reason) {
+		return new DesignResult(file, null, Status.ERROR,
+				List.of(Finding.of(rule, reason).at(new SourceLocation(1, 1, 0, 0))), List.of());
 	}
 }

@@ -2,7 +2,8 @@ package bulwark.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.io.StringWriter;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -50,13 +51,13 @@ final class Checks {
 			checker = checker.withSingleFaults();
 		}
 		List<DesignResult> results = checkAll(checker, files, options.jobs, progress(files.size(), err));
-		StringWriter report = new StringWriter();
-		CheckReport.write(results, options, checker, report);
+		// the report is written as it is made, never held whole: a batch's JSON can be far larger than a design
+		DesignChecker reporting = checker; // the lambda below needs a variable set once
 		if (options.out == null) {
-			out.print(report);
+			CheckReport.write(results, options, reporting, out);
 			out.flush();
 		} else {
-			writeAtomically(options.out, report.toString());
+			writeAtomically(options.out, w -> CheckReport.write(results, options, reporting, w));
 		}
 		err.println("bulwark: " + summary(results));
 		err.println("bulwark: " + bulwark.check.report.Caution.TEXT);
@@ -154,5 +155,20 @@ final class Checks {
 	/** Writes beside the target, then moves into place, so a reader never sees half a report. */
 	static void writeAtomically(Path target, String content) throws IOException {
 		AtomicFile.write(target, content, false);
+	}
+
+	/** A report written as it is made. */
+	@FunctionalInterface
+	interface Report {
+		void writeTo(Writer w) throws IOException;
+	}
+
+	/** As above, the report written (in UTF-8) as it is made rather than held whole first. */
+	static void writeAtomically(Path target, Report report) throws IOException {
+		AtomicFile.write(target, stream -> {
+			Writer w = new java.io.BufferedWriter(new java.io.OutputStreamWriter(stream, StandardCharsets.UTF_8));
+			report.writeTo(w);
+			w.flush(); // not closed: the atomic write closes its own stream
+		}, false);
 	}
 }

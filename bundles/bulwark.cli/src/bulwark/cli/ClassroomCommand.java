@@ -2,7 +2,6 @@ package bulwark.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -79,9 +78,9 @@ final class ClassroomCommand implements Callable<Integer> {
 		List<String> pages = pageNames(files.stream().map(dir::relativize).toList());
 		for (int i = 0; i < files.size(); i++) {
 			String page = pages.get(i);
-			StringWriter html = new StringWriter();
-			HtmlReport.write(List.of(results.get(i)), Version.get(), bulwark.check.report.Caution.TEXT, html);
-			Checks.writeAtomically(target.resolve(page), html.toString());
+			DesignResult result = results.get(i);
+			Checks.writeAtomically(target.resolve(page),
+					w -> HtmlReport.write(List.of(result), Version.get(), bulwark.check.report.Caution.TEXT, w));
 		}
 		Checks.writeAtomically(target.resolve("summary.csv"), ClassSummary.csv(dir, files, results));
 		Checks.writeAtomically(target.resolve("summary.html"),

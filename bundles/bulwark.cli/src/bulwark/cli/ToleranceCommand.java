@@ -2,7 +2,6 @@ package bulwark.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 
@@ -76,13 +75,11 @@ final class ToleranceCommand implements Callable<Integer> {
 		Distribution distribution = chosen.distribution();
 		ToleranceAnalysis.Result result = ToleranceAnalysis.run(design.loaded().design(), chosen, samples, seed, distribution,
 				progress(err));
-		StringWriter report = new StringWriter();
 		switch (format) {
-		case json -> ToleranceReport.json(result, file.toString(), bulwark.check.report.Caution.TEXT, report);
-		case html -> ToleranceReport.html(result, file.toString(), bulwark.check.report.Caution.TEXT, report);
-		default -> ToleranceReport.text(result, file.toString(), bulwark.check.report.Caution.TEXT, report);
+		case json -> ToleranceReport.json(result, file.toString(), bulwark.check.report.Caution.TEXT, out);
+		case html -> ToleranceReport.html(result, file.toString(), bulwark.check.report.Caution.TEXT, out);
+		default -> ToleranceReport.text(result, file.toString(), bulwark.check.report.Caution.TEXT, out);
 		}
-		out.print(report);
 		out.flush();
 		if (!result.corners().failures().isEmpty() && result.corners().ranges().isEmpty()) {
 			return ExitCodes.NOT_CHECKED;

@@ -64,6 +64,12 @@ public final class Budget {
 		}
 	}
 
+	/** Whether the running check on this thread is past its deadline (never outside a check). */
+	public static boolean overdue() {
+		Budget b = CURRENT.get();
+		return b != null && System.nanoTime() > b.deadline;
+	}
+
 	/** Throws {@link OverBudget} when the running check is past its deadline; nothing outside a check. */
 	public static void checkpoint(String where) {
 		Budget b = CURRENT.get();
