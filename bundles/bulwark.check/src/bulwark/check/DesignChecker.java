@@ -126,7 +126,7 @@ public final class DesignChecker {
 			LoadedDesign loaded;
 			try {
 				// validation asks the indicator between its checks: past the budget, it stops there
-				loaded = loader.load(text, file, () -> cancel.isCanceled() || Budget.overdue());
+				loaded = loader.load(text, file, new WithinBudget(cancel));
 			} catch (RuntimeException | Error e) {
 				if (cancel.isCanceled() && !(e instanceof OutOfMemoryError)) {
 					throw e; // the editor has a newer text: this check is dropped, not reported
@@ -136,6 +136,23 @@ public final class DesignChecker {
 			return guarded(loaded);
 		} finally {
 			Budget.stop();
+		}
+	}
+
+	/**
+	 * Cancelled when the caller cancels or the budget runs out. A class, not a lambda: this JDK 17's class-data
+	 * archive dump (the command line records one on its first run) crashes on a lambda of this interface.
+	 */
+	private static final class WithinBudget implements CancelIndicator {
+		private final CancelIndicator caller;
+
+		WithinBudget(CancelIndicator caller) {
+			this.caller = caller;
+		}
+
+		@Override
+		public boolean isCanceled() {
+			return caller.isCanceled() || Budget.overdue();
 		}
 	}
 
