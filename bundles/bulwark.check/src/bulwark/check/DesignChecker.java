@@ -97,6 +97,11 @@ public final class DesignChecker {
 		return new DesignChecker(loader, forcedPolicy, budget, replacement, singleFaults);
 	}
 
+	/** The time one design's check may take; the command line gives a design's fix search as long. */
+	public Duration budget() {
+		return budget;
+	}
+
 	/** The loader this checker parses with; quick fixes parse their copies with it. */
 	public DesignLoader loader() {
 		return loader;

@@ -23,12 +23,13 @@ final class CheckReport {
 	private CheckReport() {
 	}
 
-	static void write(List<DesignResult> results, CheckOptions options, DesignChecker checker, Writer w)
-			throws IOException {
+	/** @param err where a note goes when a design's fix search stopped at its time limit */
+	static void write(List<DesignResult> results, CheckOptions options, DesignChecker checker, Writer w,
+			java.io.PrintWriter err) throws IOException {
 		switch (options.format) {
 		case json:
 			JsonReport.write(results, Version.get(), bulwark.check.report.Caution.TEXT,
-					options.noFixes ? (r, f) -> List.of() : fixes(checker), w);
+					options.noFixes ? (r, f) -> List.of() : fixes(checker, err), w);
 			break;
 		case html:
 			HtmlReport.write(results, Version.get(), bulwark.check.report.Caution.TEXT, w);
@@ -50,9 +51,12 @@ final class CheckReport {
 		}
 	}
 
-	/** The verified quick fixes of each finding, worked out once per design when the report asks. */
+	/**
+	 * The verified quick fixes of each finding, worked out once per design when the report asks, for as long
+	 * as one design's check may take: past that, the later findings are offered none, and a note says so.
+	 */
 	private static java.util.function.BiFunction<DesignResult, bulwark.check.finding.Finding, List<bulwark.check.fix.Fix>> fixes(
-			DesignChecker checker) {
+			DesignChecker checker, java.io.PrintWriter err) {
 		java.util.Map<DesignResult, java.util.Map<bulwark.check.finding.Finding, List<bulwark.check.fix.Fix>>> cache =
 				new java.util.IdentityHashMap<>();
 		return (r, f) -> cache.computeIfAbsent(r, d -> {
@@ -61,7 +65,17 @@ final class CheckReport {
 			}
 			try {
 				TextFiles.Read read = TextFiles.read(Path.of(d.file()), "the design");
-				return read instanceof TextFiles.Text t ? QuickFixes.of(checker, t.text(), d.file(), d) : java.util.Map.of();
+				if (!(read instanceof TextFiles.Text t)) {
+					return java.util.Map.of();
+				}
+				QuickFixes.Search search = QuickFixes.search(checker, t.text(), d.file(), d, checker.budget());
+				if (!search.complete()) {
+					err.printf(java.util.Locale.ROOT, "bulwark: %s: quick fixes were looked for during %.3g s only (each "
+							+ "proposal is a whole check of the changed design); the later findings have none offered%n",
+							d.file(), checker.budget().toMillis() / 1000.0);
+					err.flush();
+				}
+				return search.fixes();
 			} catch (RuntimeException | OutOfMemoryError e) {
 				return java.util.Map.of(); // no fixes offered; the findings stand as checked
 			}

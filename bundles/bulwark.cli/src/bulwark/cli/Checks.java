@@ -54,10 +54,10 @@ final class Checks {
 		// the report is written as it is made, never held whole: a batch's JSON can be far larger than a design
 		DesignChecker reporting = checker; // the lambda below needs a variable set once
 		if (options.out == null) {
-			CheckReport.write(results, options, reporting, out);
+			CheckReport.write(results, options, reporting, out, err);
 			out.flush();
 		} else {
-			writeAtomically(options.out, w -> CheckReport.write(results, options, reporting, w));
+			writeAtomically(options.out, w -> CheckReport.write(results, options, reporting, w, err));
 		}
 		err.println("bulwark: " + summary(results));
 		err.println("bulwark: " + bulwark.check.report.Caution.TEXT);

@@ -31,16 +31,33 @@ public final class QuickFixes {
 	private QuickFixes() {
 	}
 
+	/**
+	 * The fixes found for a design's findings; {@code complete} false when the search stopped at its time
+	 * limit, so that the findings after that point may have fixes that were not looked for.
+	 */
+	public record Search(Map<Finding, List<Fix>> fixes, boolean complete) {
+	}
+
 	/** The verified fixes of each finding that has any, in the order of the findings. */
 	public static Map<Finding, List<Fix>> of(DesignChecker checker, String text, String file, DesignResult result) {
+		return search(checker, text, file, result, null).fixes();
+	}
+
+	/**
+	 * As {@link #of}, trying proposals only until {@code limit} has passed (null: no limit): each proposal is
+	 * a whole check of the changed design, and a design with many terminals takes seconds a check.
+	 */
+	public static Search search(DesignChecker checker, String text, String file, DesignResult result,
+			java.time.Duration limit) {
+		long deadline = limit == null ? Long.MAX_VALUE : System.nanoTime() + limit.toNanos();
 		Map<Finding, List<Fix>> fixes = new LinkedHashMap<>();
 		LoadedDesign loaded = checker.loader().load(text, file, CancelIndicator.NullImpl);
 		if (loaded.design() == null || result.policy() == null) {
-			return fixes;
+			return new Search(fixes, true);
 		}
 		ReviewPolicy policy = checker.policyFor(loaded.design(), file).policy();
 		if (policy == null) {
-			return fixes;
+			return new Search(fixes, true);
 		}
 		FixContext context = new FixContext(text, file, loaded.design(), result, policy, checker);
 		Set<String> errorsBefore = keys(result, Severity.ERROR);
@@ -51,6 +68,12 @@ public final class QuickFixes {
 			List<Fix> verified = new ArrayList<>();
 			for (FixProvider provider : PROVIDERS) {
 				for (Fix fix : provider.propose(context, f)) {
+					if (System.nanoTime() > deadline) {
+						if (!verified.isEmpty()) {
+							fixes.put(f, verified);
+						}
+						return new Search(fixes, false);
+					}
 					if (removes(checker, fix.applyTo(text), file, f, errorsBefore)) {
 						verified.add(fix);
 						if (FIRST_ONLY) {
@@ -63,7 +86,7 @@ public final class QuickFixes {
 				fixes.put(f, verified);
 			}
 		}
-		return fixes;
+		return new Search(fixes, true);
 	}
 
 	private static boolean removes(DesignChecker checker, String fixed, String file, Finding target, Set<String> before) {

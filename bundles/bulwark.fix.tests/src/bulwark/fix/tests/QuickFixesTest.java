@@ -56,6 +56,25 @@ class QuickFixesTest {
 		assertTrue(after.findings().stream().noneMatch(f -> f.rule().text().equals("resistor-power")), after.findings().toString());
 	}
 
+	/**
+	 * Each proposal is a whole check of the changed design: the search stops at its time limit and says so,
+	 * rather than running for minutes on a design whose check takes seconds.
+	 */
+	@Test
+	void theSearchStopsAtItsTimeLimitAndSaysSo(@TempDir Path dir) throws Exception {
+		Path lab = dir.resolve("lab.bulwark");
+		Files.copy(root().resolve("examples/lab-indicator-seeded.bulwark"), lab);
+		Files.copy(root().resolve("examples/teaching-lab.bulwark-policy"), dir.resolve("teaching-lab.bulwark-policy"));
+		String text = Files.readString(lab);
+		DesignResult r = CHECKER.check(text, lab.toString(), CancelIndicator.NullImpl);
+		QuickFixes.Search unhurried = QuickFixes.search(CHECKER, text, lab.toString(), r, java.time.Duration.ofMinutes(5));
+		assertTrue(unhurried.complete());
+		assertTrue(!unhurried.fixes().isEmpty());
+		QuickFixes.Search hurried = QuickFixes.search(CHECKER, text, lab.toString(), r, java.time.Duration.ZERO);
+		assertTrue(!hurried.complete());
+		assertTrue(hurried.fixes().isEmpty(), hurried.fixes().toString());
+	}
+
 	@Test
 	void raiseAPulseRatingForASurge(@TempDir Path dir) throws Exception {
 		Files.writeString(dir.resolve("surge.bulwark-policy"), "policy \"surge only\"\n  mains none\n  surge 1 kV behind 2 Ω\n");
