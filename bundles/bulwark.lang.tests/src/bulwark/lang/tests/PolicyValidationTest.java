@@ -59,6 +59,14 @@ class PolicyValidationTest {
 		assertEquals(1, wrong);
 	}
 
+	/** A derating is not a tolerance: the advice names what was being written. */
+	@Test
+	void aDeratingInAUnitIsToldItIsAPercentage() throws Exception {
+		var errors = parse("derate resistor power to 60 V").eResource().getErrors();
+		assertEquals(1, errors.size(), errors.toString());
+		assertEquals("a derating is a percentage of the rating: write to 60 %", errors.get(0).getMessage());
+	}
+
 	@Test
 	void quantitiesInTheirUnits() throws Exception {
 		validation.assertError(parse("mains 230 A"), DesignPackage.Literals.MAINS_SYSTEM, IssueCodes.WRONG_UNIT,

@@ -169,7 +169,13 @@ public class SyntaxErrorMessages extends SyntaxErrorMessageProvider {
 					+ " needs its value here, a number with its unit (for example 250 mW), not " + TokenWords.found(found);
 		}
 		if (expected == PERCENT) {
-			return "a tolerance is a percentage: write ± " + (before == null ? "1" : text(before)) + " %";
+			// the word before the number says which percentage: a derating ("to 60"), a tolerance ("± 1")
+			Token word = before == null ? null : previousVisible(tokens, index(tokens, before));
+			String number = before == null ? "1" : text(before);
+			if (word != null && text(word).equals("to")) {
+				return "a derating is a percentage of the rating: write to " + number + " %";
+			}
+			return "a tolerance is a percentage: write ± " + number + " %";
 		}
 		if (expected == AT) {
 			return "a terminal names its net after 'at': write terminal NAME at " + (TokenWords.isEnd(found) ? "net"
