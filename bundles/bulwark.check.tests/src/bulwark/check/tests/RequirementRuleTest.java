@@ -56,6 +56,54 @@ class RequirementRuleTest {
 				test.message());
 	}
 
+	/**
+	 * A voltage indicator: a 1 kΩ lamp, on from 1 mA, behind 9 kΩ across the terminals. It comes on at
+	 * 1 mA · 10 kΩ = 10 V either way round, and goes off at the same voltage: a lamp has no hysteresis
+	 * [closed form, Ohm's law]. An LED in its place lights one way round only.
+	 */
+	private static final String VOLTAGE_INDICATOR = """
+			design "voltage indicator"
+			reference net gnd
+			net tip
+			net lamp
+			terminal TIP at tip
+			terminal COM at gnd common
+			resistor R_SERIES (a: tip, b: lamp) { value 9 kΩ package 2512 rated power 1 W rated voltage 1 kV }
+			indicator L1 (a: lamp, b: gnd) { resistance 1 kΩ activation 1 mA rated power 1 W rated voltage 1 kV }
+			""";
+
+	@Test
+	void theSwitchOnVoltageOfAVoltageIndicator() {
+		DesignResult met = Fixtures.check(VOLTAGE_INDICATOR + "require switch_on_voltage 12 V between TIP and COM\n");
+		Fixtures.assertSilent(met, ID);
+		var pair = met.function().pairs().get(0);
+		assertEquals(10, pair.forward().onVolts(), 10 * 1e-3);
+		assertEquals(10, pair.forward().offVolts(), 10 * 1e-3);
+		assertEquals(10, pair.reverse().onVolts(), 10 * 1e-3);
+		String missedText = VOLTAGE_INDICATOR + "require switch_on_voltage 9 V between TIP and COM #! requirement\n";
+		DesignResult missed = Fixtures.check(missedText);
+		assertEquals(Fixtures.expected(missedText, ID), Fixtures.actual(missed, ID));
+		Finding f = Fixtures.only(missed, ID);
+		assertEquals(10, f.value(), 10 * 1e-3);
+		assertEquals(9, f.limit(), 0);
+		assertTrue(f.message().startsWith("switch on voltage between TIP and COM is 10 V, required at most 9 V"), f.message());
+	}
+
+	@Test
+	void anLedLightsOneWayRoundOnly() {
+		String led = VOLTAGE_INDICATOR.replace(
+				"indicator L1 (a: lamp, b: gnd) { resistance 1 kΩ activation 1 mA rated power 1 W rated voltage 1 kV }",
+				"led D1 (anode: lamp, cathode: gnd) { colour red rated forward 1 A rated reverse 1 kV rated power 10 W }");
+		DesignResult r = Fixtures.check(led + "require switch_on_voltage 12 V between COM and TIP\n");
+		var pair = r.function().pairs().get(0);
+		// TIP positive: 1 mA through 9 kΩ plus the LED's forward drop (about 2 V) — between 9 V and 12 V
+		assertTrue(pair.forward().onVolts() > 9 && pair.forward().onVolts() < 12, pair.forward().toString());
+		assertEquals(null, pair.reverse().onVolts());
+		Finding f = Fixtures.only(r, ID);
+		assertEquals(Severity.WARNING, f.severity());
+		assertTrue(f.message().contains("does not come on as a DC voltage across the terminals rises to 1 kV"), f.message());
+	}
+
 	@Test
 	void silentWhenEveryRequirementIsMet() {
 		String met = Fixtures.replaced(Fixtures.replaced(CHECKER, "8766 h #! requirement", "8000 h"), "10 mA between CORE and SCREEN #! requirement", "15 mA between CORE and SCREEN");

@@ -47,6 +47,11 @@ public final class FunctionAnalysis {
 
 	/** @param open the solution of the normal case with the terminals open */
 	public static FunctionFigures of(CompiledDesign design, DcSolution open) {
+		return of(design, open, true);
+	}
+
+	/** @param voltages whether to sweep a voltage across each pair too (VoltageSwitching) */
+	public static FunctionFigures of(CompiledDesign design, DcSolution open, boolean voltages) {
 		Optional<IndicatorState> indicator = IndicatorState.of(design);
 		List<String> problems = new ArrayList<>();
 		List<Part> batteries = design.parts().values().stream().filter(p -> p.getKind() == PartKind.BATTERY).toList();
@@ -89,9 +94,14 @@ public final class FunctionAnalysis {
 					}
 				}
 			}
+			VoltageSwitching forward = VoltageSwitching.NONE, reverse = VoltageSwitching.NONE;
+			if (indicator.isPresent() && voltages) {
+				forward = VoltageSwitching.of(design, indicator.get(), a, b);
+				reverse = VoltageSwitching.of(design, indicator.get(), b, a);
+			}
 			pairs.add(new PairFigures(pair[0].getName(), pair[1].getName(), onWhenShorted, risingOhms, fallingOhms,
 					testCurrent, openVolts, shortedBattery, ledsLit(solver, design, a, b, openVolts), risingCurve,
-					fallingCurve));
+					fallingCurve, forward, reverse));
 		}
 		Double standby = batteries.isEmpty() ? null : discharge(batteries, open);
 		Double life = null;

@@ -8,11 +8,13 @@ import java.util.List;
  * rises and as it falls (null when it does not switch), the current into a short, the open-circuit voltage,
  * the battery current with the terminals shorted (null without a battery), and the colours of LED under test
  * it lights (from {@link FunctionAnalysis#LED_LIT} with the highest forward voltage of each colour's range),
- * and — for the first pair whose indicator switches — the sweeps themselves, for plots (empty otherwise).
+ * and — for the first pair whose indicator switches — the sweeps themselves, for plots (empty otherwise);
+ * then where the indicator switches as a voltage across the pair rises and falls, {@code from} positive
+ * ({@code forward}) and {@code to} positive ({@code reverse}).
  */
 public record PairFigures(String from, String to, boolean onWhenShorted, Double risingOhms, Double fallingOhms,
 		double testCurrentAmps, double openVolts, Double shortedBatteryAmps, List<String> lightsLeds,
-		List<SweepPoint> rising, List<SweepPoint> falling) {
+		List<SweepPoint> rising, List<SweepPoint> falling, VoltageSwitching forward, VoltageSwitching reverse) {
 
 	public PairFigures {
 		lightsLeds = List.copyOf(lightsLeds);
@@ -31,5 +33,10 @@ public record PairFigures(String from, String to, boolean onWhenShorted, Double 
 	/** The hysteresis at the terminals, when the indicator switches both ways. */
 	public Double hysteresisOhms() {
 		return risingOhms == null || fallingOhms == null ? null : Math.abs(risingOhms - fallingOhms);
+	}
+
+	/** The switching voltages with this terminal positive (one of the pair's two). */
+	public VoltageSwitching withPositive(String terminal) {
+		return terminal.equals(from) ? forward : reverse;
 	}
 }

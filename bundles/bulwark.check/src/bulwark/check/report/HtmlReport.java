@@ -89,16 +89,29 @@ public final class HtmlReport {
 		}
 	}
 
+	/** "12 V (TIP +), 12 V (COM +)": the DC voltage the indicator comes on at, either way round. */
+	private static String switchOn(PairFigures p) {
+		List<String> shown = new java.util.ArrayList<>();
+		if (p.forward().onVolts() != null) {
+			shown.add(show(p.forward().onVolts(), "V") + " (" + escape(p.from()) + " +)");
+		}
+		if (p.reverse().onVolts() != null) {
+			shown.add(show(p.reverse().onVolts(), "V") + " (" + escape(p.to()) + " +)");
+		}
+		return shown.isEmpty() ? "—" : String.join(", ", shown);
+	}
+
 	private static void function(FunctionFigures f, Writer w) throws IOException {
 		if (f.pairs().isEmpty() && f.standbyAmps() == null) {
 			return;
 		}
 		w.write("<h3>Function at the terminals</h3>\n<table><tr><th>terminals</th><th>threshold</th><th>hysteresis</th>"
-				+ "<th>test current</th><th>open-circuit voltage</th><th>lights LEDs</th></tr>\n");
+				+ "<th>test current</th><th>open-circuit voltage</th><th>comes on at</th><th>lights LEDs</th></tr>\n");
 		for (PairFigures p : f.pairs()) {
 			w.write("<tr><td>" + escape(p.from() + "–" + p.to()) + "</td><td>" + show(p.thresholdOhms(), "Ω") + "</td><td>"
 					+ show(p.hysteresisOhms(), "Ω") + "</td><td>" + show(p.testCurrentAmps(), "A") + "</td><td>"
-					+ show(p.openVolts(), "V") + "</td><td>" + escape(String.join(", ", p.lightsLeds())) + "</td></tr>\n");
+					+ show(p.openVolts(), "V") + "</td><td>" + switchOn(p) + "</td><td>"
+					+ escape(String.join(", ", p.lightsLeds())) + "</td></tr>\n");
 		}
 		w.write("</table>\n");
 		if (f.standbyAmps() != null) {

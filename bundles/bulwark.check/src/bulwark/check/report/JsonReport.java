@@ -184,6 +184,12 @@ public final class JsonReport {
 			number(w.name("test_current"), p.testCurrentAmps());
 			number(w.name("open_voltage"), p.openVolts());
 			number(w.name("shorted_battery_current"), p.shortedBatteryAmps());
+			// a DC voltage across the pair, "from" positive, then "to" positive: where the indicator comes on
+			// as it rises and goes off as it falls back
+			number(w.name("switch_on_voltage"), p.forward().onVolts());
+			number(w.name("switch_off_voltage"), p.forward().offVolts());
+			number(w.name("switch_on_voltage_reversed"), p.reverse().onVolts());
+			number(w.name("switch_off_voltage_reversed"), p.reverse().offVolts());
 			for (String direction : new String[] { "rising", "falling" }) {
 				w.name("sweep_" + direction).beginArray();
 				for (var point : direction.equals("rising") ? p.rising() : p.falling()) {

@@ -111,6 +111,14 @@ public final class RequirementRule implements FigureRule {
 			unit = "V";
 			atMost = false;
 			break;
+		case "switch_on_voltage":
+			// a voltage indicator or logic input: on from this voltage up, the first terminal positive (each
+			// terminal with the common one when no pair is named)
+			figure = pairs.stream().map(p -> p.withPositive(from == null ? p.from() : from).onVolts())
+					.filter(x -> x != null).max(Double::compare);
+			unit = "V";
+			atMost = true;
+			break;
 		case "hysteresis":
 			if (ohms) {
 				figure = pairs.stream().map(PairFigures::hysteresisOhms).filter(x -> x != null).findFirst();
@@ -157,6 +165,11 @@ public final class RequirementRule implements FigureRule {
 		case "threshold", "hysteresis" -> f.indicator() == null ? "nothing in the design indicates (no indicator, LED or comparator)"
 				: f.indicator() + " does not switch as the resistance across the terminals goes from a short to an open circuit";
 		case "standby_current", "battery_life" -> "the design has no battery (or no capacity for it)";
+		case "switch_on_voltage" -> f.indicator() == null ? "nothing in the design indicates (no indicator, LED or comparator)"
+				: f.pairs().stream().flatMap(p -> java.util.stream.Stream.of(p.forward(), p.reverse()))
+						.map(bulwark.check.function.VoltageSwitching::problem).filter(x -> x != null).findFirst()
+						.orElse(f.indicator() + " does not come on as a DC voltage across the terminals rises to "
+								+ Figures.engineering(bulwark.check.function.VoltageSwitching.HIGHEST, "V"));
 		default -> "the design has no terminal pair to measure across";
 		};
 	}

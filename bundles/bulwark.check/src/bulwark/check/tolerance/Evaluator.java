@@ -49,7 +49,7 @@ public final class Evaluator {
 			}
 		}
 		DcSolution open = (DcSolution) outcomes.get(0).result();
-		FunctionFigures f = FunctionAnalysis.of(compiled, open);
+		FunctionFigures f = FunctionAnalysis.of(compiled, open, false); // the switching voltages are not followed
 		for (PairFigures p : f.pairs()) {
 			String pair = p.from() + "–" + p.to();
 			if (p.thresholdOhms() != null) {

@@ -30,7 +30,7 @@ public record Yield(String requirement, int met, int of) {
 			case "standby_current" -> all(f -> f.name().equals("standby current"), x -> x <= value);
 			case "battery_life" -> all(f -> f.name().equals("battery life"), x -> x * 3600 >= value);
 			case "led_test" -> all(f -> f.name().startsWith("open voltage") && matches(f, pair), x -> x >= value);
-			default -> null; // hysteresis is not followed by the tolerance analysis
+			default -> null; // hysteresis and the switch-on voltage are not followed by the tolerance analysis
 			};
 			if (meets != null) {
 				yields.add(count(label, samples, meets));

@@ -30,7 +30,9 @@ public class RequirementValidator extends AbstractDeclarativeValidator {
 			"standby_current", new Figure("standby_current", List.of(Unit.AMPERE), "at most this current with the terminals open"),
 			"battery_life", new Figure("battery_life", List.of(Unit.HOUR), "at least this long on the battery, terminals open"),
 			"hysteresis", new Figure("hysteresis", List.of(Unit.VOLT, Unit.OHM), "at least this much, at the input (V) or the terminals (Ω)"),
-			"led_test", new Figure("led_test", List.of(Unit.VOLT), "at least this open-circuit voltage, to light an LED under test"));
+			"led_test", new Figure("led_test", List.of(Unit.VOLT), "at least this open-circuit voltage, to light an LED under test"),
+			"switch_on_voltage", new Figure("switch_on_voltage", List.of(Unit.VOLT),
+					"the indicator is on from at most this DC voltage across the terminals, the first one positive"));
 
 	/**
 	 * Composed into BulwarkValidator (@ComposedChecks), which registers the checks: registering this one for
