@@ -170,6 +170,15 @@ class LanguageServerTest {
 				.get(30, TimeUnit.SECONDS);
 		List<String> names = ratings.getRight().getItems().stream().map(i -> i.getLabel()).toList();
 		assertTrue(names.contains("reverse ") && names.contains("forward "), names.toString());
+		// after 'require', the figures a design can require
+		String requiring = "design \"probe\"\nreference net gnd\nrequire ";
+		server.getTextDocumentService().didChange(new org.eclipse.lsp4j.DidChangeTextDocumentParams(
+				new org.eclipse.lsp4j.VersionedTextDocumentIdentifier(probeUri, 3),
+				List.of(new org.eclipse.lsp4j.TextDocumentContentChangeEvent(requiring))));
+		var figures = server.getTextDocumentService().completion(new org.eclipse.lsp4j.CompletionParams(
+				new TextDocumentIdentifier(probeUri), new Position(2, "require ".length()))).get(30, TimeUnit.SECONDS);
+		List<String> required = figures.getRight().getItems().stream().map(i -> i.getLabel()).toList();
+		assertTrue(required.contains("switch_on_voltage ") && required.contains("threshold "), required.toString());
 	}
 
 	@Test

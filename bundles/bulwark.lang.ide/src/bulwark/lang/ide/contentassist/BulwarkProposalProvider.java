@@ -18,6 +18,7 @@ import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
 import bulwark.lang.design.PinBinding;
 import bulwark.lang.design.Setting;
+import bulwark.lang.validation.RequirementValidator;
 import bulwark.lang.kinds.KindCatalog;
 import bulwark.lang.kinds.KindSpec;
 import bulwark.lang.kinds.SettingSpec;
@@ -57,6 +58,11 @@ public class BulwarkProposalProvider extends IdeContentProposalProvider {
 			for (SettingSpec s : rule.equals("Rating") ? spec.ratings() : spec.parameters()) {
 				propose(s.name() + " ", s.meaning(), context, acceptor);
 			}
+			return;
+		}
+		if (rule.equals("Requirement") && feature.equals("what")) {
+			RequirementValidator.FIGURES.values().stream().sorted(java.util.Comparator.comparing(RequirementValidator.Figure::name))
+					.forEach(f -> propose(f.name() + " ", f.meaning(), context, acceptor));
 			return;
 		}
 		if (rule.equals("Quantity") && feature.equals("unit")) {
