@@ -11,6 +11,12 @@ import bulwark.lang.parser.SyntaxErrorMessages;
 /** Guice bindings of the language runtime; the generated base binds everything the grammar needs. */
 public class BulwarkRuntimeModule extends AbstractBulwarkRuntimeModule {
 
+	/** Names may be unit symbols (see the grammar's Name rule). */
+	@Override
+	public Class<? extends org.eclipse.xtext.conversion.IValueConverterService> bindIValueConverterService() {
+		return bulwark.lang.conversion.BulwarkValueConverters.class;
+	}
+
 	public Class<? extends ISyntaxErrorMessageProvider> bindISyntaxErrorMessageProvider() {
 		return SyntaxErrorMessages.class;
 	}

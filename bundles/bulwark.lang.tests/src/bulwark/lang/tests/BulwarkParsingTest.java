@@ -103,6 +103,33 @@ class BulwarkParsingTest {
 		assertTrue(escaped.eResource().getErrors().isEmpty(), escaped.eResource().getErrors().toString());
 	}
 
+	/** The lexer reads TA (tera-ampere), s (second), A and fA as units; as names they are names all the same. */
+	@Test
+	void namesThatReadAsUnitSymbolsAreNames() throws Exception {
+		Design d = parser.parse("""
+				design "unit-like names"
+				reference net gnd
+				net s
+				terminal TA "tip" at s
+				terminal COM "common" at gnd common
+				resistor A (a: s, b: gnd) { value 1 kΩ rated power 250 mW }
+				define resistor fA { rated power 125 mW }
+				resistor V (a: s, b: gnd) is fA { value 2 kΩ }
+				case "under test" { connect 10 Ω from TA to COM }
+				require threshold 5 Ω between TA and COM
+				waive "resistor-power" on A because "bench only" by "K. Ito" on "2026-12-04"
+				""");
+		assertTrue(d.eResource().getErrors().isEmpty(), d.eResource().getErrors().toString());
+		validation.assertNoErrors(d);
+		List<String> names = d.getMembers().stream().map(m -> m.getName()).toList();
+		assertEquals(List.of("gnd", "s", "TA", "COM", "A", "fA", "V", "under test"), names);
+		bulwark.lang.design.Part v = (bulwark.lang.design.Part) d.getMembers().get(6);
+		assertEquals("fA", v.getBase().getName());
+		assertEquals("s", v.getPins().get(0).getNet().getName());
+		assertEquals("A", d.getWaivers().get(0).getPart().getName());
+		assertEquals("TA", d.getRequirements().get(0).getFrom().getName());
+	}
+
 	@Test
 	void unknownUnitWordIsExplained() throws Exception {
 		Design d = parser.parse("design \"x\"\nreference net gnd\nnet a\nsource V1 (plus: a, minus: gnd) { voltage 5 volts }\n");

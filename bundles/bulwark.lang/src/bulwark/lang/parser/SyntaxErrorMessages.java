@@ -67,12 +67,28 @@ public class SyntaxErrorMessages extends SyntaxErrorMessageProvider {
 		if (unit != null) {
 			return unit;
 		}
-		int expected = e instanceof MismatchedTokenException m ? m.expecting : -1;
+		// a name is a word or a unit symbol (the grammar's Name rule): where one was wanted, the parser saw no
+		// alternative, and that is told as a missing name
+		int expected = e instanceof MismatchedTokenException m ? m.expecting
+				: e instanceof NoViableAltException && nameFollows(before) ? InternalBulwarkParser.RULE_ID : -1;
 		if (expected == InternalBulwarkParser.RULE_ID && isWord(found)) {
 			return new SyntaxErrorMessage("'" + found.getText() + "' is a word of the language and cannot be a name as it is;"
 					+ " write ^" + found.getText() + " to use it as one", IssueCodes.KEYWORD_AS_NAME);
 		}
 		return new SyntaxErrorMessage(parser(e, tokens, found, before, expected), IssueCodes.SYNTAX);
+	}
+
+	/**
+	 * Whether a name comes after this token: a net's, a terminal's, a part's or a definition's, or a reference to
+	 * one (names are a word or a unit symbol, so a keyword found there is not reported as a missing ID).
+	 */
+	private static boolean nameFollows(Token before) {
+		if (before == null) {
+			return false;
+		}
+		String t = text(before);
+		return PartKind.get(t) != null || List.of("net", "terminal", "is", "from", "between", "and", "on", "short", ":")
+				.contains(t);
 	}
 
 	/** A lexer's complaint, from its sentence: which character, or a text left open. */

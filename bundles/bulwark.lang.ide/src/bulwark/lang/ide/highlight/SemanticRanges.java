@@ -57,6 +57,14 @@ public final class SemanticRanges {
 			}
 			// a reference's token carries the cross-reference itself (or, in some parses, the rule call inside it)
 			EObject element = leaf.getGrammarElement();
+			// a name's token stands inside the Name rule (a word or a unit symbol): what names it is the call of that rule
+			EObject outer = leaf.getParent() == null ? null : leaf.getParent().getGrammarElement();
+			if (element instanceof RuleCall inner && inner.eContainer() != null
+					&& org.eclipse.xtext.GrammarUtil.containingRule(inner) != null
+					&& "Name".equals(org.eclipse.xtext.GrammarUtil.containingRule(inner).getName())
+					&& (outer instanceof RuleCall || outer instanceof CrossReference)) {
+				element = outer;
+			}
 			CrossReference ref = element instanceof CrossReference r ? r
 					: element instanceof RuleCall c && c.eContainer() instanceof CrossReference r ? r : null;
 			if (ref != null && ref.getType().getClassifier() instanceof EClass type) {
