@@ -6,7 +6,8 @@ public enum Concern {
 	SERIES_STRING("series-string"), REVERSE_VOLTAGE("reverse-voltage"), BASE_EMITTER("base-emitter"),
 	COMPARATOR_INPUT("comparator-input"), CLAMP_CURRENT("clamp-current"), CAPACITOR_VOLTAGE("capacitor-voltage"),
 	PROTECTOR("protector"), REVERSE_PATH("reverse-path"), HYSTERESIS("hysteresis"), REQUIREMENT("requirement"), VOLTAGE("voltage"), FORWARD_CURRENT("forward-current"),
-	TRANSISTOR("transistor"), BATTERY("battery"), FUSE("fuse"), SINGLE_FAULT("single-fault");
+	TRANSISTOR("transistor"), BATTERY("battery"), FUSE("fuse"), SINGLE_FAULT("single-fault"), CURRENT("current"),
+	SUPPLY("supply");
 
 	private final String id;
 

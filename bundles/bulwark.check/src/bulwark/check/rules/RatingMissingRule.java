@@ -13,6 +13,7 @@ import bulwark.check.stress.Limits;
 import bulwark.check.stress.StressCatalog;
 import bulwark.lang.design.DesignPackage;
 import bulwark.lang.design.Part;
+import bulwark.lang.design.PartKind;
 import bulwark.check.finding.RuleId;
 import bulwark.check.finding.RuleInfo;
 import bulwark.check.stress.Measure;
@@ -55,17 +56,21 @@ public final class RatingMissingRule implements FigureRule {
 						: m.rating()) + " (" + m.rule() + ")").toList();
 				findings.accept(Finding.of(INFO, part.getName() + " has no rating for " + String.join(", ", named)
 						+ (missing.size() == 1 ? ", so that stress is not checked" : ", so those stresses are not checked")
-						+ " and the design can at best pass with unchecked parts: add for example '" + example(missing.get(0).rating()) + "'")
+						+ " and the design can at best pass with unchecked parts: add for example '"
+						+ example(part.getKind(), missing.get(0).rating()) + "'")
 						.about(part.getName(), null, Locations.of(part, DesignPackage.Literals.MEMBER__NAME))
 						.with(new FindingDetail.MissingRatings(missing)));
 			}
 		}
 	}
 
-	private static String example(String rating) {
+	private static String example(PartKind kind, String rating) {
 		return switch (rating) {
 		case "power" -> "rated power 250 mW";
-		case "voltage" -> "package 0805";
+		case "voltage" -> kind == PartKind.RESISTOR ? "package 0805" : "rated voltage 250 V";
+		case "gate_source" -> "rated gate_source 20 V";
+		case "supply" -> "rated supply 6 V";
+		case "current" -> "rated current 500 mA";
 		case "reverse" -> "rated reverse 100 V";
 		case "forward" -> "rated forward 200 mA";
 		case "collector_emitter" -> "rated collector_emitter 45 V";
