@@ -49,6 +49,20 @@ class SeriesStringRuleTest {
 		Fixtures.assertSilent(r, ResistorVoltageRule.ID);
 	}
 
+	/**
+	 * A 0 Ω link between R1 and R2 joins their nets into one: the string is still R1–R2–R3, and R2 still
+	 * takes its share; the link's 10 mΩ changes the division by parts in 10⁸ [closed form].
+	 */
+	@Test
+	void aLinkInTheStringKeepsItOneString() {
+		String linked = Fixtures.replaced(STRING, "resistor R1 (a: tip, b: mid)", "net mid2\nlink J1 (a: mid, b: mid2) { rated current 1 A }\n"
+				+ "resistor R1 (a: tip, b: mid2)");
+		DesignResult r = Fixtures.check(linked);
+		Finding f = Fixtures.only(r, ID);
+		assertEquals(357.8 * 1.2 / 2.3, f.value(), 1e-4);
+		assertTrue(f.message().startsWith("series string R1–R2–R3 carries 358 V"), f.message());
+	}
+
 	@Test
 	void silentWhenEveryShareIsWithinItsRating() {
 		String bigger = Fixtures.replaced(Fixtures.replaced(STRING, "package 0805", "package 1206"), " #! series-string", "");

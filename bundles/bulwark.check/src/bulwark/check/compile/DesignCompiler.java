@@ -120,6 +120,10 @@ public final class DesignCompiler {
 						Settings.rating(part, resettable ? "hold" : "current").orElse(Double.POSITIVE_INFINITY),
 						resettable));
 				break;
+			case LINK:
+				builder.add(new Resistor(part.getName(), pin(builder, part, "a"), pin(builder, part, "b"),
+						values.parameter(part, "resistance").orElse(DeviceModels.LINK_OHMS)));
+				break;
 			case INDICATOR:
 				builder.add(new Indicator(part.getName(), pin(builder, part, "a"), pin(builder, part, "b"),
 						required(values, part, "resistance"),

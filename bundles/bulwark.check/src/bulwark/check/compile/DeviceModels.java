@@ -24,6 +24,11 @@ final class DeviceModels {
 	 */
 	static final double CAPACITOR_LEAKAGE_MAX_OHMS = 10e9;
 	static final double CAPACITOR_LEAKAGE_OHM_FARADS = 100e6 * 1e-6;
+	/**
+	 * Resistance of a 0 Ω link when the design gives none [common practice: zero-ohm chip links are specified
+	 * at a few tens of milliohms at most]; not 0, which would make its two nets one and leave no current to judge.
+	 */
+	static final double LINK_OHMS = 10e-3;
 	/** Activation current of an indicator when the design gives none [common practice: a visible LED]. */
 	static final double INDICATOR_ACTIVATION = 1e-3;
 	/** Trip delay of a protector when the design gives none [unconfirmed: typical of electronic current limiters]. */

@@ -34,6 +34,8 @@ public final class FailureModes {
 			return List.of(SHORT, OPEN);
 		case INDUCTOR:
 			return List.of(OPEN); // a winding shorted is what an inductor nearly is at DC and mains already
+		case LINK:
+			return List.of(OPEN); // a link is a short already: it can only crack open
 		case NPN:
 		case PNP:
 			return List.of(COLLECTOR_EMITTER_SHORT, BASE_EMITTER_SHORT, OPEN);

@@ -35,7 +35,8 @@ public final class HysteresisRule implements FigureRule {
 	public static final RuleId ID = RuleId.of("hysteresis");
 	private static final RuleInfo INFO = new RuleInfo(ID, Concern.HYSTERESIS, Severity.WARNING,
 			"a comparator has no hysteresis, or less than the review policy asks for");
-	private static final Set<PartKind> PASSIVE = Set.of(PartKind.RESISTOR, PartKind.CAPACITOR, PartKind.POTENTIOMETER);
+	private static final Set<PartKind> PASSIVE = Set.of(PartKind.RESISTOR, PartKind.CAPACITOR, PartKind.POTENTIOMETER,
+			PartKind.LINK);
 
 	@Override
 	public RuleInfo info() {

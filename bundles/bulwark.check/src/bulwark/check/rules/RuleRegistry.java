@@ -16,7 +16,7 @@ public final class RuleRegistry {
 	private static final List<Rule> ALL = List.of(new ResistorPowerRule(), new ResistorVoltageRule(),
 			new SeriesStringRule(), new SurgeEnergyRule(), new DevicePowerRule(), new DiodeReverseRule(), new ForwardCurrentRule(),
 			new BaseEmitterRule(), new TransistorVoltageRule(), new TransistorCurrentRule(), new GateSourceRule(),
-			new CapacitorVoltageRule(), new InductorCurrentRule(), new IndicatorVoltageRule(),
+			new CapacitorVoltageRule(), new InductorCurrentRule(), new LinkCurrentRule(), new IndicatorVoltageRule(),
 			new ProtectorBlockingRule(), new FuseVoltageRule(), new BatteryChargeRule(), new ComparatorInputRule(),
 			new ComparatorSupplyRule(),
 			new ClampCurrentRule(), new InputRangeRule(), new ReversePathRule(), new HysteresisRule(), new RequirementRule(), new RatingMissingRule(), new PreferredValueRule(),

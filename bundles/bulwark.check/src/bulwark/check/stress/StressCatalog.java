@@ -59,6 +59,7 @@ public final class StressCatalog {
 			Map.entry(PartKind.FUSE, List.of(VOLTAGE)),
 			Map.entry(PartKind.RESETTABLE_FUSE, List.of(VOLTAGE)),
 			Map.entry(PartKind.INDICATOR, List.of(POWER, VOLTAGE)),
+			Map.entry(PartKind.LINK, List.of(CURRENT)),
 			Map.entry(PartKind.BATTERY, List.of(CHARGE)),
 			Map.entry(PartKind.SOURCE, List.of()),
 			Map.entry(PartKind.CURRENT_SOURCE, List.of()));

@@ -34,19 +34,33 @@ public final class SeriesStrings {
 
 	/** Every chain of two or more resistors. */
 	public static List<SeriesString> of(CompiledDesign design) {
+		// a 0 Ω link joins its two nets into one: resistors either side of it are in series
+		Map<Net, Net> joined = new HashMap<>();
+		for (Member m : design.design().getMembers()) {
+			if (m instanceof Part link && link.getKind() == PartKind.LINK && link.getPins().size() == 2) {
+				Net a = root(joined, link.getPins().get(0).getNet()), b = root(joined, link.getPins().get(1).getNet());
+				if (a != b) {
+					joined.put(a, b);
+				}
+			}
+		}
 		Map<Net, List<Part>> byNet = new HashMap<>();
 		Map<Net, Integer> pinCount = new HashMap<>();
 		Set<Net> atTerminal = new HashSet<>();
+		Set<Net> reference = new HashSet<>();
 		for (Member m : design.design().getMembers()) {
-			if (m instanceof Part part) {
+			if (m instanceof Part part && part.getKind() != PartKind.LINK) {
 				for (PinBinding b : part.getPins()) {
-					pinCount.merge(b.getNet(), 1, Integer::sum);
+					Net net = root(joined, b.getNet());
+					pinCount.merge(net, 1, Integer::sum);
 					if (part.getKind() == PartKind.RESISTOR) {
-						byNet.computeIfAbsent(b.getNet(), k -> new ArrayList<>()).add(part);
+						byNet.computeIfAbsent(net, k -> new ArrayList<>()).add(part);
 					}
 				}
 			} else if (m instanceof Terminal t) {
-				atTerminal.add(t.getNet());
+				atTerminal.add(root(joined, t.getNet()));
+			} else if (m instanceof Net n && n.isReference()) {
+				reference.add(root(joined, n));
 			}
 		}
 		// a resistor's neighbours across inner nets
@@ -55,7 +69,7 @@ public final class SeriesStrings {
 			Net net = e.getKey();
 			List<Part> rs = e.getValue();
 			if (pinCount.get(net) == 2 && rs.size() == 2 && rs.get(0) != rs.get(1) && !atTerminal.contains(net)
-					&& !net.isReference()) {
+					&& !reference.contains(net)) {
 				next.computeIfAbsent(rs.get(0), k -> new ArrayList<>()).add(rs.get(1));
 				next.computeIfAbsent(rs.get(1), k -> new ArrayList<>()).add(rs.get(0));
 			}
@@ -80,22 +94,31 @@ public final class SeriesStrings {
 				previous = current;
 				current = following;
 			}
-			strings.add(new SeriesString(chain, outerNet(chain.get(0), chain.size() > 1 ? chain.get(1) : null),
-					outerNet(chain.get(chain.size() - 1), chain.size() > 1 ? chain.get(chain.size() - 2) : null)));
+			strings.add(new SeriesString(chain, outerNet(joined, chain.get(0), chain.size() > 1 ? chain.get(1) : null),
+					outerNet(joined, chain.get(chain.size() - 1), chain.size() > 1 ? chain.get(chain.size() - 2) : null)));
 		}
 		return strings;
 	}
 
-	/** The net of {@code end} that it does not share with {@code inner}. */
-	private static String outerNet(Part end, Part inner) {
+	/** The net a net is one with, through 0 Ω links. */
+	private static Net root(Map<Net, Net> joined, Net net) {
+		Net n = net;
+		while (joined.containsKey(n)) {
+			n = joined.get(n);
+		}
+		return n;
+	}
+
+	/** The net of {@code end} that it does not share with {@code inner} (nets joined by links being one). */
+	private static String outerNet(Map<Net, Net> joined, Part end, Part inner) {
 		Set<Net> shared = new HashSet<>();
 		if (inner != null) {
 			for (PinBinding b : inner.getPins()) {
-				shared.add(b.getNet());
+				shared.add(root(joined, b.getNet()));
 			}
 		}
 		for (PinBinding b : end.getPins()) {
-			if (!shared.contains(b.getNet())) {
+			if (!shared.contains(root(joined, b.getNet()))) {
 				return b.getNet().getName();
 			}
 		}

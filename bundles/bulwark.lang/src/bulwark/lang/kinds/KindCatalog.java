@@ -137,6 +137,11 @@ public final class KindCatalog {
 			List.of(new SettingSpec("power", Unit.WATT, false, "rated power"),
 					new SettingSpec("voltage", Unit.VOLT, false, "rated voltage")));
 
+	/** A 0 Ω link (jumper): one net for what it joins, a part of its own for its current and its faults. */
+	private static final KindSpec LINK = new KindSpec("link", TWO,
+			List.of(new SettingSpec("resistance", Unit.OHM, false, "its resistance (10 mΩ when omitted)")),
+			List.of(new SettingSpec("current", Unit.AMPERE, false, "rated current")));
+
 	private KindCatalog() {
 	}
 
@@ -180,6 +185,8 @@ public final class KindCatalog {
 			return RESETTABLE_FUSE;
 		case INDICATOR:
 			return INDICATOR;
+		case LINK:
+			return LINK;
 		default:
 			throw new IllegalArgumentException("no specification for " + kind);
 		}

@@ -29,7 +29,7 @@ public class DesignOutline extends ContentOutlinePage {
 
 	private static final Pattern DECLARATION = Pattern.compile(
 			"(?m)^\\s*(reference\\s+net|net|terminal|resistor|source|battery|diode|zener|led|npn|pnp|nmos|pmos|comparator"
-					+ "|capacitor|inductor|potentiometer|protector|fuse|resettable_fuse|indicator|define\\s+\\w+|case|require)"
+					+ "|capacitor|inductor|potentiometer|protector|fuse|resettable_fuse|indicator|current_source|link|define\\s+\\w+|case|require)"
 					+ "\\s+(\\^?\\w+|\"[^\"]*\")");
 	private static final Pattern COMMENT = Pattern.compile("#[^\\n]*");
 	private final DesignEditor editor;
