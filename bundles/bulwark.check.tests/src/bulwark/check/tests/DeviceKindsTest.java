@@ -54,6 +54,50 @@ class DeviceKindsTest {
 		assertEquals((12 - expected) / 1e3, part(r, "R1").current(), 1e-9);
 	}
 
+	/**
+	 * The same zener with a softer knee: knee_emission 3 triples the knee's slope, Vz = 5.1 V + 3·Vt·ln(I / 5 mA)
+	 * [closed form, the model's breakdown term], solved again by fixed-point iteration.
+	 */
+	@Test
+	void aSofterKneeRaisesTheZenerVoltageByItsEmission() {
+		DesignResult r = Fixtures.check("""
+				design "zener"
+				reference net gnd
+				net a
+				net k
+				source V1 (plus: a, minus: gnd) { voltage 12 V }
+				resistor R1 (a: a, b: k) { value 1 kΩ rated power 250 mW }
+				zener Z1 (anode: gnd, cathode: k) { breakdown 5.1 V knee_emission 3 }
+				""");
+		double expected = 5.1;
+		for (int k = 0; k < 20; k++) {
+			expected = 5.1 + 3 * 0.025851999786 * Math.log((12 - expected) / 1e3 / 5e-3);
+		}
+		assertEquals(expected, -part(r, "Z1").voltage(), 1e-6);
+	}
+
+	/**
+	 * An LED with a reverse breakdown of 5 V, 12 V the wrong way round through 10 kΩ: it breaks down,
+	 * V = 5 V + Vt·ln(I / 1 mA) with I = (12 − V) / 10 kΩ [closed form]; without the breakdown it would block.
+	 */
+	@Test
+	void anLedBreaksDownInReverseWhereItSays() {
+		DesignResult r = Fixtures.check("""
+				design "led reversed"
+				reference net gnd
+				net a
+				net k
+				source V1 (plus: a, minus: gnd) { voltage 12 V }
+				resistor R1 (a: a, b: k) { value 10 kΩ rated power 250 mW }
+				led D1 (anode: gnd, cathode: k) { colour red breakdown 5 V }
+				""");
+		double expected = 5;
+		for (int k = 0; k < 40; k++) {
+			expected = 5 + 0.025851999786 * Math.log((12 - expected) / 10e3 / 1e-3);
+		}
+		assertEquals(expected, -part(r, "D1").voltage(), 1e-6);
+	}
+
 	@Test
 	void comparatorSwitchesOnItsInputs() {
 		// in+ at 3 V against 2.5 V on in−: the push-pull output sits at the upper rail, less the drop of its

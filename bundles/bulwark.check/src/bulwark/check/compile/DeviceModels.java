@@ -58,7 +58,7 @@ final class DeviceModels {
 		double knee = values.parameter(part, "knee")
 				.orElse(part.getKind() == PartKind.ZENER ? ZENER_KNEE : base.breakdownCurrent());
 		return new DiodeModel(saturation, emission, values.parameter(part, "resistance").orElse(0.0), breakdown,
-				knee, base.breakdownEmission(), base.kelvin());
+				knee, values.parameter(part, "knee_emission").orElse(base.breakdownEmission()), base.kelvin());
 	}
 
 	static ComparatorModel comparator(Part part, Values values) {
@@ -87,7 +87,7 @@ final class DeviceModels {
 				values.parameter(part, "beta").orElse(base.forwardBeta()),
 				values.parameter(part, "reverse_beta").orElse(base.reverseBeta()), base.forwardEmission(),
 				base.reverseEmission(), values.parameter(part, "breakdown").orElse(base.emitterBaseBreakdown()),
-				base.breakdownCurrent(), base.kelvin());
+				values.parameter(part, "knee").orElse(base.breakdownCurrent()), base.kelvin());
 	}
 
 	/** The default insulation resistance of a capacitor of this value, Ω. */

@@ -42,7 +42,8 @@ public final class KindCatalog {
 			new SettingSpec("emission", null, false, "emission coefficient n (1 when omitted)"),
 			new SettingSpec("resistance", Unit.OHM, false, "series resistance (0 Ω when omitted)"),
 			new SettingSpec("breakdown", Unit.VOLT, false, "reverse breakdown voltage (none when omitted)"),
-			new SettingSpec("knee", Unit.AMPERE, false, "reverse current at the breakdown voltage (1 mA when omitted)"));
+			new SettingSpec("knee", Unit.AMPERE, false, "reverse current at the breakdown voltage (1 mA when omitted)"),
+			KindCatalog.kneeEmission());
 	private static final List<SettingSpec> JUNCTION_RATINGS = List.of(
 			new SettingSpec("reverse", Unit.VOLT, false, "rated reverse voltage"),
 			new SettingSpec("forward", Unit.AMPERE, false, "rated forward current"),
@@ -53,20 +54,25 @@ public final class KindCatalog {
 					new SettingSpec("knee", Unit.AMPERE, false, "current at the zener voltage (5 mA when omitted)"),
 					new SettingSpec("saturation", Unit.AMPERE, false, "saturation current Is (10 fA when omitted)"),
 					new SettingSpec("emission", null, false, "emission coefficient n (1 when omitted)"),
-					new SettingSpec("resistance", Unit.OHM, false, "series resistance (0 Ω when omitted)")),
+					new SettingSpec("resistance", Unit.OHM, false, "series resistance (0 Ω when omitted)"),
+					kneeEmission()),
 			JUNCTION_RATINGS);
 	private static final KindSpec LED = new KindSpec("led", List.of("anode", "cathode"),
 			List.of(new SettingSpec("forward", Unit.VOLT, false, "forward voltage at 20 mA (by colour when omitted)"),
 					SettingSpec.word("colour", "sets the forward voltage to the middle of the colour's range (red when omitted)",
 							List.of("red", "orange", "yellow", "green", "blue", "violet", "white")),
 					new SettingSpec("emission", null, false, "emission coefficient n (2 when omitted)"),
-					new SettingSpec("resistance", Unit.OHM, false, "series resistance (0 Ω when omitted)")),
+					new SettingSpec("resistance", Unit.OHM, false, "series resistance (0 Ω when omitted)"),
+					new SettingSpec("breakdown", Unit.VOLT, false, "reverse breakdown voltage (none when omitted)"),
+					new SettingSpec("knee", Unit.AMPERE, false, "reverse current at the breakdown voltage (1 mA when omitted)"),
+					kneeEmission()),
 			JUNCTION_RATINGS);
 	private static final List<SettingSpec> TRANSISTOR = List.of(
 			new SettingSpec("beta", null, false, "forward current gain βF (100 when omitted)"),
 			new SettingSpec("reverse_beta", null, false, "reverse current gain βR (1 when omitted)"),
 			new SettingSpec("saturation", Unit.AMPERE, false, "saturation current Is (10 fA when omitted)"),
-			new SettingSpec("breakdown", Unit.VOLT, false, "reverse base-emitter breakdown voltage (6 V when omitted)"));
+			new SettingSpec("breakdown", Unit.VOLT, false, "reverse base-emitter breakdown voltage (6 V when omitted)"),
+			new SettingSpec("knee", Unit.AMPERE, false, "emitter-base reverse current at the breakdown voltage (1 mA when omitted)"));
 	private static final List<SettingSpec> TRANSISTOR_RATINGS = List.of(
 			new SettingSpec("collector_emitter", Unit.VOLT, false, "rated collector-emitter voltage"),
 			new SettingSpec("emitter_base", Unit.VOLT, false, "rated reverse base-emitter voltage"),
@@ -141,6 +147,12 @@ public final class KindCatalog {
 	private static final KindSpec LINK = new KindSpec("link", TWO,
 			List.of(new SettingSpec("resistance", Unit.OHM, false, "its resistance (10 mΩ when omitted)")),
 			List.of(new SettingSpec("current", Unit.AMPERE, false, "rated current")));
+
+	/** How sharp a junction's breakdown knee is: the knee's emission coefficient, nbv of the engine's model. */
+	private static SettingSpec kneeEmission() {
+		return new SettingSpec("knee_emission", null, false,
+				"emission coefficient of the breakdown knee nbv (1 when omitted; larger is a softer knee)");
+	}
 
 	private KindCatalog() {
 	}
