@@ -7,14 +7,20 @@ import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
 /** The top-level command: its subcommands do the work. */
-@Command(name = "bulwark", mixinStandardHelpOptions = true, versionProvider = Version.class,
+@Command(name = "bulwark", versionProvider = Version.class,
 		description = { "Checks instrument input designs against their ratings and abuse at the terminals.", "",
 				bulwark.check.report.Caution.TEXT },
 		subcommands = { CheckCommand.class, ClassroomCommand.class, LspCommand.class, ToleranceCommand.class, SolveCommand.class, CompareCommand.class, ExplainCommand.class, DemoCommand.class,
-				CommandLine.HelpCommand.class },
+				HelpTopicCommand.class },
 		footer = { "", "Exit codes: 0 no error finding, 1 error findings, 2 a design could not be checked, "
 				+ "3 usage error." })
 public final class BulwarkCommand implements Runnable {
+	@CommandLine.Mixin
+	HelpOption help;
+
+	@CommandLine.Option(names = { "-V", "--version" }, versionHelp = true, description = "Shows Bulwark's version.")
+	boolean version;
+
 	@CommandLine.Spec
 	CommandLine.Model.CommandSpec spec;
 

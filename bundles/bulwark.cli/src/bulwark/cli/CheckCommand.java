@@ -13,6 +13,9 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "check", description = { "Checks design files; folders are searched for *.bulwark files.",
 		"Text reports print one line per finding: FILE:LINE:COL: severity rule message" })
 final class CheckCommand implements Callable<Integer> {
+	@picocli.CommandLine.Mixin
+	HelpOption help;
+
 	@Parameters(arity = "1..*", paramLabel = "PATH", description = "Design files or folders.")
 	List<Path> paths;
 

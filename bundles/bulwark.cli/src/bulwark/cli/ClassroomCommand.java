@@ -29,6 +29,9 @@ import picocli.CommandLine.Model.CommandSpec;
 		"A submission that does not parse gets its located errors on its page; the batch goes on. Nothing is "
 				+ "ever written inside the class's folder." })
 final class ClassroomCommand implements Callable<Integer> {
+	@picocli.CommandLine.Mixin
+	HelpOption help;
+
 	@Parameters(paramLabel = "DIR", description = "The folder of the students' designs.")
 	Path dir;
 

@@ -14,9 +14,14 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
-@Command(name = "compare", description = { "Compares two revisions of a design, for review: findings new and fixed,",
-		"and each rated part's worst utilisation, worse or better. Exit 1 when the new revision adds an error." })
+@Command(name = "compare", description = {
+		"Compares two revisions of a design, for review: findings new and fixed, and each rated part's worst "
+				+ "utilisation, worse or better.",
+		"Exit 1 when the new revision adds an error." })
 final class CompareCommand implements Callable<Integer> {
+	@picocli.CommandLine.Mixin
+	HelpOption help;
+
 
 	@Parameters(index = "0", paramLabel = "OLD", description = "The earlier revision.")
 	Path older;

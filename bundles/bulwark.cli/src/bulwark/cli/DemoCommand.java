@@ -12,6 +12,9 @@ import picocli.CommandLine.Model.CommandSpec;
 
 @Command(name = "demo", description = "Checks the bundled demo designs (the examples folder).")
 final class DemoCommand implements Callable<Integer> {
+	@picocli.CommandLine.Mixin
+	HelpOption help;
+
 	@Mixin
 	CheckOptions options = new CheckOptions();
 

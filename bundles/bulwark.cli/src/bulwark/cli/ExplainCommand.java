@@ -14,6 +14,9 @@ import picocli.CommandLine.Model.CommandSpec;
 
 @Command(name = "explain", description = "Explains a rule: what it checks, why, how, and from which source.")
 final class ExplainCommand implements Callable<Integer> {
+	@picocli.CommandLine.Mixin
+	HelpOption help;
+
 	@Parameters(paramLabel = "RULE", description = "A rule ID, as findings name it (for example resistor-power).")
 	String rule;
 

@@ -10,6 +10,9 @@ import picocli.CommandLine.Command;
 		+ "Server Protocol), for editors that speak it: diagnostics from every rule and case, hovers, quick fixes, "
 		+ "formatting, symbols, go to definition. See docs/editors.md." })
 final class LspCommand implements Callable<Integer> {
+	@picocli.CommandLine.Mixin
+	HelpOption help;
+
 	@Override
 	public Integer call() throws Exception {
 		try {

@@ -27,6 +27,9 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "solve", description = { "Solves a design's DC operating point and prints every net and part.",
 		"Exit code 2 when the design has errors or the case does not converge." })
 final class SolveCommand implements Callable<Integer> {
+	@picocli.CommandLine.Mixin
+	HelpOption help;
+
 	enum Format {
 		text, json
 	}

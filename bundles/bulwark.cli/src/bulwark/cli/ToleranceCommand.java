@@ -26,6 +26,9 @@ import bulwark.check.policy.Distribution;
 		"Exit code 1 when a requirement's yield, or the share of samples keeping every part within its derated "
 				+ "ratings, is below 100 %; 2 when the design cannot be analysed." })
 final class ToleranceCommand implements Callable<Integer> {
+	@picocli.CommandLine.Mixin
+	HelpOption help;
+
 	enum Format {
 		text, json, html
 	}

@@ -62,6 +62,34 @@ class UsageMessagesTest {
 		assertEquals("bulwark: 'b.bulwark' is more than solve takes", usageError("solve", "a.bulwark", "b.bulwark"));
 	}
 
+	/** The argument library's own help sentences, which its standard options and help command carry. */
+	private static final List<String> STOCK_HELP = List.of("Show this help message and exit",
+			"Print version information and exit", "Display help information about the specified command",
+			"Show usage help for the help command", "The COMMAND to display the usage help message for");
+
+	/** --help on every command, and help itself, in Bulwark's words; a command's required options do not stop it. */
+	@Test
+	void helpIsInOurWordsEverywhere() {
+		List<String[]> asked = new java.util.ArrayList<>(List.of(new String[] { "--help" }, new String[] { "help" },
+				new String[] { "help", "help" }));
+		for (String command : List.of("check", "classroom", "lsp", "tolerance", "solve", "compare", "explain", "demo")) {
+			asked.add(new String[] { command, "--help" });
+			asked.add(new String[] { command, "-h" });
+		}
+		for (String[] args : asked) {
+			CliRun run = CliRun.of(args);
+			String what = String.join(" ", args);
+			assertEquals(0, run.exitCode(), what + ": " + run.err());
+			assertTrue(run.out().startsWith("Usage: bulwark"), what + ": " + run.out());
+			for (String stock : STOCK_HELP) {
+				assertTrue(!run.out().contains(stock) && !run.err().contains(stock), "'" + stock + "' in " + what + ": " + run.out());
+			}
+		}
+		CliRun unknown = CliRun.of("help", "chek");
+		assertEquals(3, unknown.exitCode(), unknown.err());
+		assertTrue(unknown.err().startsWith("bulwark: 'chek' is not a command of bulwark; the commands are check,"), unknown.err());
+	}
+
 	@Test
 	void everyCommandHasHelp() {
 		for (String command : List.of("check", "classroom", "lsp", "tolerance", "solve", "compare", "explain", "demo")) {
