@@ -35,4 +35,13 @@ class FiguresTest {
 		// under the limit it reads under: 99.96 % is not "100"
 		assertEquals("99.96", Figures.percentOf(0.9996, 1));
 	}
+
+	@Test
+	void farOverTheLimitTheFactorIsWritten() {
+		assertEquals("231 % of the limit", Figures.ofTheLimit(2.31, 1));
+		assertEquals("1000 % of the limit", Figures.ofTheLimit(10, 1));
+		assertEquals("12.8× the limit", Figures.ofTheLimit(0.96, 0.075));
+		// 512 mA into a cell that tolerates 10 µA: not "5116562 %"
+		assertEquals("51,200× the limit", Figures.ofTheLimit(0.5116562, 10e-6));
+	}
 }

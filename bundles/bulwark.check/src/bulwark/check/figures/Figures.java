@@ -47,6 +47,22 @@ public final class Figures {
 		return String.format(Locale.ROOT, "%.4f", percent);
 	}
 
+	/**
+	 * How far a figure is from its limit, for a finding: "231 % of the limit", or past ten times the limit, the
+	 * factor ("51,200× the limit"), for a seven-digit percentage is read by no one.
+	 */
+	public static String ofTheLimit(double value, double limit) {
+		double factor = value / limit;
+		if (!Double.isFinite(factor) || Math.abs(factor) <= 10) {
+			return percentOf(value, limit) + " % of the limit";
+		}
+		java.math.BigDecimal rounded = new java.math.BigDecimal(factor).round(new java.math.MathContext(3));
+		String shown = rounded.abs().compareTo(java.math.BigDecimal.valueOf(1000)) >= 0
+				? String.format(Locale.ROOT, "%,d", rounded.longValue())
+				: rounded.stripTrailingZeros().toPlainString();
+		return shown + "× the limit";
+	}
+
 	/** {@code digits} significant figures with the prefix that puts the mantissa in [1, 1000). */
 	static String engineering(double value, String unit, int digits) {
 		if (value == 0 || !Double.isFinite(value)) {

@@ -58,10 +58,10 @@ public abstract class PartLimitRule implements FigureRule {
 		}
 	}
 
-	/** "R2: power 346 mW in case 'x', over its rated 250 mW derated to 60 % (150 mW), 231 % of the limit". */
+	/** "R2: power 346 mW in case 'x', over its rated 250 mW derated to 60 % (150 mW), 231 % of the limit" (or "51,200× the limit"). */
 	static String message(Part part, Measure measure, WorstCase worst, Limit limit) {
-		return String.format(Locale.ROOT, "%s: %s %s in case '%s', over %s, %s %% of the limit", part.getName(),
+		return String.format(Locale.ROOT, "%s: %s %s in case '%s', over %s, %s", part.getName(),
 				worst.what(), Figures.over(worst.value(), limit.value(), measure.unit()), worst.caseName(),
-				limit.describe(), Figures.percentOf(worst.value(), limit.value()));
+				limit.describe(), Figures.ofTheLimit(worst.value(), limit.value()));
 	}
 }

@@ -101,10 +101,10 @@ public final class ReversePathRule implements Rule {
 	private static Finding finding(Reach r) {
 		Overstress o = r.over();
 		String message = String.format(Locale.ROOT,
-				"case '%s' reaches %s with nothing blocking it: %s; its %s is %s, over %s, %s %% of the limit",
+				"case '%s' reaches %s with nothing blocking it: %s; its %s is %s, over %s, %s",
 				r.c().name(), o.part().getName(), String.join(" → ", r.path()), o.measure().what(r.c()),
 				Figures.over(o.value(), o.limit().value(), o.measure().unit()), o.limit().describe(),
-				Figures.percentOf(o.value(), o.limit().value()));
+				Figures.ofTheLimit(o.value(), o.limit().value()));
 		return Finding.of(INFO, message)
 				.about(o.part().getName(), r.c().name(), Locations.of(o.part(), DesignPackage.Literals.MEMBER__NAME))
 				.judged(o.measure().rating(), o.value(), o.limit().value(), o.measure().unit())

@@ -122,10 +122,10 @@ public final class SeriesStringRule implements Rule {
 			sharing.append(')');
 		}
 		String message = String.format(Locale.ROOT,
-				"series string %s carries %s in case '%s'; %s takes %s (%.0f %% of it), over %s, %.0f %% of the limit%s",
+				"series string %s carries %s in case '%s'; %s takes %s (%.0f %% of it), over %s, %s%s",
 				string.label(), Figures.engineering(total, "V"), u.caseName, part.getName(),
 				Figures.engineering(shares[member], "V"), 100 * shares[member] / total, limit.describe(),
-				100 * shares[member] / limit.value(), sharing);
+				Figures.ofTheLimit(shares[member], limit.value()), sharing);
 		return Finding.of(INFO, message)
 				.about(part.getName(), u.caseName, Locations.of(part, DesignPackage.Literals.MEMBER__NAME))
 				.judged(shares[member], limit.value(), "V");

@@ -70,9 +70,9 @@ public final class SurgeEnergyRule implements FigureRule {
 			Limit limit = new Limit(rated.get(), "J", "its rated", d.factor(), d.source());
 			if (worst.joules() > limit.value()) {
 				findings.accept(Finding.of(INFO, String.format(Locale.ROOT,
-						"%s: energy %s in '%s', over %s, %s %% of the limit", part.getName(),
+						"%s: energy %s in '%s', over %s, %s", part.getName(),
 						Figures.over(worst.joules(), limit.value(), "J"), worst.surge(), limit.describe(),
-						Figures.percentOf(worst.joules(), limit.value()))).about(part.getName(), worst.surge(), where)
+						Figures.ofTheLimit(worst.joules(), limit.value()))).about(part.getName(), worst.surge(), where)
 						.judged("pulse", worst.joules(), limit.value(), "J"));
 			}
 		}

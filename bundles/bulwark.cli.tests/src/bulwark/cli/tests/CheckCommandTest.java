@@ -36,7 +36,7 @@ class CheckCommandTest {
 		// with the indicator output shorted, 12 V across 150 Ω: 12²/150 = 0.96 W [closed form, Joule's law],
 		// against 125 mW derated to 60 % (NASA EEE-INST-002): 75 mW, 1280 %
 		assertEquals(CliRun.example(LAB) + ":22:10: error resistor-power R_DROP: power 960 mW in case "
-				+ "'normal, LAMP_OUT shorted to LAMP_RET', over its rated 125 mW derated to 60 % (75 mW), 1280 % of the limit",
+				+ "'normal, LAMP_OUT shorted to LAMP_RET', over its rated 125 mW derated to 60 % (75 mW), 12.8× the limit",
 				lines.get(0));
 	}
 
