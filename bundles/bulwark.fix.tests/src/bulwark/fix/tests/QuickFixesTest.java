@@ -75,6 +75,17 @@ class QuickFixesTest {
 		assertTrue(hurried.fixes().isEmpty(), hurried.fixes().toString());
 	}
 
+	/** A fix's figures read as a finding's do, never as a map of raw doubles. */
+	@Test
+	void aFixsFiguresAreWrittenForPeople() {
+		Map<String, Double> figures = new java.util.LinkedHashMap<>();
+		figures.put("rated", 0.125);
+		figures.put("utilisation", 2.38581560283688);
+		figures.put("series_ohms", 1e5);
+		figures.put("parts", 2.0);
+		assertEquals("rated 0.125, utilisation 239 %, series ohms 100 kΩ, parts 2", Fix.shown(figures));
+	}
+
 	@Test
 	void raiseAPulseRatingForASurge(@TempDir Path dir) throws Exception {
 		Files.writeString(dir.resolve("surge.bulwark-policy"), "policy \"surge only\"\n  mains none\n  surge 1 kV behind 2 Ω\n");

@@ -106,7 +106,7 @@ public class FixProposals implements IQuickAssistProcessor {
 
 		@Override
 		public String getAdditionalProposalInfo() {
-			return "before: " + fix.before() + "\nafter: " + fix.after();
+			return "before: " + Fix.shown(fix.before()) + "\nafter: " + Fix.shown(fix.after());
 		}
 
 		@Override
