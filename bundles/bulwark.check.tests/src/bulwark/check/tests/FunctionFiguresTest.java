@@ -81,4 +81,18 @@ class FunctionFiguresTest {
 		}
 		return Math.sqrt(lo * hi);
 	}
+
+	/**
+	 * Two switching points each bisected to 0.1 % that differ by less than both widths are one point: the
+	 * difference is the bisection's, not hysteresis, and reads as none [closed form: bisection width].
+	 */
+	@Test
+	void switchingPointsWithinTheSweepsResolutionHaveNoHysteresis() {
+		var same = new bulwark.check.function.PairFigures("TIP", "COM", true, 100.0, 100.08, 0.01, 5, null,
+				java.util.List.of(), java.util.List.of(), java.util.List.of(), null, null);
+		assertEquals(0.0, same.hysteresisOhms());
+		var apart = new bulwark.check.function.PairFigures("TIP", "COM", true, 100.0, 110.0, 0.01, 5, null,
+				java.util.List.of(), java.util.List.of(), java.util.List.of(), null, null);
+		assertEquals(10.0, apart.hysteresisOhms(), 1e-12);
+	}
 }

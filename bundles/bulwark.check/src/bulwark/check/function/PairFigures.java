@@ -32,7 +32,8 @@ public record PairFigures(String from, String to, boolean onWhenShorted, Double 
 
 	/** The hysteresis at the terminals, when the indicator switches both ways. */
 	public Double hysteresisOhms() {
-		return risingOhms == null || fallingOhms == null ? null : Math.abs(risingOhms - fallingOhms);
+		return risingOhms == null || fallingOhms == null ? null
+				: Resolution.beyond(risingOhms, fallingOhms, FunctionAnalysis.RELATIVE);
 	}
 
 	/** The switching voltages with this terminal positive (one of the pair's two). */

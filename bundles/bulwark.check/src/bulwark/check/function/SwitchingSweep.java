@@ -31,8 +31,9 @@ public final class SwitchingSweep {
 
 	/** The thresholds found across one terminal pair. */
 	public record Result(String from, String to, double risingOhms, double fallingOhms, double inputStepVolts) {
+		/** 0 where the two switching points agree within the sweeps' resolution (see {@link Resolution}). */
 		public double hysteresisOhms() {
-			return Math.abs(risingOhms - fallingOhms);
+			return Resolution.beyond(risingOhms, fallingOhms, RELATIVE);
 		}
 	}
 

@@ -109,7 +109,7 @@ public final class HtmlReport {
 				+ "<th>test current</th><th>open-circuit voltage</th><th>comes on at</th><th>lights LEDs</th></tr>\n");
 		for (PairFigures p : f.pairs()) {
 			w.write("<tr><td>" + escape(p.from() + "–" + p.to()) + "</td><td>" + show(p.thresholdOhms(), "Ω") + "</td><td>"
-					+ show(p.hysteresisOhms(), "Ω") + "</td><td>" + show(p.testCurrentAmps(), "A") + "</td><td>"
+					+ (Double.valueOf(0).equals(p.hysteresisOhms()) ? "none" : show(p.hysteresisOhms(), "Ω")) + "</td><td>" + show(p.testCurrentAmps(), "A") + "</td><td>"
 					+ show(p.openVolts(), "V") + "</td><td>" + switchOn(p) + "</td><td>"
 					+ escape(String.join(", ", p.lightsLeds())) + "</td></tr>\n");
 		}

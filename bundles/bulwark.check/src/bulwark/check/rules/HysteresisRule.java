@@ -67,7 +67,8 @@ public final class HysteresisRule implements FigureRule {
 			}
 			SwitchingSweep.Result r = o.result().get();
 			String figures = String.format(Locale.ROOT, "%s at its input, %s between %s and %s (switching at %s rising, %s falling)",
-					Figures.engineering(r.inputStepVolts(), "V"), Figures.engineering(r.hysteresisOhms(), "Ω"), r.from(),
+					Figures.engineering(r.inputStepVolts(), "V"), r.hysteresisOhms() == 0
+							? "none within the sweep's 0.1 % resolution" : Figures.engineering(r.hysteresisOhms(), "Ω"), r.from(),
 					r.to(), Figures.engineering(r.risingOhms(), "Ω"), Figures.engineering(r.fallingOhms(), "Ω"));
 			var policy = context.policy();
 			if (policy.minimumHysteresisVolts().isPresent() && r.inputStepVolts() < policy.minimumHysteresisVolts().get()) {

@@ -83,7 +83,7 @@ class QuickFixesTest {
 		figures.put("utilisation", 2.38581560283688);
 		figures.put("series_ohms", 1e5);
 		figures.put("parts", 2.0);
-		assertEquals("rated 0.125, utilisation 239 %, series ohms 100 kΩ, parts 2", Fix.shown(figures));
+		assertEquals("rated 0.125, utilisation 239 %, series ohms 100 kΩ, parts 2", bulwark.check.figures.NamedFigures.of(figures));
 	}
 
 	@Test

@@ -106,7 +106,8 @@ public class FixProposals implements IQuickAssistProcessor {
 
 		@Override
 		public String getAdditionalProposalInfo() {
-			return "before: " + Fix.shown(fix.before()) + "\nafter: " + Fix.shown(fix.after());
+			return "before: " + bulwark.check.figures.NamedFigures.of(fix.before()) + "\nafter: "
+					+ bulwark.check.figures.NamedFigures.of(fix.after());
 		}
 
 		@Override
