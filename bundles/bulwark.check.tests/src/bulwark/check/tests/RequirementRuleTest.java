@@ -99,9 +99,11 @@ class RequirementRuleTest {
 		// TIP positive: 1 mA through 9 kΩ plus the LED's forward drop (about 2 V) — between 9 V and 12 V
 		assertTrue(pair.forward().onVolts() > 9 && pair.forward().onVolts() < 12, pair.forward().toString());
 		assertEquals(null, pair.reverse().onVolts());
+		// required and never shown: a missed requirement, an error, not a warning that it cannot be checked
 		Finding f = Fixtures.only(r, ID);
-		assertEquals(Severity.WARNING, f.severity());
-		assertTrue(f.message().contains("does not come on as a DC voltage across the terminals rises to 1 kV"), f.message());
+		assertEquals(Severity.ERROR, f.severity());
+		assertTrue(f.message().startsWith("switch on voltage between COM and TIP (required: at most 12 V) is not met: D1 does "
+				+ "not come on as a DC voltage across the terminals rises to 1 kV"), f.message());
 	}
 
 	@Test

@@ -134,8 +134,12 @@ public final class RequirementRule implements FigureRule {
 		}
 		String required = (atMost ? "at most " : "at least ") + show(value, unit);
 		if (figure.isEmpty()) {
-			findings.accept(Finding.of(INFO, what + across + " (" + basis + ": " + required + ") cannot be checked: "
-					+ missing(what, f)).withSeverity(Severity.WARNING).at(where).judged(null, value, unit));
+			// a requirement the design states and the input cannot show (it never switches, nothing indicates) is
+			// missed, an error; a rule of thumb the design did not ask for is only said to be unchecked
+			boolean stated = severity == Severity.ERROR;
+			findings.accept(Finding.of(INFO, what.replace('_', ' ') + across + " (" + basis + ": " + required + ")"
+					+ (stated ? " is not met: " : " cannot be checked: ") + missing(what, f))
+					.withSeverity(stated ? Severity.ERROR : Severity.WARNING).at(where).judged(null, value, unit));
 			return;
 		}
 		double x = figure.get();
