@@ -32,11 +32,6 @@ import bulwark.engine.solve.SolveFailure;
  * threads: reading a part's ratings caches them on the model, which is not thread-safe.
  */
 final class CaseReading implements CaseRunner.Sink {
-	private final CompiledDesign compiled;
-	private final ReviewPolicy policy;
-	private final List<Rule> rules;
-	private final WorstFigures worst;
-	private final SortedMap<Long, CaseResult> results = new TreeMap<>();
 	/**
 	 * The waveform cases plotted: every one in a design with a few terminals; with many, the
 	 * {@value #MOST_TRACES} that stress their most stressed part most, for a page of thousands of plots is read
@@ -47,6 +42,11 @@ final class CaseReading implements CaseRunner.Sink {
 	private record Plotted(long order, double utilisation, WaveformTrace trace) {
 	}
 
+	private final CompiledDesign compiled;
+	private final ReviewPolicy policy;
+	private final List<Rule> rules;
+	private final WorstFigures worst;
+	private final SortedMap<Long, CaseResult> results = new TreeMap<>();
 	private final List<Plotted> traces = new ArrayList<>();
 	private final SortedMap<Long, Finding> failures = new TreeMap<>();
 	private CheckContext context;
