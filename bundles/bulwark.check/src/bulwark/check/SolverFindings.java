@@ -54,7 +54,34 @@ final class SolverFindings {
 			where = caseOrigin(compiled, c);
 		}
 		String reason = failure.reason().name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ');
+		String advice = failure.reason() == bulwark.engine.solve.SolveFailure.Reason.VOLTAGE_SOURCE_LOOP && part == null
+				? idealAcross(compiled, c) : "";
 		return Finding.of(CheckerRules.SOLVER, "case '" + c.name() + "' could not be solved (" + reason + "): "
-				+ failure.message()).about(part, c.name(), where);
+				+ failure.message() + advice).about(part, c.name(), where);
+	}
+
+	/**
+	 * A case's source across two terminals meets an ideal source of the design's own across the same nets: say
+	 * which, and what mends it ("; V1 holds them as an ideal source: give it its internal resistance").
+	 */
+	private static String idealAcross(CompiledDesign compiled, FaultCase c) {
+		java.util.Set<String> nets = new java.util.HashSet<>();
+		for (Member m : compiled.design().getMembers()) {
+			if (m instanceof bulwark.lang.design.Terminal t && t.getName() != null && t.getNet() != null
+					&& (t.getName().equals(c.from()) || t.getName().equals(c.to()))) {
+				nets.add(t.getNet().getName());
+			}
+		}
+		java.util.List<String> ideal = new java.util.ArrayList<>();
+		for (bulwark.lang.design.Part p : compiled.parts().values()) {
+			boolean source = p.getKind() == bulwark.lang.design.PartKind.SOURCE || p.getKind() == bulwark.lang.design.PartKind.BATTERY;
+			if (source && nets.size() == 2 && p.getPins().stream().allMatch(b -> b.getNet() != null && nets.contains(b.getNet().getName()))
+					&& bulwark.check.parts.Settings.parameter(p, "resistance").orElse(0.0) == 0) {
+				ideal.add(p.getName());
+			}
+		}
+		return ideal.isEmpty() ? "" : "; " + String.join(" and ", ideal) + (ideal.size() == 1 ? " holds" : " hold")
+				+ " those terminals as an ideal source, and the case applies another across them: give "
+				+ (ideal.size() == 1 ? "it its" : "each its") + " internal resistance (for example resistance 1 Ω)";
 	}
 }

@@ -37,6 +37,9 @@ public final class CaseGenerator {
 	private CaseGenerator() {
 	}
 
+	/** A generated short across two terminals, Ω [closed form: far below any probe or lead resistance]. */
+	static final double SHORT_OHMS = 1e-3;
+
 	public static List<FaultCase> cases(CompiledDesign design, ReviewPolicy policy) {
 		List<FaultCase> cases = new ArrayList<>();
 		cases.add(FaultCase.normalOpen());
@@ -45,8 +48,11 @@ public final class CaseGenerator {
 		if (common != null) {
 			for (Terminal t : terminals) {
 				if (t != common && t.getNet() != common.getNet()) {
+					// a short of a small resistance, not an ideal one: across an ideal source of the design's own an
+					// ideal short would close a loop of ideal sources that no case can solve
 					cases.add(new FaultCase("normal, " + t.getName() + " shorted to " + common.getName(), CaseKind.NORMAL,
-							List.of(VoltageSource.ideal(pairSource(t, common), net(design, t), net(design, common), 0))));
+							List.of(new Resistor("short " + t.getName() + " " + common.getName(), net(design, t),
+									net(design, common), SHORT_OHMS))));
 				}
 			}
 		}
