@@ -218,11 +218,16 @@ public final class DesignChecker {
 		return new Preparation.Ready(new PreparedDesign(loaded, choice.policy(), DesignCompiler.compile(design), findings));
 	}
 
+	/** Where in the file a refusal points (a byte that is not UTF-8), else nowhere in particular. */
+	private static SourceLocation at(TextFiles.Refused refused) {
+		return refused.line() > 0 ? new SourceLocation(refused.line(), refused.column(), 0, 1) : SourceLocation.NONE;
+	}
+
 	/** A design file's text, or (a result of status error) why it is not read. */
 	private static Object read(Path file) {
 		TextFiles.Read read = TextFiles.read(file, "the design");
 		return read instanceof TextFiles.Text t ? t.text()
-				: notChecked(file.toString(), ((TextFiles.Refused) read).reason(), SourceLocation.NONE);
+				: notChecked(file.toString(), ((TextFiles.Refused) read).reason(), at((TextFiles.Refused) read));
 	}
 
 	/**

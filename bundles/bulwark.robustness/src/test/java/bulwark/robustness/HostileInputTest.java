@@ -226,6 +226,18 @@ class HostileInputTest {
 		assertTrue(Files.readString(real).contains("\"designs\""));
 	}
 
+	/** A file saved in Latin-1 was refused with no hint of where; now at its first byte that is not UTF-8. */
+	@Test
+	void aFileNotInUtf8IsRefusedAtItsFirstWrongByte(@TempDir Path dir) throws IOException {
+		byte[] latin1 = "design \"x\"\nreference net gnd\nnet a\n# caf\u00e9\n".getBytes(StandardCharsets.ISO_8859_1);
+		Path file = Files.write(dir.resolve("latin.bulwark"), latin1);
+		Run r = bulwark("check", "--format", "json", file.toString());
+		assertEquals(2, r.exit(), r.err());
+		JsonObject f = finding(r.design(), "is not UTF-8 text: byte 0xE9 at line 4, column 6");
+		assertEquals(4, f.get("line").getAsInt());
+		assertEquals(6, f.get("column").getAsInt());
+	}
+
 	/** 13. A number of 401 digits became an unlocated fault of Bulwark's own. */
 	@Test
 	void aNumberTooLargeIsALocatedError() {
