@@ -20,6 +20,8 @@ public record PairFigures(String from, String to, boolean onWhenShorted, Double 
 		lightsLeds = List.copyOf(lightsLeds);
 		rising = List.copyOf(rising);
 		falling = List.copyOf(falling);
+		forward = forward == null ? VoltageSwitching.NONE : forward; // not swept: nothing found, and no problem
+		reverse = reverse == null ? VoltageSwitching.NONE : reverse;
 	}
 
 	/**
