@@ -68,6 +68,69 @@ class SingleFaultRuleTest {
 		Fixtures.assertSilent(r, SingleFaultRule.ID);
 	}
 
+	/**
+	 * A comparator that drives an LED through 150 Ω from a 5 V rail, its output low at rest (in+ below in−):
+	 * stuck high, it puts (5 − Vf) / (150 + 1) Ω of forward current through the LED, about 20 mA for a red
+	 * one's 2 V [closed form, less the output stage's share], over its absolute 10 mA.
+	 */
+	private static final String DRIVER = """
+			design "comparator driving an LED"
+			reference net gnd
+			net vcc
+			net ref
+			net in
+			net out
+			net lamp
+			terminal IN at in
+			terminal COM at gnd common
+			source V1 (plus: vcc, minus: gnd) { voltage 5 V }
+			resistor RA (a: vcc, b: ref) { value 10 kΩ rated power 250 mW rated voltage 500 V }
+			resistor RB (a: ref, b: gnd) { value 10 kΩ rated power 250 mW rated voltage 500 V }
+			resistor RIN (a: in, b: gnd) { value 100 kΩ rated power 2 W rated voltage 500 V }
+			comparator U1 (in_plus: in, in_minus: ref, out: out, supply_plus: vcc, supply_minus: gnd) { rated supply 200 V rated input_margin 200 V rated clamp 1 A } #! single-fault
+			resistor RL (a: out, b: lamp) { value 150 Ω rated power 250 mW rated voltage 500 V }
+			led D1 (anode: lamp, cathode: gnd) { colour red rated forward 10 mA rated reverse 5 V rated power 1 W }
+			""";
+
+	@Test
+	void aComparatorStuckHighOverdrivesTheLedItDrives() {
+		ReviewPolicy quiet = Fixtures.policy("""
+				policy "no abuse, single faults"
+				  mains none
+				  severity "single-fault" warning
+				""");
+		DesignResult r = Fixtures.check(DRIVER, quiet);
+		assertEquals(Fixtures.expected(DRIVER, SingleFaultRule.ID), Fixtures.actual(r, SingleFaultRule.ID));
+		Finding f = Fixtures.only(r, SingleFaultRule.ID);
+		assertTrue(f.message().startsWith("with U1 output stuck high, case '"), f.message());
+		assertTrue(f.message().contains("on D1"), f.message());
+		assertTrue(f.value() > 0.015 && f.value() < 0.021, "forward current " + f.value());
+	}
+
+	/**
+	 * A potentiometer's wiper open: the track still joins a and b (10 V across 10 kΩ, 1 mA), the wiper's load
+	 * of 10 kΩ is left on 1 GΩ: 10 V · 10 kΩ / (1 GΩ + 10 kΩ) ≈ 0.1 mV at the wiper [closed form, a divider].
+	 */
+	@Test
+	void aWiperOpenLeavesTheTrackAndLiftsTheWiper() {
+		String pot = """
+				design "pot"
+				reference net gnd
+				net top
+				net w
+				source V1 (plus: top, minus: gnd) { voltage 10 V }
+				potentiometer P1 (a: top, b: gnd, wiper: w) { value 10 kΩ position 0.5 rated power 1 W }
+				resistor RL (a: w, b: gnd) { value 10 kΩ rated power 1 W rated voltage 500 V }
+				""";
+		var p = Fixtures.checker().prepare(pot, "pot.bulwark", org.eclipse.xtext.util.CancelIndicator.NullImpl);
+		var compiled = ((bulwark.check.Preparation.Ready) p).design().compiled();
+		var failed = bulwark.check.faults.FaultInjector.apply(compiled,
+				new bulwark.check.faults.Fault("P1", bulwark.check.faults.FailureMode.WIPER_OPEN));
+		var s = (bulwark.engine.solve.DcSolution) new bulwark.engine.solve.DcSolver().solve(failed.circuit());
+		assertEquals(10 * 10e3 / (1e9 + 10e3), s.device("RL").voltage(), 1e-9);
+		assertEquals(10 / 10e3, Math.abs(s.device("V1").current()), 1e-6);
+	}
+
 	@Test
 	void notRunUnlessAskedFor() {
 		DesignResult r = Fixtures.check(TWO_EQUAL, Fixtures.policy("""

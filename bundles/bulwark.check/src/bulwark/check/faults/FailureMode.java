@@ -4,7 +4,8 @@ package bulwark.check.faults;
 public enum FailureMode {
 	OPEN("open"), SHORT("short"), COLLECTOR_EMITTER_SHORT("collector–emitter short"),
 	BASE_EMITTER_SHORT("base–emitter short"), DRAIN_SOURCE_SHORT("drain–source short"),
-	GATE_SOURCE_SHORT("gate–source short");
+	GATE_SOURCE_SHORT("gate–source short"), OUTPUT_HIGH("output stuck high"), OUTPUT_LOW("output stuck low"),
+	WIPER_OPEN("wiper open");
 
 	private final String words;
 

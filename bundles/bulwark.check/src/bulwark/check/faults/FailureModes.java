@@ -6,6 +6,9 @@ import static bulwark.check.faults.FailureMode.DRAIN_SOURCE_SHORT;
 import static bulwark.check.faults.FailureMode.GATE_SOURCE_SHORT;
 import static bulwark.check.faults.FailureMode.OPEN;
 import static bulwark.check.faults.FailureMode.SHORT;
+import static bulwark.check.faults.FailureMode.OUTPUT_HIGH;
+import static bulwark.check.faults.FailureMode.OUTPUT_LOW;
+import static bulwark.check.faults.FailureMode.WIPER_OPEN;
 
 import java.util.List;
 
@@ -42,6 +45,10 @@ public final class FailureModes {
 		case NMOS:
 		case PMOS:
 			return List.of(DRAIN_SOURCE_SHORT, GATE_SOURCE_SHORT, OPEN);
+		case COMPARATOR:
+			return List.of(OUTPUT_HIGH, OUTPUT_LOW); // a failed output stage stuck at either rail
+		case POTENTIOMETER:
+			return List.of(WIPER_OPEN); // a worn track lifts the wiper; the track itself goes on conducting
 		default:
 			return List.of();
 		}

@@ -59,6 +59,18 @@ public final class FaultInjector {
 			replacement = d;
 			extra.add(new Resistor(name + " (" + fault.mode().words() + ")", p[1], p[2], SHORT_OHMS));
 			break;
+		case OUTPUT_HIGH:
+		case OUTPUT_LOW:
+			// the output held at a rail through the short's 1 Ω, whatever the inputs say (pins: in+, in−, out, V+, V−)
+			replacement = d;
+			extra.add(new Resistor(name + " (" + fault.mode().words() + ")", p[2],
+					fault.mode() == FailureMode.OUTPUT_HIGH ? p[3] : p[4], SHORT_OHMS));
+			break;
+		case WIPER_OPEN:
+			// the track from a to b, the wiper left on a gigaohm
+			replacement = new Resistor(name, p[0], p[1], ((bulwark.engine.circuit.Potentiometer) d).ohms());
+			extra.add(new Resistor(name + " (wiper open)", p[2], p[0], OPEN_OHMS));
+			break;
 		default:
 			throw new IllegalArgumentException("no way to apply " + fault.mode());
 		}

@@ -23,6 +23,11 @@ public final class Potentiometer extends MultiTerminal {
 		this.lower = Math.max(END_OHMS, ohms * (1 - position));
 	}
 
+	/** The whole track, a to b, Ω. */
+	public double ohms() {
+		return upper + lower;
+	}
+
 	@Override
 	public String[] pinNames() {
 		return new String[] { "a", "b", "wiper" };
