@@ -370,6 +370,9 @@ public final class DesignChecker {
 		String title = loaded.policy() == null ? null : loaded.policy().getTitle();
 		if (loaded.policy() != null && findings.stream().noneMatch(f -> f.severity() == Severity.ERROR)) {
 			bulwark.check.policy.PolicyCompiler.compile(loaded.policy(), RuleRegistry.ids(), findings::add);
+		} else if (loaded.policy() != null) {
+			// with the language's errors, the rules it names that do not exist: every mistake at once
+			findings.addAll(bulwark.check.policy.PolicyCompiler.unknownRules(loaded.policy(), RuleRegistry.ids()));
 		}
 		boolean errors = findings.stream().anyMatch(f -> f.severity() == Severity.ERROR) || loaded.policy() == null;
 		return new DesignResult(file, title, errors ? Status.ERROR : Status.PASS, findings, List.of());

@@ -80,6 +80,21 @@ class ReviewPolicyTest {
 		assertTrue(r.policy().isEmpty());
 		assertTrue(r.problems().get(0).message().startsWith("review policy team.bulwark-policy:2:12: "),
 				r.problems().toString());
+		assertTrue(r.problems().get(0).message().contains("(did you mean 'resistor-power'?)"), r.problems().toString());
+	}
+
+	/** Every mistake of a policy at once, each once: an unknown rule beside the language's own errors. */
+	@Test
+	void anUnknownRuleIsReportedWithTheOtherMistakes() {
+		PolicyFiles.Resolution r = new PolicyFiles(Fixtures.loader(), bulwark.check.rules.RuleRegistry.ids()).parse("""
+				policy "typos"
+				  derate resistor powr to 50 %
+				  severity "resistor-powr" error
+				  mains 230 A
+				""", "typos.bulwark-policy");
+		List<String> lines = r.problems().stream().map(Finding::message).map(m -> m.substring(0, m.indexOf(": ") + 1)).toList();
+		assertEquals(List.of("review policy typos.bulwark-policy:2:19:", "review policy typos.bulwark-policy:3:12:",
+				"review policy typos.bulwark-policy:4:9:"), lines.stream().sorted().toList(), r.problems().toString());
 	}
 
 	@Test

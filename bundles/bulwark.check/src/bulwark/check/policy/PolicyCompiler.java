@@ -79,10 +79,7 @@ public final class PolicyCompiler {
 			} else if (e instanceof SeverityChange s) {
 				RuleId named = rules.stream().filter(r -> r.text().equals(s.getRule())).findFirst().orElse(null);
 				if (named == null) {
-					problems.accept(Finding.of(CheckerRules.POLICY, "the policy sets the severity of '" + s.getRule()
-							+ "', which is no rule Bulwark has (rules: "
-							+ String.join(", ", rules.stream().sorted().map(RuleId::text).toList()) + ")")
-							.at(Locations.of(s, DesignPackage.Literals.SEVERITY_CHANGE__RULE)));
+					problems.accept(unknownRule(s, rules));
 				} else {
 					severities.put(named, Severity.valueOf(s.getLevel().toUpperCase(Locale.ROOT)));
 				}
@@ -101,5 +98,28 @@ public final class PolicyCompiler {
 
 	private static double si(bulwark.lang.design.Quantity q) {
 		return Quantities.si(q).orElseThrow(() -> new IllegalArgumentException("policy quantity without a known unit"));
+	}
+
+	/**
+	 * The rules a policy names that Bulwark does not have, each located: reported with the policy's other
+	 * mistakes, even when those stop it from being compiled, so that one reading shows them all.
+	 */
+	public static List<Finding> unknownRules(Policy policy, Set<RuleId> rules) {
+		List<Finding> unknown = new ArrayList<>();
+		for (var e : policy.getEntries()) {
+			if (e instanceof SeverityChange s && s.getRule() != null
+					&& rules.stream().noneMatch(r -> r.text().equals(s.getRule()))) {
+				unknown.add(unknownRule(s, rules));
+			}
+		}
+		return unknown;
+	}
+
+	private static Finding unknownRule(SeverityChange s, Set<RuleId> rules) {
+		List<String> names = rules.stream().sorted().map(RuleId::text).toList();
+		return Finding.of(CheckerRules.POLICY, "the policy sets the severity of '" + s.getRule()
+				+ "', which is no rule Bulwark has" + bulwark.lang.naming.Suggestion.didYouMean(s.getRule(), names)
+				+ " (rules: " + String.join(", ", names) + ")")
+				.at(Locations.of(s, DesignPackage.Literals.SEVERITY_CHANGE__RULE));
 	}
 }

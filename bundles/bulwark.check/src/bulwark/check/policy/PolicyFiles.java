@@ -76,6 +76,9 @@ public final class PolicyFiles {
 			}
 		}
 		if (errors || loaded.policy() == null) {
+			if (loaded.policy() != null) {
+				PolicyCompiler.unknownRules(loaded.policy(), rules).forEach(f -> problems.add(inFile(f, name)));
+			}
 			if (problems.isEmpty()) {
 				problems.add(inFile(Finding.of(CheckerRules.POLICY, "holds no review policy"), name));
 			}

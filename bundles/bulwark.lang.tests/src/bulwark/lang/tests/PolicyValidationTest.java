@@ -67,6 +67,14 @@ class PolicyValidationTest {
 		assertEquals("a derating is a percentage of the rating: write to 60 %", errors.get(0).getMessage());
 	}
 
+	/** A kind misspelt after derate is named as such, with the nearest kind; not "cannot start a statement". */
+	@Test
+	void aMisspeltKindInADeratingIsNamed() throws Exception {
+		var errors = parse("derate resistr power to 60 %").eResource().getErrors();
+		assertEquals("'resistr' is not a part kind (did you mean 'resistor'?): write derate KIND RATING to P %, as in "
+				+ "derate resistor power to 60 %", errors.get(0).getMessage(), errors.toString());
+	}
+
 	@Test
 	void quantitiesInTheirUnits() throws Exception {
 		validation.assertError(parse("mains 230 A"), DesignPackage.Literals.MAINS_SYSTEM, IssueCodes.WRONG_UNIT,

@@ -63,6 +63,12 @@ public class SyntaxErrorMessages extends SyntaxErrorMessageProvider {
 		}
 		Token found = e.token;
 		Token before = previousVisible(tokens, found.getTokenIndex() < 0 ? tokens.size() : found.getTokenIndex());
+		if (before != null && text(before).equals("derate") && PartKind.get(text(found)) == null && isName(found)) {
+			List<String> kinds = PartKind.VALUES.stream().map(PartKind::getLiteral).toList();
+			return new SyntaxErrorMessage("'" + text(found) + "' is not a part kind"
+					+ bulwark.lang.naming.Suggestion.didYouMean(text(found), kinds)
+					+ ": write derate KIND RATING to P %, as in derate resistor power to 60 %", IssueCodes.SYNTAX);
+		}
 		SyntaxErrorMessage unit = afterNumber(tokens, found, before);
 		if (unit != null) {
 			return unit;
@@ -76,6 +82,11 @@ public class SyntaxErrorMessages extends SyntaxErrorMessageProvider {
 					+ " write ^" + found.getText() + " to use it as one", IssueCodes.KEYWORD_AS_NAME);
 		}
 		return new SyntaxErrorMessage(parser(e, tokens, found, before, expected), IssueCodes.SYNTAX);
+	}
+
+	/** A word or a unit symbol as the lexer made it: what a name could be. */
+	private static boolean isName(Token t) {
+		return t.getType() == InternalBulwarkParser.RULE_ID || t.getType() == InternalBulwarkParser.RULE_UNIT;
 	}
 
 	/**
