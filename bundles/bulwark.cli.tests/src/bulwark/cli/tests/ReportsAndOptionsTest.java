@@ -120,5 +120,21 @@ class ReportsAndOptionsTest {
 		assertEquals("resistor-power", failed.getAttribute("name"));
 		assertTrue(failed.getAttribute("classname").endsWith(LAB));
 		assertEquals(0, xml.getElementsByTagName("error").getLength());
+		// the counts CI pages read off the elements: one failing case among each design's
+		Element lab = (Element) suites.item(0), all = (Element) xml.getElementsByTagName("testsuites").item(0);
+		int perDesign = lab.getElementsByTagName("testcase").getLength();
+		assertEquals(Integer.toString(perDesign), lab.getAttribute("tests"));
+		assertEquals("1", lab.getAttribute("failures"));
+		assertEquals("0", lab.getAttribute("errors"));
+		assertEquals(Integer.toString(2 * perDesign), all.getAttribute("tests"));
+		assertEquals("1", all.getAttribute("failures"));
+	}
+
+	/** A design below the folder Bulwark runs in is named by its path from there, not from the root. */
+	@Test
+	void junitNamesDesignsByTheirRelativePath() throws Exception {
+		String absolute = java.nio.file.Path.of("").toAbsolutePath().resolve("x/lab.bulwark").toString();
+		assertEquals("x/lab.bulwark", bulwark.check.report.JUnitReport.shown(absolute));
+		assertEquals("/elsewhere/lab.bulwark", bulwark.check.report.JUnitReport.shown("/elsewhere/lab.bulwark"));
 	}
 }
