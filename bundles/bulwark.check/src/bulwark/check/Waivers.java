@@ -53,8 +53,7 @@ final class Waivers {
 			}
 			if (w != null) {
 				used.add(w);
-				result.add(f.waivedAs(f.message() + " [waived by " + w.getWho() + " on " + w.getDate() + ": "
-						+ w.getJustification() + "]"));
+				result.add(f.waivedBy(w.getWho(), w.getDate(), w.getJustification()));
 			} else {
 				result.add(f);
 			}

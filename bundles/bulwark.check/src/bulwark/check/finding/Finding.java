@@ -60,6 +60,21 @@ public record Finding(RuleId rule, Concern concern, Severity severity, String me
 		return new Finding(rule, concern, severity, newMessage, subject, figure, detail, true);
 	}
 
+	private static final String WAIVED = " [waived by ";
+
+	/** The same finding accepted by a waiver: "… [waived by WHO on DATE: JUSTIFICATION]". */
+	public Finding waivedBy(String who, String date, String justification) {
+		return waivedAs(message + WAIVED + who + " on " + date + ": " + justification + "]");
+	}
+
+	/** The reason its waiver gave, for reports with a field of their own for it (SARIF's suppressions). */
+	public Optional<String> justification() {
+		int at = waived ? message.lastIndexOf(WAIVED) : -1;
+		int colon = at < 0 ? -1 : message.indexOf(": ", message.indexOf(" on ", at + WAIVED.length()));
+		return colon < 0 || !message.endsWith("]") ? Optional.empty()
+				: Optional.of(message.substring(colon + 2, message.length() - 1));
+	}
+
 	/** The same finding with another message (a policy file's problem, prefixed by the file's name). */
 	public Finding saying(String newMessage) {
 		return new Finding(rule, concern, severity, newMessage, subject, figure, detail, waived);

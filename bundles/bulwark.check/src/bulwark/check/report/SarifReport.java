@@ -40,6 +40,14 @@ public final class SarifReport {
 		w.name("version").value("2.1.0");
 		w.name("runs").beginArray().beginObject();
 		Map<RuleId, Integer> index = tool(w, version, help);
+		// files below the folder Bulwark runs in are named from it, so that a log reads the same on every machine
+		w.name("originalUriBaseIds").beginObject().name(SRCROOT).beginObject()
+				.name("uri").value(Path.of("").toAbsolutePath().toUri().toString()).endObject().endObject();
+		w.name("properties").beginObject().name("policies").beginArray();
+		for (String policy : results.stream().map(DesignResult::policy).filter(p -> p != null).distinct().toList()) {
+			w.value(policy);
+		}
+		w.endArray().endObject();
 		w.name("invocations").beginArray().beginObject();
 		w.name("executionSuccessful").value(results.stream().noneMatch(r -> r.status() == Status.ERROR));
 		w.name("toolExecutionNotifications").beginArray();
@@ -102,7 +110,7 @@ public final class SarifReport {
 		w.name("level").value(level(f.severity()));
 		w.name("message").beginObject().name("text").value(f.message()).endObject();
 		w.name("locations").beginArray().beginObject().name("physicalLocation").beginObject();
-		w.name("artifactLocation").beginObject().name("uri").value(uri(r.file())).endObject();
+		artifact(w, r.file());
 		if (f.location().line() > 0) {
 			w.name("region").beginObject().name("startLine").value(f.location().line());
 			if (f.location().column() > 0) {
@@ -111,11 +119,16 @@ public final class SarifReport {
 			w.endObject();
 		}
 		w.endObject().endObject().endArray();
+		// what identifies the finding across edits that do not touch it: its rule and part, not its line or figures
+		w.name("partialFingerprints").beginObject().name("bulwarkFinding/v1").value(fingerprint(f)).endObject();
 		if (f.waived()) {
 			w.name("suppressions").beginArray().beginObject().name("kind").value("inSource").name("justification")
-					.value(f.message()).endObject().endArray();
+					.value(f.justification().orElse(f.message())).endObject().endArray();
 		}
 		w.name("properties").beginObject();
+		if (r.policy() != null) {
+			w.name("policy").value(r.policy());
+		}
 		w.name("concern").value(f.concern().id());
 		if (f.part() != null) {
 			w.name("part").value(f.part());
@@ -134,6 +147,34 @@ public final class SarifReport {
 		}
 		w.endObject();
 		w.endObject();
+	}
+
+	private static final String SRCROOT = "SRCROOT";
+
+	/** The file's location: relative to %SRCROOT% (the folder Bulwark runs in) when below it, else absolute. */
+	private static void artifact(JsonWriter w, String file) throws IOException {
+		w.name("artifactLocation").beginObject();
+		Path p = Path.of(file);
+		Path here = Path.of("").toAbsolutePath();
+		Path relative = !p.isAbsolute() ? p.normalize() : p.normalize().startsWith(here) ? here.relativize(p.normalize()) : null;
+		if (relative != null && !relative.startsWith("..")) {
+			w.name("uri").value(uri(relative.toString())).name("uriBaseId").value(SRCROOT);
+		} else {
+			w.name("uri").value(uri(file));
+		}
+		w.endObject();
+	}
+
+	/** The rule and the part (or, for a finding on no part, its message without its figures), hashed. */
+	static String fingerprint(Finding f) {
+		String subject = f.part() != null ? f.part() : f.message().replaceAll("[0-9.,]+", "#");
+		try {
+			byte[] hash = java.security.MessageDigest.getInstance("SHA-256")
+					.digest((f.rule().text() + "|" + subject).getBytes(java.nio.charset.StandardCharsets.UTF_8));
+			return java.util.HexFormat.of().formatHex(hash, 0, 16);
+		} catch (java.security.NoSuchAlgorithmException e) {
+			throw new IllegalStateException("SHA-256 is part of every Java runtime", e);
+		}
 	}
 
 	/** A relative path as written (forward slashes), as SARIF's artifact URIs are. */

@@ -69,6 +69,36 @@ class SarifSchemaTest {
 		}
 	}
 
+	/**
+	 * What code-scanning services need to follow a finding from one run to the next: a location relative to
+	 * a named base, a fingerprint that an unrelated edit (a comment that shifts every line) leaves alone, the
+	 * waiver's own reason as the suppression's, and the run's policy.
+	 */
+	@Test
+	void findingsCanBeFollowedAcrossRuns(@TempDir Path dir) throws Exception {
+		String design = """
+				design "waived"
+				reference net gnd
+				net a
+				source V1 (plus: a, minus: gnd) { voltage 24 V }
+				resistor R1 (a: a, b: gnd) { value 600 Ω package 0805 rated power 125 mW }
+				waive "resistor-power" on R1 because "a bench fixture, never left on" by "K. Ito" on "2026-12-04"
+				""";
+		Path file = Files.writeString(dir.resolve("w.bulwark"), design);
+		JsonNode before = JSON.readTree(sarif(file.toString()));
+		assertTrue(schema().validate(before).isEmpty(), schema().validate(before).toString());
+		JsonNode run = before.get("runs").get(0);
+		assertTrue(run.get("originalUriBaseIds").get("SRCROOT").get("uri").asText().startsWith("file:"));
+		assertEquals("built-in policy", run.get("properties").get("policies").get(0).asText());
+		JsonNode result = run.get("results").get(0);
+		assertEquals("a bench fixture, never left on", result.get("suppressions").get(0).get("justification").asText());
+		Files.writeString(file, "# a comment that moves every line\n" + design);
+		JsonNode after = JSON.readTree(sarif(file.toString())).get("runs").get(0).get("results").get(0);
+		assertEquals(result.get("partialFingerprints"), after.get("partialFingerprints"));
+		assertTrue(after.get("locations").get(0).get("physicalLocation").get("region").get("startLine").asInt()
+				!= result.get("locations").get(0).get("physicalLocation").get("region").get("startLine").asInt());
+	}
+
 	@Test
 	void hostileTextAndUnreadableFilesStillGiveValidLogs(@TempDir Path dir) throws Exception {
 		Path hostile = dir.resolve("hostile \"quote\".bulwark");
