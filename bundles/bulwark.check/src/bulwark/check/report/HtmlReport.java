@@ -36,17 +36,41 @@ public final class HtmlReport {
 		w.write("</style></head><body>\n<h1>Bulwark report</h1>\n");
 		w.write("<p class=\"caution\"><strong>" + escape(caution) + "</strong></p>\n");
 		w.write("<p>bulwark " + escape(version) + " — " + results.size() + " design(s)</p>\n");
-		for (DesignResult r : results) {
-			design(r, w);
+		if (results.size() > 1) {
+			// an index first: which designs failed, before scrolling through any of them
+			w.write("<table><tr><th>design</th><th>status</th><th>summary</th></tr>\n");
+			for (int i = 0; i < results.size(); i++) {
+				DesignResult r = results.get(i);
+				w.write("<tr><td><a href=\"#design-" + (i + 1) + "\">" + escape(r.title() == null ? r.file() : r.title())
+						+ "</a></td><td class=\"" + r.status().id() + "\">" + r.status().label() + "</td><td>"
+						+ escape(summary(r)) + "</td></tr>\n");
+			}
+			w.write("</table>\n");
+		}
+		for (int i = 0; i < results.size(); i++) {
+			design(results.get(i), i + 1, w);
 		}
 		w.write("</body></html>\n");
 		w.flush();
 	}
 
-	private static void design(DesignResult r, Writer w) throws IOException {
-		w.write("<h2>" + escape(r.title() == null ? r.file() : r.title()) + " <span class=\"" + r.status().id() + "\">"
-				+ r.status().label() + "</span></h2>\n<p>" + escape(r.file())
-				+ (r.policy() == null ? "" : " — review policy '" + escape(r.policy()) + "'") + "</p>\n");
+	/** "2 errors, 1 warning, 1 waived; most used: R_DROP at 1280 % of its power limit". */
+	static String summary(DesignResult r) {
+		long waived = r.findings().stream().filter(Finding::waived).count();
+		StringBuilder s = new StringBuilder(String.format(Locale.ROOT, "%d error(s), %d warning(s), %d waived",
+				r.count(bulwark.check.finding.Severity.ERROR), r.count(bulwark.check.finding.Severity.WARNING), waived));
+		r.stresses().stream().filter(x -> x.utilisation() != null)
+				.max(java.util.Comparator.comparingDouble(bulwark.check.WorstStress::utilisation))
+				.ifPresent(x -> s.append(String.format(Locale.ROOT, "; most used: %s at %.0f %% of its %s limit", x.part(),
+						100 * x.utilisation(), x.rating())));
+		return s.toString();
+	}
+
+	private static void design(DesignResult r, int number, Writer w) throws IOException {
+		w.write("<h2 id=\"design-" + number + "\">" + escape(r.title() == null ? r.file() : r.title()) + " <span class=\""
+				+ r.status().id() + "\">" + r.status().label() + "</span></h2>\n<p>" + escape(r.file())
+				+ (r.policy() == null ? "" : " — review policy '" + escape(r.policy()) + "'") + "</p>\n<p>"
+				+ escape(summary(r)) + "</p>\n");
 		if (r.findings().isEmpty()) {
 			w.write("<p>No findings.</p>\n");
 		} else {
@@ -136,10 +160,16 @@ public final class HtmlReport {
 
 	/** Horizontal bars, 100 % of the rating marked by a line, longer bars clipped at 200 % with the figure beside. */
 	static String bars(Map<String, PartStress> worst, Map<String, String> worstCase) {
-		int row = 22, label = 110, width = 400;
+		int row = 22, width = 400;
+		// wide enough for the longest name and the longest figure beside its bar: no label is ever cut off
+		// [common practice: 7 px a character is the width of sans-serif at 12 px, with room to spare]
+		int longestName = worst.keySet().stream().mapToInt(String::length).max().orElse(0);
+		int longestFigure = worst.entrySet().stream()
+				.mapToInt(e -> barFigure(e.getValue(), worstCase.get(e.getKey())).length()).max().orElse(0);
+		int label = Math.max(110, 7 * longestName + 10);
 		StringBuilder svg = new StringBuilder(String.format(Locale.ROOT,
 				"<svg width=\"%d\" height=\"%d\" role=\"img\" font-size=\"12\">",
-				label + width + 170, row * worst.size() + 10));
+				label + width + 6 + 7 * longestFigure + 10, row * worst.size() + 10));
 		int y = 5;
 		for (Map.Entry<String, PartStress> e : worst.entrySet()) {
 			double u = e.getValue().utilisation();
@@ -148,13 +178,21 @@ public final class HtmlReport {
 			svg.append(String.format(Locale.ROOT, "<text x=\"0\" y=\"%d\">%s</text>", y + 14, escape(e.getKey())));
 			svg.append(String.format(Locale.ROOT, "<rect x=\"%d\" y=\"%d\" width=\"%.1f\" height=\"16\" fill=\"%s\"/>", label,
 					y, shown / 2 * width, colour));
-			svg.append(String.format(Locale.ROOT, "<text x=\"%d\" y=\"%d\">%.0f %% (%s, %s)</text>", label + width + 6,
-					y + 14, 100 * u, escape(e.getValue().limiting()), escape(worstCase.get(e.getKey()))));
+			svg.append(String.format(Locale.ROOT, "<text x=\"%d\" y=\"%d\">%s</text>", label + width + 6,
+					y + 14, escape(barFigure(e.getValue(), worstCase.get(e.getKey())))));
 			y += row;
 		}
 		svg.append(String.format(Locale.ROOT, "<line x1=\"%d\" y1=\"0\" x2=\"%d\" y2=\"%d\" stroke=\"#333\"/>",
 				label + width / 2, label + width / 2, y));
 		return svg.append("</svg>\n").toString();
+	}
+
+	/** "231 % (power, case)", or past ten times the limit the factor: "51,200× (charge, case)". */
+	private static String barFigure(PartStress p, String caseName) {
+		double u = p.utilisation();
+		String share = u > 10 ? bulwark.check.figures.Figures.ofTheLimit(u, 1).replace(" the limit", "")
+				: String.format(Locale.ROOT, "%.0f %%", 100 * u);
+		return share + " (" + p.limiting() + ", " + caseName + ")";
 	}
 
 	/** Escapes text for HTML element content and attribute values. */

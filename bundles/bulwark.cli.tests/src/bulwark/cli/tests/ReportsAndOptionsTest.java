@@ -92,8 +92,35 @@ class ReportsAndOptionsTest {
 		assertTrue(!html.contains("<script"), "nothing from the design runs");
 		assertTrue(html.contains("IEC 61010-1"), "the safety caution");
 		assertTrue(html.contains("<svg") && html.contains(">R_DROP</text>"), "a utilisation bar for R_DROP");
-		assertTrue(html.contains("1280 % (power, normal, LAMP_OUT shorted to LAMP_RET)"), html);
+		assertTrue(html.contains("12.8× (power, normal, LAMP_OUT shorted to LAMP_RET)"), html);
 		assertTrue(!html.contains("http"), "nothing fetched from anywhere");
+	}
+
+	/** Several designs: an index first, each design with its summary line; every bar's figure fits its picture. */
+	@Test
+	void htmlOfSeveralDesignsHasAnIndexAndUncutBars() {
+		CliRun run = CliRun.of("check", "--format", "html", CliRun.root().resolve("examples").toString());
+		String html = run.out();
+		int index = html.indexOf("<th>design</th><th>status</th><th>summary</th>");
+		assertTrue(index > 0 && index < html.indexOf("<h2 id=\"design-1\">"), "the index comes first");
+		for (int i = 1; i <= 6; i++) {
+			assertTrue(html.contains("href=\"#design-" + i + "\"") && html.contains("<h2 id=\"design-" + i + "\">"), "design " + i);
+		}
+		assertTrue(html.contains("error(s), ") && html.contains("; most used: R_DROP at 1280 % of its power limit"), html);
+		// each bar picture is wider than its longest figure needs at 7 px a character
+		java.util.regex.Matcher svg = java.util.regex.Pattern.compile("<svg width=\"(\\d+)\"[^>]*font-size=\"12\">(.*?)</svg>",
+				java.util.regex.Pattern.DOTALL).matcher(html);
+		int pictures = 0;
+		while (svg.find()) {
+			java.util.regex.Matcher text = java.util.regex.Pattern.compile("<text x=\"(\\d+)\" y=\"\\d+\">([^<]*)</text>")
+					.matcher(svg.group(2));
+			while (text.find()) {
+				int end = Integer.parseInt(text.group(1)) + 7 * text.group(2).length();
+				assertTrue(end <= Integer.parseInt(svg.group(1)), "cut: " + text.group(2) + " ends at " + end + " of " + svg.group(1));
+			}
+			pictures++;
+		}
+		assertTrue(pictures > 0);
 	}
 
 	@Test
