@@ -10,7 +10,7 @@ import picocli.CommandLine.Command;
 @Command(name = "bulwark", versionProvider = Version.class,
 		description = { "Checks instrument input designs against their ratings and abuse at the terminals.", "",
 				bulwark.check.report.Caution.TEXT },
-		subcommands = { CheckCommand.class, ClassroomCommand.class, LspCommand.class, ToleranceCommand.class, SolveCommand.class, CompareCommand.class, ExplainCommand.class, DemoCommand.class,
+		subcommands = { CheckCommand.class, ClassroomCommand.class, LspCommand.class, ToleranceCommand.class, SolveCommand.class, CompareCommand.class, ExplainCommand.class, DemoCommand.class, WorkbenchCommand.class,
 				HelpTopicCommand.class },
 		footer = { "", "Exit codes: 0 no error finding, 1 error findings, 2 a design could not be checked, "
 				+ "3 usage error." })

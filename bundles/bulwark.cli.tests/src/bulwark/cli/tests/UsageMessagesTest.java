@@ -31,7 +31,7 @@ class UsageMessagesTest {
 	@Test
 	void anUnknownCommandIsNamedWithTheNearestOne() {
 		assertEquals("bulwark: 'chek' is not a command of bulwark (did you mean 'check'?); the commands are check, "
-				+ "classroom, lsp, tolerance, solve, compare, explain, demo, help", usageError("chek"));
+				+ "classroom, lsp, tolerance, solve, compare, explain, demo, workbench, help", usageError("chek"));
 	}
 
 	@Test
@@ -72,7 +72,8 @@ class UsageMessagesTest {
 	void helpIsInOurWordsEverywhere() {
 		List<String[]> asked = new java.util.ArrayList<>(List.of(new String[] { "--help" }, new String[] { "help" },
 				new String[] { "help", "help" }));
-		for (String command : List.of("check", "classroom", "lsp", "tolerance", "solve", "compare", "explain", "demo")) {
+		for (String command : List.of("check", "classroom", "lsp", "tolerance", "solve", "compare", "explain", "demo",
+				"workbench")) {
 			asked.add(new String[] { command, "--help" });
 			asked.add(new String[] { command, "-h" });
 		}
@@ -92,7 +93,8 @@ class UsageMessagesTest {
 
 	@Test
 	void everyCommandHasHelp() {
-		for (String command : List.of("check", "classroom", "lsp", "tolerance", "solve", "compare", "explain", "demo")) {
+		for (String command : List.of("check", "classroom", "lsp", "tolerance", "solve", "compare", "explain", "demo",
+				"workbench")) {
 			CliRun help = CliRun.of("help", command);
 			assertEquals(0, help.exitCode(), command + ": " + help.err());
 			assertTrue(help.out().contains("bulwark " + command), command + ": " + help.out());
