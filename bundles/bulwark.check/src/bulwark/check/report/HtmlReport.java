@@ -133,7 +133,7 @@ public final class HtmlReport {
 				+ "<th>test current</th><th>open-circuit voltage</th><th>comes on at</th><th>lights LEDs</th></tr>\n");
 		for (PairFigures p : f.pairs()) {
 			w.write("<tr><td>" + escape(p.from() + "–" + p.to()) + "</td><td>" + show(p.thresholdOhms(), "Ω") + "</td><td>"
-					+ (Double.valueOf(0).equals(p.hysteresisOhms()) ? "none" : show(p.hysteresisOhms(), "Ω")) + "</td><td>" + show(p.testCurrentAmps(), "A") + "</td><td>"
+					+ (Double.valueOf(0).equals(p.hysteresisOhms()) ? "none" : show(p.hysteresisOhms(), "Ω")) + "</td><td>" + current(p.testCurrentAmps()) + "</td><td>"
 					+ show(p.openVolts(), "V") + "</td><td>" + switchOn(p) + "</td><td>"
 					+ escape(String.join(", ", p.lightsLeds())) + "</td></tr>\n");
 		}
@@ -152,6 +152,16 @@ public final class HtmlReport {
 				w.write(SweepPlot.svg(p));
 			}
 		}
+	}
+
+	/**
+	 * Below a nanoampere, a current is what the junctions' minimum conductance (1 pS each, the engine's GMIN)
+	 * leaks at a few volts: solver noise, shown as ≈ 0 with the resolution that decided it.
+	 */
+	static final double NOISE_AMPS = 1e-9;
+
+	private static String current(double amps) {
+		return Math.abs(amps) < NOISE_AMPS ? "≈ 0 (below 1 nA)" : show(amps, "A");
 	}
 
 	private static String show(Double value, String unit) {

@@ -123,6 +123,21 @@ class ReportsAndOptionsTest {
 		assertTrue(pictures > 0);
 	}
 
+	/** A passive input pushes nothing into a short: read as ≈ 0 with the resolution, not as picoamperes of noise. */
+	@Test
+	void solverNoiseReadsAsNothing(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir) throws Exception {
+		java.nio.file.Path passive = java.nio.file.Files.writeString(dir.resolve("passive.bulwark"), """
+				design "passive"
+				reference net gnd
+				net tip
+				terminal TIP at tip
+				terminal COM at gnd common
+				resistor R1 (a: tip, b: gnd) { value 10 kΩ rated power 250 mW rated voltage 500 V }
+				""");
+		String html = CliRun.of("check", "--format", "html", passive.toString()).out();
+		assertTrue(html.contains("<td>≈ 0 (below 1 nA)</td>"), html);
+	}
+
 	@Test
 	void htmlShowsThePolicyTheFunctionAndTheSweep() {
 		CliRun run = CliRun.of("check", "--format", "html", CliRun.example("marina-bilge-switch-tester.bulwark"));
