@@ -81,9 +81,14 @@ final class ClassroomCommand implements Callable<Integer> {
 		List<String> pages = pageNames(files.stream().map(dir::relativize).toList());
 		for (int i = 0; i < files.size(); i++) {
 			String page = pages.get(i);
-			DesignResult result = results.get(i);
+			// the student's page names the design from the class's folder, never by where the teacher keeps it
+			DesignResult checked = results.get(i);
+			DesignResult result = new DesignResult(dir.relativize(files.get(i)).toString(), checked.title(), checked.status(),
+					checked.findings(), checked.cases(), checked.policy(), checked.stresses(), checked.function(),
+					checked.waveforms());
+			String title = (checked.title() == null ? result.file() : checked.title()) + " — feedback";
 			Checks.writeAtomically(target.resolve(page),
-					w -> HtmlReport.write(List.of(result), Version.get(), bulwark.check.report.Caution.TEXT, w));
+					w -> HtmlReport.write(List.of(result), Version.get(), bulwark.check.report.Caution.TEXT, title, w));
 		}
 		Checks.writeAtomically(target.resolve("summary.csv"), ClassSummary.csv(dir, files, results));
 		Checks.writeAtomically(target.resolve("summary.html"),

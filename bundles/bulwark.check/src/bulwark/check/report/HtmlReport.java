@@ -28,7 +28,14 @@ public final class HtmlReport {
 	}
 
 	public static void write(List<DesignResult> results, String version, String caution, Writer w) throws IOException {
-		w.write("<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\"><title>Bulwark report</title>\n<style>");
+		write(results, version, caution, "Bulwark report", w);
+	}
+
+	/** @param title the page's title, as a browser's tab shows it (a classroom page: the design's title) */
+	public static void write(List<DesignResult> results, String version, String caution, String title, Writer w)
+			throws IOException {
+		w.write("<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\"><title>" + escape(title)
+				+ "</title>\n<style>");
 		w.write("body{font-family:sans-serif;margin:2em;max-width:70em}table{border-collapse:collapse;margin:.5em 0}"
 				+ "td,th{border:1px solid #bbb;padding:.2em .5em;text-align:left;vertical-align:top}"
 				+ ".caution{border:2px solid #b23a48;padding:.6em}.pass{color:#4a7c59}.pass-unchecked{color:#8a6d1f}.fail,.error{color:#b23a48}"

@@ -45,6 +45,12 @@ class ClassroomCommandTest {
 		// the submission that does not parse still gets its page, with the error located
 		String cho = Files.readString(out.resolve("cho.html"));
 		assertTrue(cho.contains("<td>3:16</td><td>error</td><td>syntax</td>"), cho);
+		// a page names the design from the class's folder, never where the teacher keeps it, and is titled by it
+		String dev = Files.readString(out.resolve("group-b__dev.html"));
+		assertTrue(!dev.contains(dir.toString()), "an absolute path on a student's page: " + dev);
+		assertTrue(dev.contains("group-b/dev.bulwark") || dev.contains("group-b\\dev.bulwark"), dev);
+		String ana = Files.readString(out.resolve("ana.html"));
+		assertTrue(ana.contains("<title>=SUM(A1), &quot;divider&quot; — feedback</title>"), ana);
 		List<String> csv = Files.readAllLines(out.resolve("summary.csv"));
 		assertEquals(6, csv.size());
 		assertTrue(csv.get(5).contains("IEC 61010-1"), "the caution, last: " + csv.get(5));
