@@ -131,6 +131,19 @@ class SingleFaultRuleTest {
 		assertEquals(10 / 10e3, Math.abs(s.device("V1").current()), 1e-6);
 	}
 
+	/** A part the designer vouches for is not failed, and the report says so with the designer's reason. */
+	@Test
+	void aPartOfHighIntegrityIsNotFailedAndTheReasonIsShown() {
+		String vouched = TWO_EQUAL.replace("resistor R1 (a: in, b: mid) { value 10 kΩ rated power 2 W rated voltage 500 V } #! single-fault",
+				"resistor R1 (a: in, b: mid) { value 10 kΩ rated power 2 W rated voltage 500 V integrity high because \"a "
+						+ "fusible resistor that opens, never shorts\" }");
+		DesignResult r = Fixtures.check(vouched, ASKED_FOR);
+		List<Finding> found = r.findings().stream().filter(f -> f.rule().equals(SingleFaultRule.ID)).toList();
+		assertEquals(1, found.size(), found.toString());
+		assertEquals("R1 is not failed in the single-fault analysis: integrity high, because \"a fusible resistor that "
+				+ "opens, never shorts\"", found.get(0).message());
+	}
+
 	@Test
 	void notRunUnlessAskedFor() {
 		DesignResult r = Fixtures.check(TWO_EQUAL, Fixtures.policy("""

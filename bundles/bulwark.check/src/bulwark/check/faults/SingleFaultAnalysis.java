@@ -7,6 +7,7 @@ import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 
 import bulwark.check.budget.Budget;
@@ -27,8 +28,11 @@ import bulwark.lang.design.Part;
  * left to the check's own findings: the fault adds nothing to it. Faults run in parallel.
  */
 public final class SingleFaultAnalysis {
-	/** The outcome of every fault tried, in the design's order, and the parts no fault was tried on. */
-	public record Result(Map<Fault, List<FaultConsequence>> byFault, List<String> notFailed) {
+	/**
+	 * The outcome of every fault tried, in the design's order; the parts no fault was tried on; and the parts
+	 * the design keeps out with {@code integrity high}, each with its reason.
+	 */
+	public record Result(Map<Fault, List<FaultConsequence>> byFault, List<String> notFailed, Map<String, String> exempted) {
 		public int faultsTried() {
 			return byFault.size();
 		}
@@ -41,7 +45,13 @@ public final class SingleFaultAnalysis {
 		ReviewPolicy absolute = policy.notDerated();
 		List<Fault> faults = new ArrayList<>();
 		List<String> notFailed = new ArrayList<>();
+		Map<String, String> exempted = new LinkedHashMap<>();
 		for (Part part : design.parts().values()) {
+			Optional<String> reason = integrityReason(part);
+			if (reason.isPresent()) {
+				exempted.put(part.getName(), reason.get());
+				continue;
+			}
 			List<FailureMode> modes = FailureModes.of(part.getKind());
 			if (modes.isEmpty()) {
 				notFailed.add(part.getName());
@@ -63,7 +73,21 @@ public final class SingleFaultAnalysis {
 		for (int i = 0; i < faults.size(); i++) {
 			byFault.put(faults.get(i), found.get(i));
 		}
-		return new Result(byFault, notFailed);
+		return new Result(byFault, notFailed, exempted);
+	}
+
+	/** The reason a part is kept out ({@code integrity high because "…"}), its definition's included. */
+	static Optional<String> integrityReason(Part part) {
+		List<bulwark.lang.design.Setting> settings = new ArrayList<>(part.getSettings());
+		if (part.getBase() != null) {
+			settings.addAll(part.getBase().getSettings());
+		}
+		for (bulwark.lang.design.Setting s : settings) {
+			if (s instanceof bulwark.lang.design.Parameter p && "integrity".equals(p.getName()) && "high".equals(p.getWord())) {
+				return Optional.of(p.getReason() == null ? "" : p.getReason());
+			}
+		}
+		return Optional.empty();
 	}
 
 	/**

@@ -49,6 +49,11 @@ public final class SingleFaultRule implements FigureRule {
 			return;
 		}
 		SingleFaultAnalysis.Result result = SingleFaultAnalysis.run(context.design(), context.policy());
+		// what the designer kept out is listed, so that a reviewer reads the claim beside the analysis
+		result.exempted().forEach((name, reason) -> findings.accept(Finding.of(INFO, String.format(Locale.ROOT,
+				"%s is not failed in the single-fault analysis: integrity high, because \"%s\"", name, reason))
+				.withSeverity(bulwark.check.finding.Severity.INFO)
+				.about(name, null, Locations.of(context.design().parts().get(name), DesignPackage.Literals.MEMBER__NAME))));
 		for (Map.Entry<Fault, List<FaultConsequence>> e : result.byFault().entrySet()) {
 			List<FaultConsequence> consequences = e.getValue();
 			if (consequences.isEmpty()) {

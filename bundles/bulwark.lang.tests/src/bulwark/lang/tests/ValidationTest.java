@@ -35,6 +35,16 @@ class ValidationTest {
 				"value needs its unit: write for example 10 Ω");
 	}
 
+	/** integrity high keeps a part out of the single-fault analysis: only with its reason, and only it takes one. */
+	@Test
+	void integrityHighNeedsItsReason() throws Exception {
+		validation.assertNoErrors(parse("resistor R1 (a: a, b: gnd) { value 10 kΩ integrity high because \"fusible\" }"));
+		validation.assertError(parse("resistor R1 (a: a, b: gnd) { value 10 kΩ integrity high }"),
+				DesignPackage.Literals.PARAMETER, IssueCodes.VALUE_OUT_OF_RANGE, "needs its reason");
+		validation.assertError(parse("resistor R1 (a: a, b: gnd) { value 10 kΩ because \"x\" }"),
+				DesignPackage.Literals.PARAMETER, IssueCodes.UNKNOWN_PARAMETER, "only integrity takes a reason");
+	}
+
 	@Test
 	void plainNumberTakesNoUnit() throws Exception {
 		Design d = parse("npn Q1 (collector: a, base: a, emitter: gnd) { beta 100 V }");

@@ -157,7 +157,26 @@ public final class KindCatalog {
 	private KindCatalog() {
 	}
 
+	/**
+	 * What every kind may say of a part: {@code integrity high}, with its reason, keeps it out of the
+	 * single-fault analysis (a part the designer vouches cannot fail in the way the analysis would fail it).
+	 */
+	public static final SettingSpec INTEGRITY = SettingSpec.word("integrity",
+			"high keeps the part out of the single-fault analysis; say why with because \"…\"", List.of("high"));
+	private static final java.util.Map<PartKind, KindSpec> WITH_INTEGRITY = new java.util.EnumMap<>(PartKind.class);
+
 	public static KindSpec of(PartKind kind) {
+		synchronized (WITH_INTEGRITY) {
+			return WITH_INTEGRITY.computeIfAbsent(kind, k -> {
+				KindSpec base = base(k);
+				List<SettingSpec> parameters = new java.util.ArrayList<>(base.parameters());
+				parameters.add(INTEGRITY);
+				return new KindSpec(base.kind(), base.pins(), List.copyOf(parameters), base.ratings());
+			});
+		}
+	}
+
+	private static KindSpec base(PartKind kind) {
 		switch (kind) {
 		case RESISTOR:
 			return RESISTOR;

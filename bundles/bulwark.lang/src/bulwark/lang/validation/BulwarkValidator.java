@@ -191,8 +191,26 @@ public class BulwarkValidator extends AbstractBulwarkValidator {
 						IssueCodes.DUPLICATE_SETTING);
 			}
 			checkUnit(s, known.get());
+			if (s instanceof Parameter p) {
+				checkReason(p);
+			}
 		}
 		return parameters;
+	}
+
+	/** A reason belongs to integrity alone, and integrity high needs one: it is a claim a reviewer must read. */
+	private void checkReason(Parameter p) {
+		boolean integrity = KindCatalog.INTEGRITY.name().equals(p.getName());
+		if (integrity && p.getReason() == null) {
+			error("integrity high keeps " + "the part out of the single-fault analysis and needs its reason: write integrity high "
+					+ "because \"…\"", p, DesignPackage.Literals.SETTING__NAME, IssueCodes.VALUE_OUT_OF_RANGE);
+		} else if (!integrity && p.getReason() != null) {
+			error("only integrity takes a reason ('because'); " + p.getName() + " does not", p,
+					DesignPackage.Literals.PARAMETER__REASON, IssueCodes.UNKNOWN_PARAMETER);
+		} else if (integrity && p.getReason().isBlank()) {
+			error("integrity high needs a reason that says something", p, DesignPackage.Literals.PARAMETER__REASON,
+					IssueCodes.VALUE_OUT_OF_RANGE);
+		}
 	}
 
 	@Check
