@@ -76,6 +76,8 @@ class LibraryTest {
 	void aMissingLibraryIsALocatedError(@TempDir Path dir) throws IOException {
 		DesignResult r = Fixtures.checker().check(write(dir, "d.bulwark", DESIGN));
 		assertEquals(Status.ERROR, r.status());
+		// the folders looked in, as a person writes them, never a list's brackets
+		assertTrue(r.findings().stream().noneMatch(x -> x.message().contains("in [")), r.findings().toString());
 		Finding f = r.findings().stream().filter(x -> x.message().contains("no library file 'lib/parts.bulwark'"))
 				.findFirst().orElseThrow(() -> new AssertionError(r.findings().toString()));
 		assertEquals(2, f.location().line());

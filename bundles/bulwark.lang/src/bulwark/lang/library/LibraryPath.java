@@ -126,7 +126,10 @@ public final class LibraryPath {
 		if (escapes) {
 			return Located.refused(Refusal.OUTSIDE, "'" + written + "' leaves the design's folder; libraries stay in it or on the library path");
 		}
-		return Located.refused(Refusal.NOT_FOUND, "no library file '" + written + "' in " + roots);
+		// the folders looked in, as a person writes them (the design's own, then the library path's)
+		String where = roots.stream().map(String::valueOf).collect(java.util.stream.Collectors.joining(", "));
+		return Located.refused(Refusal.NOT_FOUND, "no library file '" + written + "' in "
+				+ (where.isEmpty() ? "any folder: the design has no folder and there is no library path" : where));
 	}
 
 	private static boolean tooLarge(Path file) {
