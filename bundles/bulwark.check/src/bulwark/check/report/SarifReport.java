@@ -160,7 +160,7 @@ public final class SarifReport {
 		if (relative != null && !relative.startsWith("..")) {
 			w.name("uri").value(uri(relative.toString())).name("uriBaseId").value(SRCROOT);
 		} else {
-			w.name("uri").value(uri(file));
+			w.name("uri").value(uri(p.toAbsolutePath().normalize().toString())); // outside the base: absolute
 		}
 		w.endObject();
 	}
