@@ -62,7 +62,8 @@ final class SolverFindings {
 
 	/**
 	 * A case's source across two terminals meets an ideal source of the design's own across the same nets: say
-	 * which, and what mends it ("; V1 holds them as an ideal source: give it its internal resistance").
+	 * which, and what mends it ("; V1 holds those terminals as an ideal source, and the case applies another
+	 * across them: give it its internal resistance …").
 	 */
 	private static String idealAcross(CompiledDesign compiled, FaultCase c) {
 		java.util.Set<String> nets = new java.util.HashSet<>();
