@@ -44,9 +44,15 @@ final class CompareCommand implements Callable<Integer> {
 			return ExitCodes.NOT_CHECKED;
 		}
 		boolean newError = false;
-		for (Revisions.Change c : Revisions.compare(before, after)) {
+		java.util.List<Revisions.Change> changes = Revisions.compare(before, after);
+		for (Revisions.Change c : changes) {
 			out.printf(Locale.ROOT, "%-8s %s%n", c.kind(), c.text());
 			newError |= c.newError();
+		}
+		if (changes.isEmpty()) {
+			// said, not left blank: an empty output reads as a command that did nothing
+			out.println("no differences: the same findings, and every rated part's worst utilisation within "
+					+ String.format(Locale.ROOT, "%.1f", 100 * Revisions.NOTICEABLE) + " percentage points of what it was");
 		}
 		out.flush();
 		spec.commandLine().getErr().println("bulwark: " + bulwark.check.report.Caution.TEXT);

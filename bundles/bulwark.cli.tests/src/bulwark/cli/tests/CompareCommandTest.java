@@ -29,4 +29,14 @@ class CompareCommandTest {
 		assertTrue(back.out().contains("new      error resistor-power"), back.out());
 		assertTrue(back.out().contains("worse    R_DROP worst utilisation 80 % → 1280 %"), back.out());
 	}
+
+	/** Two revisions that check the same say so, rather than print nothing. */
+	@Test
+	void theSameDesignTwiceHasNoDifferences() {
+		String lab = CliRun.root().resolve("examples/lab-indicator-seeded.bulwark").toString();
+		CliRun run = CliRun.of("compare", lab, lab);
+		assertEquals(0, run.exitCode(), run.err());
+		assertEquals("no differences: the same findings, and every rated part's worst utilisation within 0.5 percentage "
+				+ "points of what it was", run.out().strip());
+	}
 }
