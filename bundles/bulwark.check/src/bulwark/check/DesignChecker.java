@@ -43,6 +43,10 @@ import bulwark.check.budget.Budget;
  * every rule runs. A design that cannot be checked ends with status error and a finding saying why.
  */
 public final class DesignChecker {
+	/** Findings by line, then column; a sort that keeps the order of findings at one place. */
+	private static final Comparator<Finding> IN_TEXT_ORDER = Comparator.comparingInt((Finding f) -> f.location().line())
+			.thenComparingInt(f -> f.location().column());
+
 	private final DesignLoader loader;
 	private final ReviewPolicy forcedPolicy;
 	private final PolicyFiles policies;
@@ -208,6 +212,8 @@ public final class DesignChecker {
 		Design design = loaded.design();
 		String title = design == null ? null : design.getTitle();
 		if (languageErrors || design == null) {
+			// in the text's order, as a reader goes through them (the validators report by kind of check)
+			findings.sort(IN_TEXT_ORDER);
 			return new Preparation.Stopped(new DesignResult(loaded.file(), title, Status.ERROR, findings, List.of()));
 		}
 		PolicyChoice choice = policyFor(design, loaded.file());
@@ -295,8 +301,7 @@ public final class DesignChecker {
 			readings.get(i).findings(f -> findings.add(set == null || f.severity() == set ? f : f.withSeverity(set)));
 		}
 		List<Finding> all = new ArrayList<>(Waivers.apply(design, findings, policy));
-		all.sort(Comparator.comparingInt((Finding f) -> f.location().line())
-				.thenComparingInt(f -> f.location().column()));
+		all.sort(IN_TEXT_ORDER);
 		Status status = !failures.isEmpty() ? Status.ERROR
 				: all.stream().anyMatch(f -> f.severity() == Severity.ERROR && !f.waived()) ? Status.FAIL
 						: all.stream().anyMatch(f -> f.rule().equals(bulwark.check.rules.RatingMissingRule.ID) && !f.waived())

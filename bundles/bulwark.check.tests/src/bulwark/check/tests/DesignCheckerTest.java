@@ -49,6 +49,24 @@ class DesignCheckerTest {
 		assertTrue(f.message().contains("resistance"), f.message());
 	}
 
+	/** A design's language errors come in the order of its text, whichever check of the language found them. */
+	@Test
+	void languageErrorsComeInTextOrder() {
+		DesignResult r = Fixtures.checkAllowingTrouble("""
+				design "mistakes"
+				reference net gnd
+				net tip
+				terminal T at tpi
+				resistor R1 (a: tip, b: gnd) { value 1 kΩ rated power 1 W package 1206 }
+				resistor R2 (a: tip, c: gnd) { value 1 kΩ rated powr 1 W }
+				waive "resistor-power" on R3 because "x" by "y" on "2026-12-04"
+				""", bulwark.check.policy.DefaultPolicy.POLICY);
+		assertEquals(Status.ERROR, r.status());
+		java.util.List<Integer> lines = r.findings().stream().map(f -> f.location().line()).toList();
+		assertTrue(lines.size() >= 4, r.findings().toString());
+		assertEquals(lines.stream().sorted().toList(), lines, r.findings().toString());
+	}
+
 	@Test
 	void floatingNetIsASolverFindingOnTheNet() {
 		DesignResult r = Fixtures.checkAllowingTrouble("""
