@@ -106,6 +106,36 @@ class RequirementRuleTest {
 				+ "not come on as a DC voltage across the terminals rises to 1 kV"), f.message());
 	}
 
+	/**
+	 * A battery tester whose LED is lit straight from the cell, whatever the terminals do: on with them shorted
+	 * or open, and on at the bottom of any voltage across them, so it shows nothing — an error, with no
+	 * requirement stated. (The same with its LED reversed across the terminals does switch: a voltage the other
+	 * way round lights it.)
+	 */
+	@Test
+	void aTesterThatNeverSwitchesIsAnError() {
+		String alwaysOn = """
+				design "probe whose LED is always on"
+				reference net gnd
+				net bat
+				net tip
+				net lamp
+				terminal TIP at tip
+				terminal COM at gnd common
+				battery B1 (plus: bat, minus: gnd) { emf 3 V resistance 10 Ω capacity 200 mAh }
+				resistor R1 (a: bat, b: tip) { value 1 kΩ package 1206 rated power 250 mW }
+				resistor R2 (a: bat, b: lamp) { value 470 Ω package 1206 rated power 250 mW }
+				led D1 (anode: lamp, cathode: gnd) { colour red rated reverse 5 V rated forward 20 mA rated power 100 mW }
+				""";
+		DesignResult r = Fixtures.checkAllowingTrouble(alwaysOn, Fixtures.AS_WRITTEN);
+		Finding f = r.findings().stream().filter(x -> x.rule().equals(ID) && x.message().startsWith("D1 never switches"))
+				.findFirst().orElseThrow(() -> new AssertionError(r.findings().toString()));
+		assertEquals(Severity.ERROR, f.severity());
+		assertTrue(f.message().contains("it stays on"), f.message());
+		// the continuity tester of the other tests switches, and is not said to be broken
+		Fixtures.check(CHECKER).findings().forEach(x -> assertTrue(!x.message().contains("never switches"), x.message()));
+	}
+
 	@Test
 	void silentWhenEveryRequirementIsMet() {
 		String met = Fixtures.replaced(Fixtures.replaced(CHECKER, "8766 h #! requirement", "8000 h"), "10 mA between CORE and SCREEN #! requirement", "15 mA between CORE and SCREEN");

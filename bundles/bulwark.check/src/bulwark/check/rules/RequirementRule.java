@@ -65,6 +65,17 @@ public final class RequirementRule implements FigureRule {
 		}
 		SourceLocation title = Locations.of(design, DesignPackage.Literals.DOCUMENT__TITLE);
 		String basis = "common practice for a battery-powered tester";
+		// a tester whose indicator never changes state — neither as the resistance across any pair of its
+		// terminals goes from a short to an open circuit, nor as a voltage across them rises — shows nothing
+		if (f.indicator() != null && !f.pairs().isEmpty() && f.problems().isEmpty()
+				&& f.pairs().stream().allMatch(p -> p.risingOhms() == null && p.fallingOhms() == null
+						&& p.forward().onVolts() == null && p.reverse().onVolts() == null)) {
+			boolean on = f.pairs().get(0).onWhenShorted();
+			findings.accept(Finding.of(INFO, String.format(Locale.ROOT, "%s never switches: it stays %s as the resistance "
+					+ "across each pair of terminals goes from a short to an open circuit, and as a voltage across them "
+					+ "rises to %s either way round, so the tester shows nothing", f.indicator(), on ? "on" : "off",
+					Figures.engineering(bulwark.check.function.VoltageSwitching.HIGHEST, "V"))).at(title));
+		}
 		if (!stated.contains("threshold") && f.pairs().stream().anyMatch(p -> p.thresholdOhms() != null)) {
 			judge(context, f, "threshold", DEFAULT_THRESHOLD_OHMS, true, null, null, Severity.WARNING, basis, title, findings);
 		}
