@@ -71,14 +71,13 @@ final class CaseReading implements CaseRunner.Sink {
 		if (context == null) {
 			start(solved);
 		}
-		List<PartStress> stresses = Stresses.of(compiled, c, solution, outcome.averagePower(), policy);
+		List<PartStress> stresses = worst.read(order, solved, policy);
 		results.put(order, new CaseResult(c.name(), c.kind().id(), true, stresses));
 		if (outcome.cycle() != null) {
 			// the part this waveform case stresses most, for plots
 			stresses.stream().filter(p -> p.utilisation() != null).max(Comparator.comparingDouble(PartStress::utilisation))
 					.ifPresent(p -> plot(order, p.utilisation(), WaveformTrace.of(c.name(), p.part(), outcome.cycle())));
 		}
-		worst.read(order, solved);
 		for (RuleReading r : readings) {
 			r.read(order, solved);
 		}

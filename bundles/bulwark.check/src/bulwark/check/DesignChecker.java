@@ -387,18 +387,20 @@ public final class DesignChecker {
 	private static DesignResult notChecked(LoadedDesign loaded, RuleInfo rule, String reason) {
 		SourceLocation title = loaded.design() == null ? SourceLocation.NONE
 				: Locations.of(loaded.design(), DesignPackage.Literals.DOCUMENT__TITLE);
-		return new DesignResult(loaded.file(), null, Status.ERROR, List.of(Finding.of(rule, reason).at(title)), List.of());
+		return notChecked(loaded.file(), rule, reason, title);
 	}
 
 	/** A design refused before it was read or checked: one finding saying why, status error. */
 	static DesignResult notChecked(String file, String reason, SourceLocation where) {
-		return new DesignResult(file, null, Status.ERROR,
-				List.of(Finding.of(CheckerRules.FILE, reason).at(where)), List.of());
+		return notChecked(file, CheckerRules.FILE, reason, where);
 	}
 
 	/** A design whose reading stopped before there was a design to place it on: the finding is at the file's start. */
 	private static DesignResult notChecked(String file, RuleInfo rule, String reason) {
-		return new DesignResult(file, null, Status.ERROR,
-				List.of(Finding.of(rule, reason).at(new SourceLocation(1, 1, 0, 0))), List.of());
+		return notChecked(file, rule, reason, new SourceLocation(1, 1, 0, 0));
+	}
+
+	private static DesignResult notChecked(String file, RuleInfo rule, String reason, SourceLocation where) {
+		return new DesignResult(file, null, Status.ERROR, List.of(Finding.of(rule, reason).at(where)), List.of());
 	}
 }

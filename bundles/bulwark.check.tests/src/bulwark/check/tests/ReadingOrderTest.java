@@ -87,7 +87,7 @@ class ReadingOrderTest {
 			CaseOutcome o = outcomes.get(i);
 			if (o.result() instanceof DcSolution s) {
 				SolvedCase c = new SolvedCase(o.faultCase(), s, o.pulseEnergy(), o.averagePower());
-				worst.read(i, c);
+				worst.read(i, c, policy);
 				readings.forEach(r -> r.read(i, c));
 			}
 		}

@@ -56,11 +56,16 @@ public final class Figures {
 		if (!Double.isFinite(factor) || Math.abs(factor) <= 10) {
 			return percentOf(value, limit) + " % of the limit";
 		}
-		java.math.BigDecimal rounded = new java.math.BigDecimal(factor).round(new java.math.MathContext(3));
+		return factor(factor) + " the limit";
+	}
+
+	/** A ratio as a factor of three significant figures, thousands grouped: "12.8×", "51,200×". */
+	public static String factor(double ratio) {
+		java.math.BigDecimal rounded = new java.math.BigDecimal(ratio).round(new java.math.MathContext(3));
 		String shown = rounded.abs().compareTo(java.math.BigDecimal.valueOf(1000)) >= 0
 				? String.format(Locale.ROOT, "%,d", rounded.longValue())
 				: rounded.stripTrailingZeros().toPlainString();
-		return shown + "× the limit";
+		return shown + "×";
 	}
 
 	/** {@code digits} significant figures with the prefix that puts the mantissa in [1, 1000). */

@@ -12,8 +12,8 @@ import bulwark.engine.solve.PreparedCircuit;
 /**
  * Where the indicator of a voltage indicator or logic input comes on as a DC voltage across a pair of terminals
  * rises from {@link #LOWEST} to {@link #HIGHEST}, and where it goes off again as the voltage falls back, each
- * sweep from the last solution (so a design with hysteresis stays on its branch), bisected to 0.1 % as the
- * threshold resistance is. Null where it does not switch within the range; {@code problem} says why a sweep
+ * sweep from the last solution (so a design with hysteresis stays on its branch), stepped and bisected as the
+ * threshold resistance is (FunctionAnalysis's steps, to 0.1 %). Null where it does not switch within the range; {@code problem} says why a sweep
  * could not run.
  */
 public record VoltageSwitching(Double onVolts, Double offVolts, String problem) {
@@ -22,8 +22,6 @@ public record VoltageSwitching(Double onVolts, Double offVolts, String problem) 
 	 * hand-held testers are rated for [common practice, docs/sources.md#tester-inputs].
 	 */
 	public static final double LOWEST = 0.1, HIGHEST = 1000;
-	static final int STEPS = 24;
-	static final double RELATIVE = 1e-3;
 
 	static final VoltageSwitching NONE = new VoltageSwitching(null, null, null);
 
@@ -39,14 +37,14 @@ public record VoltageSwitching(Double onVolts, Double offVolts, String problem) 
 			return NONE;
 		}
 		DcSweep sweep = new DcSweep(solver, prepared, name, v -> new VoltageSource(name, plus, minus, v, 0));
-		DcSweep.Threshold rising = sweep.threshold(LOWEST, HIGHEST, STEPS, indicator::on, RELATIVE);
+		DcSweep.Threshold rising = sweep.threshold(LOWEST, HIGHEST, FunctionAnalysis.STEPS, indicator::on, FunctionAnalysis.RELATIVE);
 		if (rising.failure() != null) {
 			return new VoltageSwitching(null, null, rising.failure().message());
 		}
 		if (rising.value().isEmpty()) {
 			return NONE;
 		}
-		DcSweep.Threshold falling = sweep.threshold(HIGHEST, LOWEST, STEPS, indicator::on, RELATIVE);
+		DcSweep.Threshold falling = sweep.threshold(HIGHEST, LOWEST, FunctionAnalysis.STEPS, indicator::on, FunctionAnalysis.RELATIVE);
 		if (falling.failure() != null) {
 			return new VoltageSwitching(rising.value().get(), null, falling.failure().message());
 		}

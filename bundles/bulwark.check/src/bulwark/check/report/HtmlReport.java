@@ -207,8 +207,7 @@ public final class HtmlReport {
 	/** "231 % (power, case)", or past ten times the limit the factor: "51,200× (charge, case)". */
 	private static String barFigure(PartStress p, String caseName) {
 		double u = p.utilisation();
-		String share = u > 10 ? bulwark.check.figures.Figures.ofTheLimit(u, 1).replace(" the limit", "")
-				: String.format(Locale.ROOT, "%.0f %%", 100 * u);
+		String share = u > 10 ? bulwark.check.figures.Figures.factor(u) : String.format(Locale.ROOT, "%.0f %%", 100 * u);
 		return share + " (" + p.limiting() + ", " + caseName + ")";
 	}
 

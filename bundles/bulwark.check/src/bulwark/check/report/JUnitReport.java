@@ -90,13 +90,7 @@ public final class JUnitReport {
 
 	/** A design file as the suite names it: relative to the folder Bulwark runs in, when it lies below it. */
 	public static String shown(String file) {
-		try {
-			java.nio.file.Path p = java.nio.file.Path.of(file);
-			java.nio.file.Path here = java.nio.file.Path.of("").toAbsolutePath();
-			return p.isAbsolute() && p.normalize().startsWith(here) ? here.relativize(p.normalize()).toString() : file;
-		} catch (java.nio.file.InvalidPathException e) {
-			return file;
-		}
+		return WorkingFolder.below(file).orElse(file);
 	}
 
 	/** The cases of one design: "language", "solver", then one per rule. */

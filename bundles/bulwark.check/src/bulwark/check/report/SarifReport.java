@@ -154,13 +154,11 @@ public final class SarifReport {
 	/** The file's location: relative to %SRCROOT% (the folder Bulwark runs in) when below it, else absolute. */
 	private static void artifact(JsonWriter w, String file) throws IOException {
 		w.name("artifactLocation").beginObject();
-		Path p = Path.of(file);
-		Path here = Path.of("").toAbsolutePath();
-		Path relative = !p.isAbsolute() ? p.normalize() : p.normalize().startsWith(here) ? here.relativize(p.normalize()) : null;
-		if (relative != null && !relative.startsWith("..")) {
-			w.name("uri").value(uri(relative.toString())).name("uriBaseId").value(SRCROOT);
+		java.util.Optional<String> relative = WorkingFolder.below(file);
+		if (relative.isPresent()) {
+			w.name("uri").value(uri(relative.get())).name("uriBaseId").value(SRCROOT);
 		} else {
-			w.name("uri").value(uri(p.toAbsolutePath().normalize().toString())); // outside the base: absolute
+			w.name("uri").value(uri(Path.of(file).toAbsolutePath().normalize().toString())); // outside the base: absolute
 		}
 		w.endObject();
 	}

@@ -1,11 +1,15 @@
 package bulwark.check.stress;
 
+import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
+import bulwark.check.cases.PartStress;
 import bulwark.check.cases.SolvedCase;
+import bulwark.check.policy.ReviewPolicy;
+import bulwark.engine.solve.OperatingPoint;
 import bulwark.lang.design.Part;
 import bulwark.lang.design.PartKind;
 
@@ -36,24 +40,42 @@ public final class WorstFigures {
 		}
 	}
 
-	/** Takes in one solved case; {@code order} is its place in the check's order. */
-	public void read(long order, SolvedCase c) {
+	/**
+	 * Takes in one solved case ({@code order} is its place in the check's order) and gives every part's figures
+	 * in it with its utilisation — the largest of its judged stresses over the derated limit of the same name —
+	 * each figure worked out once for both.
+	 */
+	public List<PartStress> read(long order, SolvedCase c, ReviewPolicy policy) {
+		List<PartStress> figures = new ArrayList<>(parts.size());
 		for (Part part : parts) {
 			String name = part.getName();
 			List<Measure> measures = StressCatalog.of(part.getKind());
 			Worst[] worst = stresses.get(name);
+			OperatingPoint point = c.solution().device(name);
+			Double utilisation = null;
+			String limiting = null;
 			for (int i = 0; i < worst.length; i++) {
 				Measure m = measures.get(i);
-				double v = m.judged(c, name);
-				if (!Double.isNaN(v) && (worst[i] == null || worst[i].beatenBy(v, order))) {
+				double v = m.judged(c.faultCase(), point, c.averagePower(), name);
+				if (Double.isNaN(v)) {
+					continue;
+				}
+				if (worst[i] == null || worst[i].beatenBy(v, order)) {
 					worst[i] = new Worst(v, c.faultCase().name(), m.what(c.faultCase()), order);
 				}
+				Optional<Limit> limit = Limits.of(part, m, policy);
+				if (limit.isPresent() && (utilisation == null || v / limit.get().value() > utilisation)) {
+					utilisation = v / limit.get().value();
+					limiting = m.rating();
+				}
 			}
+			figures.add(new PartStress(name, point.voltage(), point.current(), point.power(), utilisation, limiting));
 			Double e = c.pulseEnergy().get(name);
 			if (e != null && (!pulses.containsKey(name) || pulses.get(name).beatenBy(e, order))) {
 				pulses.put(name, new Worst(e, c.faultCase().name(), "pulse energy", order));
 			}
 		}
+		return figures;
 	}
 
 	/** The part's worst figure of this stress over every case read; empty when no case judged it. */
