@@ -89,6 +89,23 @@ class RequirementRuleTest {
 		assertTrue(f.message().startsWith("switch on voltage between TIP and COM is 10 V, required at most 9 V"), f.message());
 	}
 
+	/**
+	 * Without a named pair, every terminal with the common one must come on: a second input with no lamp of
+	 * its own never does, and the requirement is missed rather than judged on the first input alone.
+	 */
+	@Test
+	void everyPairMustComeOnWhenNoneIsNamed() {
+		String two = VOLTAGE_INDICATOR.replace("terminal COM at gnd common", """
+				terminal COM at gnd common
+				net spare
+				terminal AUX at spare
+				resistor R_AUX (a: spare, b: gnd) { value 100 kΩ package 2512 rated power 1 W rated voltage 1 kV }""");
+		DesignResult r = Fixtures.check(two + "require switch_on_voltage 12 V\n");
+		Finding f = Fixtures.only(r, ID);
+		assertEquals(Severity.ERROR, f.severity());
+		assertTrue(f.message().startsWith("switch on voltage (required: at most 12 V) is not met"), f.message());
+	}
+
 	@Test
 	void anLedLightsOneWayRoundOnly() {
 		String led = VOLTAGE_INDICATOR.replace(

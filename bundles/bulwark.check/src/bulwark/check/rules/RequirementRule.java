@@ -125,8 +125,9 @@ public final class RequirementRule implements FigureRule {
 		case "switch_on_voltage":
 			// a voltage indicator or logic input: on from this voltage up, the first terminal positive (each
 			// terminal with the common one when no pair is named)
-			figure = pairs.stream().map(p -> p.withPositive(from == null ? p.from() : from).onVolts())
-					.filter(x -> x != null).max(Double::compare);
+			// every pair must come on: one that never does misses the requirement, it is not left out
+			List<Double> on = pairs.stream().map(p -> p.withPositive(from == null ? p.from() : from).onVolts()).toList();
+			figure = on.isEmpty() || on.contains(null) ? Optional.empty() : on.stream().max(Double::compare);
 			unit = "V";
 			atMost = true;
 			break;
